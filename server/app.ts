@@ -1,0 +1,94 @@
+import 'reflect-metadata';
+import fs from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { DataSource } from 'typeorm';
+import { authRouter, type SignInLimit } from './features/auth/auth.router.js';
+import { AuthService } from './features/auth/auth.service.js';
+import { createLucia } from './features/auth/lucia.js';
+import { healthRouter } from './features/health/health.router.js';
+import { UsersService } from './features/users/users.service.js';
+import { usersRouter } from './features/users/users.router.js';
+import { VesselsService } from './features/vessels/vessels.service.js';
+import { vesselsRouter } from './features/vessels/vessels.router.js';
+import { systemClock, type Clock } from './lib/clock.js';
+import type { Logger } from './lib/logger.js';
+import { apiNotFound, errorHandler } from './middleware/error-handler.js';
+import { originCheck } from './middleware/origin-check.js';
+import { loadSession } from './middleware/session.js';
+
+export type AppDeps = {
+  dataSource: DataSource;
+  logger: Logger;
+  clock?: Clock;
+  /** Built client (dist/client); when absent the API is served alone. */
+  clientDir?: string;
+  /** Public origin (https://…) when behind a proxy; also decides Secure cookies. */
+  publicOrigin?: string;
+  signInLimit?: SignInLimit;
+  /** Largest JSON body accepted by ordinary routes. */
+  jsonLimit?: string;
+};
+
+/** Builds the Express app from its dependencies; `server/index.ts` listens, tests call it directly. */
+export function createApp(deps: AppDeps): Express {
+  const clock = deps.clock ?? systemClock;
+  const secure = deps.publicOrigin?.startsWith('https://') ?? false;
+  const lucia = createLucia(deps.dataSource, { secureCookies: secure });
+  const auth = new AuthService(deps.dataSource, lucia, clock);
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.use(helmet({
+    strictTransportSecurity: secure,
+    contentSecurityPolicy: {
+      directives: {
+        'img-src': ["'self'", 'data:', 'blob:'],
+        // On plain http (a laptop on the workshop LAN) upgrading would break every request.
+        'upgrade-insecure-requests': secure ? [] : null,
+      },
+    },
+  }));
+  app.use(pinoHttp({
+    logger: deps.logger,
+    autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+    serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }) },
+  }));
+
+  const api = express.Router();
+  api.use(express.json({ limit: deps.jsonLimit ?? '100kb' }));
+  api.use(originCheck(deps.publicOrigin));
+  api.use(loadSession(lucia));
+  api.use(healthRouter(deps.dataSource));
+  api.use('/auth', authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }));
+  api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin));
+  api.use(vesselsRouter(new VesselsService(deps.dataSource)));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
+  app.use(errorHandler(deps.logger));
+  return app;
+}
+
+function serveClient(app: Express, clientDir: string) {
+  app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: noCacheForEntryFiles }));
+  // Every other path is a client route: the app shell decides what to show.
+  app.get('/{*splat}', (_req, res) => {
+    res.setHeader('Cache-Control', 'no-cache');
+    res.sendFile(path.join(clientDir, 'index.html'));
+  });
+}
+
+/** Hashed assets may be cached; the shell and the service worker must always be revalidated. */
+function noCacheForEntryFiles(res: express.Response, filePath: string) {
+  const name = path.basename(filePath);
+  if (name === 'index.html' || name === 'sw.js' || name.endsWith('.webmanifest') || name === 'registerSW.js') {
+    res.setHeader('Cache-Control', 'no-cache');
+  } else if (filePath.includes(`${path.sep}assets${path.sep}`)) {
+    res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');
+  }
+}

@@ -1,0 +1,10 @@
+import 'reflect-metadata';
+import { loadConfig } from '../lib/config.js';
+import { openDatabase } from '../lib/database.js';
+import { seedDemo } from '../seed/seed.js';
+
+const config = loadConfig();
+const dataSource = await openDatabase(config.databasePath);
+const added = await seedDemo(dataSource);
+console.log(added ? `${config.databasePath}: demo workshop added.` : `${config.databasePath}: already holds data; nothing added (demo data goes only into a new database).`);
+await dataSource.destroy();

@@ -1,0 +1,16 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { migrationLevel } from '../../lib/database.js';
+
+export function healthRouter(dataSource: DataSource): Router {
+  const router = Router();
+  router.get('/health', async (_req, res) => {
+    try {
+      await dataSource.query('SELECT 1');
+      res.json({ status: 'ok', database: 'reachable', migrations: await migrationLevel(dataSource) });
+    } catch {
+      res.status(503).type('application/problem+json').json({ type: '/problems/database-unreachable', title: 'Database unreachable', status: 503 });
+    }
+  });
+  return router;
+}

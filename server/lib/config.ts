@@ -1,0 +1,45 @@
+import path from 'node:path';
+import { z } from 'zod';
+
+/** Runtime settings from the environment, with embedded defaults that work on a fresh machine. */
+const EnvSchema = z.object({
+  PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+  HOST: z.string().default('0.0.0.0'),
+  RINGSEAT_DB: z.string().default(path.join('data', 'ringseat.sqlite')),
+  RINGSEAT_DATA_DIR: z.string().default('data'),
+  /** Public origin when served behind a proxy, e.g. https://ringseat.example.org. */
+  RINGSEAT_ORIGIN: z.string().optional(),
+  NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  RINGSEAT_SEED: z.enum(['demo', 'none']).default('demo'),
+});
+
+export type AppConfig = {
+  port: number;
+  host: string;
+  databasePath: string;
+  dataDir: string;
+  publicOrigin?: string;
+  production: boolean;
+  logLevel: z.infer<typeof EnvSchema>['LOG_LEVEL'];
+  seed: 'demo' | 'none';
+};
+
+export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
+  const parsed = EnvSchema.safeParse(env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  const e = parsed.data;
+  return {
+    port: e.PORT,
+    host: e.HOST,
+    databasePath: e.RINGSEAT_DB,
+    dataDir: e.RINGSEAT_DATA_DIR,
+    publicOrigin: e.RINGSEAT_ORIGIN,
+    production: e.NODE_ENV === 'production',
+    logLevel: e.LOG_LEVEL,
+    seed: e.RINGSEAT_SEED,
+  };
+}

@@ -1,0 +1,150 @@
+/**
+ * Our own invented demo scenario: a small workshop on a fictional harbour, two skippers and
+ * three boats. Every name, serial number and figure here is made up for the demo.
+ */
+export const DEMO_PASSWORD = 'ringseat-demo';
+
+export const DEMO_WORKSHOP = {
+  name: 'Tidewright Marine Works',
+  address: 'Slipway 4, Kestrel Harbour',
+  email: 'desk@tidewright.example',
+  timezone: 'Europe/London',
+  units: { speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' },
+} as const;
+
+export const DEMO_USERS = [
+  { key: 'manager', email: 'maren@tidewright.example', name: 'Maren Holt', role: 'manager' },
+  { key: 'technician', email: 'ivo@tidewright.example', name: 'Ivo Brandt', role: 'technician' },
+  { key: 'skipperA', email: 'sunniva@skipper.example', name: 'Sunniva Okafor', role: 'skipper' },
+  { key: 'skipperB', email: 'tomas@skipper.example', name: 'Tomas Reyes', role: 'skipper' },
+] as const;
+
+type DemoEngine = {
+  position: 'single' | 'port' | 'starboard' | 'inboard';
+  installation: 'outboard' | 'inboard';
+  maker: string;
+  model: string;
+  serialNumber: string;
+  ratedPowerKw: number;
+  fuel: 'petrol' | 'diesel';
+  cycle: 'two-stroke' | 'four-stroke';
+  ratedRpmMin: number;
+  ratedRpmMax: number;
+  gearRatio: number;
+  propBlades: number;
+  propDiameterIn: number;
+  propPitchIn: number;
+  tachSource: 'charging-coil' | 'belt-alternator';
+  poles: number;
+  pulleyRatio: number | null;
+  hourMeterAtCommissioning: number;
+  commissionedOn: string;
+};
+
+const twinOutboard = (position: 'port' | 'starboard', serial: string): DemoEngine => ({
+  position,
+  installation: 'outboard',
+  maker: 'Norrvik',
+  model: 'NV-150 4S',
+  serialNumber: serial,
+  ratedPowerKw: 110,
+  fuel: 'petrol',
+  cycle: 'four-stroke',
+  ratedRpmMin: 5000,
+  ratedRpmMax: 6000,
+  gearRatio: 2.0,
+  propBlades: 3,
+  propDiameterIn: 14.75,
+  propPitchIn: 19,
+  tachSource: 'charging-coil',
+  poles: 12,
+  pulleyRatio: null,
+  hourMeterAtCommissioning: 1.1,
+  commissionedOn: '2026-11-24',
+});
+
+export const DEMO_VESSELS: Array<{
+  key: string;
+  name: string;
+  hin: string;
+  type: 'workboat' | 'sport-fishing' | 'sailing-yacht';
+  lengthM: number;
+  homePort: string;
+  skipper: 'skipperA' | 'skipperB';
+  engines: DemoEngine[];
+}> = [
+  {
+    key: 'gannet',
+    name: 'Gannet',
+    hin: 'TDW40217K526',
+    type: 'workboat',
+    lengthM: 5.8,
+    homePort: 'Kestrel Harbour',
+    skipper: 'skipperA',
+    engines: [
+      {
+        position: 'single',
+        installation: 'outboard',
+        maker: 'Norrvik',
+        model: 'NV-60 4S',
+        serialNumber: 'NV60-26-00418',
+        ratedPowerKw: 44,
+        fuel: 'petrol',
+        cycle: 'four-stroke',
+        ratedRpmMin: 5000,
+        ratedRpmMax: 6000,
+        gearRatio: 2.33,
+        propBlades: 3,
+        propDiameterIn: 11.6,
+        propPitchIn: 15,
+        tachSource: 'charging-coil',
+        poles: 12,
+        pulleyRatio: null,
+        hourMeterAtCommissioning: 0.4,
+        commissionedOn: '2026-11-20',
+      },
+    ],
+  },
+  {
+    key: 'blue-tern',
+    name: 'Blue Tern',
+    hin: 'SKF77310L526',
+    type: 'sport-fishing',
+    lengthM: 8.2,
+    homePort: 'Kestrel Harbour',
+    skipper: 'skipperA',
+    engines: [twinOutboard('port', 'NV150-26-01127'), twinOutboard('starboard', 'NV150-26-01131')],
+  },
+  {
+    key: 'halcyon-drift',
+    name: 'Halcyon Drift',
+    hin: 'HLD20983C626',
+    type: 'sailing-yacht',
+    lengthM: 10.4,
+    homePort: 'Marrow Point Marina',
+    skipper: 'skipperB',
+    engines: [
+      {
+        position: 'inboard',
+        installation: 'inboard',
+        maker: 'Brennholt',
+        model: 'B3-21 Marine',
+        serialNumber: 'B321-D-77841',
+        ratedPowerKw: 15.4,
+        fuel: 'diesel',
+        cycle: 'four-stroke',
+        ratedRpmMin: 3400,
+        ratedRpmMax: 3600,
+        gearRatio: 2.0,
+        propBlades: 2,
+        propDiameterIn: 15,
+        propPitchIn: 10,
+        tachSource: 'belt-alternator',
+        poles: 12,
+        pulleyRatio: 2.5,
+        hourMeterAtCommissioning: 2.0,
+        commissionedOn: '2026-11-27',
+      },
+    ],
+  },
+];

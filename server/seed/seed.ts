@@ -1,0 +1,46 @@
+import { randomUUID } from 'node:crypto';
+import type { DataSource, EntityManager } from 'typeorm';
+import { EngineInputSchema } from '../../shared/engines/engine.schema.js';
+import { VesselInputSchema } from '../../shared/vessels/vessel.schema.js';
+import { User } from '../features/users/user.entity.js';
+import { Engine } from '../features/vessels/engine.entity.js';
+import { VesselSkipper } from '../features/vessels/vessel-skipper.entity.js';
+import { Vessel } from '../features/vessels/vessel.entity.js';
+import { Workshop } from '../features/workshops/workshop.entity.js';
+import { hashPassword } from '../lib/passwords.js';
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS, DEMO_WORKSHOP } from './demo-data.js';
+
+/** True when the database holds no workshop yet: the only case in which demo data is added. */
+export async function isEmpty(dataSource: DataSource): Promise<boolean> {
+  return (await dataSource.getRepository(Workshop).count()) === 0;
+}
+
+/** Adds the demo workshop in one transaction. Returns false (and changes nothing) on a non-empty database. */
+export async function seedDemo(dataSource: DataSource): Promise<boolean> {
+  if (!(await isEmpty(dataSource))) return false;
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  await dataSource.transaction(async (manager) => {
+    const workshopId = randomUUID();
+    await manager.getRepository(Workshop).insert({ id: workshopId, ...DEMO_WORKSHOP, units: { ...DEMO_WORKSHOP.units } });
+    const userIds = new Map<string, string>();
+    for (const user of DEMO_USERS) {
+      const id = randomUUID();
+      userIds.set(user.key, id);
+      await manager.getRepository(User).insert({ id, workshopId, email: user.email, name: user.name, role: user.role, passwordHash, archivedAt: null });
+    }
+    for (const vessel of DEMO_VESSELS) await seedVessel(manager, workshopId, vessel, userIds.get(vessel.skipper)!);
+  });
+  return true;
+}
+
+async function seedVessel(manager: EntityManager, workshopId: string, vessel: (typeof DEMO_VESSELS)[number], skipperId: string) {
+  const vesselId = randomUUID();
+  // Demo data goes through the same schemas as user input, so it can never hold what a form would refuse.
+  const checked = VesselInputSchema.parse({ name: vessel.name, hin: vessel.hin, type: vessel.type, lengthM: vessel.lengthM, homePort: vessel.homePort });
+  await manager.getRepository(Vessel).insert({ id: vesselId, workshopId, ...checked, archivedAt: null });
+  await manager.getRepository(VesselSkipper).insert({ vesselId, userId: skipperId });
+  for (const engine of vessel.engines) {
+    const input = EngineInputSchema.parse({ ...engine, vesselId });
+    await manager.getRepository(Engine).insert({ id: randomUUID(), workshopId, ...input, archivedAt: null });
+  }
+}
