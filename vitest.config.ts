@@ -19,6 +19,18 @@ export default defineConfig({
       {
         extends: true,
         test: {
+          // Real server process + Debian chromium; see tests/e2e/global-setup.ts.
+          name: 'e2e',
+          environment: 'node',
+          include: ['tests/e2e/**/*.e2e.test.ts'],
+          globalSetup: ['tests/e2e/global-setup.ts'],
+          testTimeout: 60_000,
+          hookTimeout: 120_000,
+        },
+      },
+      {
+        extends: true,
+        test: {
           name: 'dom',
           environment: 'jsdom',
           include: ['src/**/*.test.{ts,tsx}'],

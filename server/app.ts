@@ -11,6 +11,7 @@ import { createLucia } from './features/auth/lucia.js';
 import { healthRouter } from './features/health/health.router.js';
 import { UsersService } from './features/users/users.service.js';
 import { usersRouter } from './features/users/users.router.js';
+import { workshopsRouter } from './features/workshops/workshops.router.js';
 import { VesselsService } from './features/vessels/vessels.service.js';
 import { vesselsRouter } from './features/vessels/vessels.router.js';
 import { systemClock, type Clock } from './lib/clock.js';
@@ -66,6 +67,7 @@ export function createApp(deps: AppDeps): Express {
   api.use('/auth', authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }));
   api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin));
   api.use(vesselsRouter(new VesselsService(deps.dataSource)));
+  api.use(workshopsRouter(deps.dataSource));
   api.use(apiNotFound);
   app.use('/api', api);
 

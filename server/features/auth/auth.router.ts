@@ -24,6 +24,8 @@ export function authRouter(service: AuthService, lucia: AppLucia, signInLimit: S
     limit: signInLimit.limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
+    // Only failures count: a crew signing in on one shared workshop tablet is not an attack.
+    skipSuccessfulRequests: true,
     handler: (req, res) => {
       const minutes = Math.ceil(signInLimit.windowMs / 60_000);
       const error = new HttpError(429, 'too-many-sign-ins', 'Too many sign-in attempts', `Too many attempts from this device. Wait ${minutes} minutes and try again.`);
