@@ -12,6 +12,10 @@ import { healthRouter } from './features/health/health.router.js';
 import { UsersService } from './features/users/users.service.js';
 import { usersRouter } from './features/users/users.router.js';
 import { workshopsRouter } from './features/workshops/workshops.router.js';
+import { ProgramsService } from './features/programs/programs.service.js';
+import { programsRouter } from './features/programs/programs.router.js';
+import { RunsService } from './features/runs/runs.service.js';
+import { runsRouter } from './features/runs/runs.router.js';
 import { VesselsService } from './features/vessels/vessels.service.js';
 import { vesselsRouter } from './features/vessels/vessels.router.js';
 import { systemClock, type Clock } from './lib/clock.js';
@@ -68,6 +72,8 @@ export function createApp(deps: AppDeps): Express {
   api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin));
   api.use(vesselsRouter(new VesselsService(deps.dataSource)));
   api.use(workshopsRouter(deps.dataSource));
+  api.use(programsRouter(new ProgramsService(deps.dataSource, clock)));
+  api.use(runsRouter(new RunsService(deps.dataSource)));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -1,3 +1,5 @@
+import { Program } from './features/programs/program.entity.js';
+import { Run } from './features/runs/run.entity.js';
 import { Session } from './features/auth/session.entity.js';
 import { Invite } from './features/users/invite.entity.js';
 import { User } from './features/users/user.entity.js';
@@ -7,4 +9,4 @@ import { Vessel } from './features/vessels/vessel.entity.js';
 import { Workshop } from './features/workshops/workshop.entity.js';
 
 /** Every entity of the schema; the data source and the migration generator both use this list. */
-export const ENTITIES = [Workshop, User, Session, Invite, Vessel, VesselSkipper, Engine];
+export const ENTITIES = [Workshop, User, Session, Invite, Vessel, VesselSkipper, Engine, Program, Run];

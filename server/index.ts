@@ -5,7 +5,7 @@ import { createApp } from './app.js';
 import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
 import { createLogger } from './lib/logger.js';
-import { seedDemo } from './seed/seed.js';
+import { prepareData } from './lib/bootstrap.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -13,7 +13,7 @@ async function main() {
   const config = loadConfig();
   const logger = createLogger(config.logLevel);
   const dataSource = await openDatabase(config.databasePath);
-  if (config.seed === 'demo' && (await seedDemo(dataSource))) {
+  if ((await prepareData(dataSource, { seed: config.seed })).seeded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
   const app = createApp({ dataSource, logger, clientDir: path.join(root, 'dist', 'client'), publicOrigin: config.publicOrigin });

@@ -1,10 +1,10 @@
 import 'reflect-metadata';
 import { loadConfig } from '../lib/config.js';
 import { openDatabase } from '../lib/database.js';
-import { seedDemo } from '../seed/seed.js';
+import { prepareData } from '../lib/bootstrap.js';
 
 const config = loadConfig();
 const dataSource = await openDatabase(config.databasePath);
-const added = await seedDemo(dataSource);
+const { seeded: added } = await prepareData(dataSource, { seed: 'demo' });
 console.log(added ? `${config.databasePath}: demo workshop added.` : `${config.databasePath}: already holds data; nothing added (demo data goes only into a new database).`);
 await dataSource.destroy();

@@ -1,4 +1,5 @@
 import { Foundation1796161893549 } from './1796161893549-Foundation.js';
+import { Programs1796162374272 } from './1796162374272-Programs.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
-export const MIGRATIONS: Function[] = [Foundation1796161893549];
+export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272];

@@ -8,7 +8,7 @@ import { createApp, type AppDeps } from '../../server/app.js';
 import type { Clock } from '../../server/lib/clock.js';
 import { openDatabase } from '../../server/lib/database.js';
 import { createLogger } from '../../server/lib/logger.js';
-import { seedDemo } from '../../server/seed/seed.js';
+import { prepareData } from '../../server/lib/bootstrap.js';
 import { DEMO_PASSWORD } from '../../server/seed/demo-data.js';
 
 export const HOST = 'ringseat.test';
@@ -34,7 +34,7 @@ export type TestServer = { app: Express; dataSource: DataSource; dir: string; cl
 export async function startTestServer(overrides: Partial<AppDeps> = {}, options: { seed?: boolean } = {}): Promise<TestServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-test-'));
   const dataSource = await openDatabase(path.join(dir, 'ringseat.sqlite'));
-  if (options.seed !== false) await seedDemo(dataSource);
+  await prepareData(dataSource, { seed: options.seed === false ? 'none' : 'demo' });
   const app = createApp({ dataSource, logger: createLogger('silent'), ...overrides });
   return {
     app,
@@ -61,3 +61,17 @@ export const DEMO = {
   skipperA: 'sunniva@skipper.example',
   skipperB: 'tomas@skipper.example',
 } as const;
+
+/** A second, unrelated workshop with one technician, for tenancy checks. */
+export async function addOtherWorkshop(dataSource: DataSource): Promise<{ workshopId: string; technicianEmail: string }> {
+  const { randomUUID } = await import('node:crypto');
+  const { Workshop } = await import('../../server/features/workshops/workshop.entity.js');
+  const { User } = await import('../../server/features/users/user.entity.js');
+  const { hashPassword } = await import('../../server/lib/passwords.js');
+  const workshopId = randomUUID();
+  await dataSource.getRepository(Workshop).insert({ id: workshopId, name: 'Other Yard Ltd', units: { speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' } });
+  const technicianEmail = `tech-${workshopId.slice(0, 8)}@other-yard.example`;
+  await dataSource.getRepository(User).insert({ id: randomUUID(), workshopId, email: technicianEmail, name: 'Other Technician', role: 'technician', passwordHash: await hashPassword(DEMO_PASSWORD), archivedAt: null });
+  await prepareData(dataSource, { seed: 'none' });
+  return { workshopId, technicianEmail };
+}

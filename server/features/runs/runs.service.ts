@@ -1,0 +1,90 @@
+import { randomUUID } from 'node:crypto';
+import { In, type DataSource, type EntityManager } from 'typeorm';
+import type { SessionUser } from '../../../shared/auth/auth.schema.js';
+import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
+import { checkProgramForEngine, resolvePhaseBand } from '../../../shared/programs/resolve-band.js';
+import { OPEN_RUN_STATES, type AssignProgramInput } from '../../../shared/runs/run.schema.js';
+import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { Program } from '../programs/program.entity.js';
+import { Engine } from '../vessels/engine.entity.js';
+import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
+import { Vessel } from '../vessels/vessel.entity.js';
+import { Run } from './run.entity.js';
+
+export class RunsService {
+  constructor(private readonly dataSource: DataSource) {}
+
+  /** Freezes a copy of the program, with its bands resolved for this engine, into a new planned run. */
+  async assign(user: SessionUser, input: AssignProgramInput): Promise<Run> {
+    return this.dataSource.transaction(async (manager) => {
+      const engine = await manager.getRepository(Engine).findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
+      if (!engine || engine.archivedAt) throw new ValidationError([{ field: 'engineId', message: 'This engine is not in your workshop.' }]);
+      const program = await manager.getRepository(Program).findOne({ where: { id: input.programId, workshopId: user.workshopId } });
+      if (!program) throw new ValidationError([{ field: 'programId', message: 'This program is not in your workshop.' }]);
+      if (program.retiredAt) throw new ValidationError([{ field: 'programId', message: `"${program.name}" is retired and cannot be assigned.` }]);
+      const check = checkProgramForEngine(program.definition, engine);
+      if (!check.ok) throw new ValidationError(check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })), 'The program does not fit this engine.');
+      await this.refuseSecondOpenRun(manager, engine.id);
+      const bands: Record<string, RpmBand> = {};
+      for (const phase of program.definition.phases) bands[phase.id] = resolvePhaseBand(phase, engine);
+      const run = Object.assign(new Run(), {
+        id: randomUUID(), workshopId: user.workshopId, engineId: engine.id, vesselId: engine.vesselId, programId: program.id,
+        program: structuredClone(program.definition), bands, state: 'planned', assignedById: user.id, submittedAt: null, signedOffAt: null,
+      });
+      await manager.getRepository(Run).insert(run);
+      return run;
+    });
+  }
+
+  private async refuseSecondOpenRun(manager: EntityManager, engineId: string) {
+    const open = await manager.getRepository(Run).exists({ where: { engineId, state: In([...OPEN_RUN_STATES]) } });
+    if (open) {
+      throw new ConflictError('This engine already has a break-in run that is not signed off. Finish or sign off that one first.', [
+        { field: 'engineId', message: 'This engine already has an open break-in run.' },
+      ]);
+    }
+  }
+
+  /** Vessel ids the user may see: all of the workshop for staff, the linked ones for a skipper. */
+  private async visibleVesselIds(user: SessionUser): Promise<string[] | 'all'> {
+    if (user.role !== 'skipper') return 'all';
+    const links = await this.dataSource.getRepository(VesselSkipper).find({ where: { userId: user.id } });
+    return links.map((l) => l.vesselId);
+  }
+
+  async list(user: SessionUser) {
+    const visible = await this.visibleVesselIds(user);
+    const where = visible === 'all' ? { workshopId: user.workshopId } : { workshopId: user.workshopId, vesselId: In(visible) };
+    const runs = await this.dataSource.getRepository(Run).find({ where, relations: { engine: true }, order: { updatedAt: 'DESC' } });
+    const vessels = await this.dataSource.getRepository(Vessel).find({ where: { id: In([...new Set(runs.map((r) => r.vesselId))]) } });
+    const vesselName = new Map(vessels.map((v) => [v.id, v.name]));
+    return runs.map((run) => toRunView(run, vesselName.get(run.vesselId) ?? ''));
+  }
+
+  /** A run the user may see, or 404 (never 403, so ids of other workshops are not confirmed). */
+  async get(user: SessionUser, id: string) {
+    const run = await this.dataSource.getRepository(Run).findOne({ where: { id, workshopId: user.workshopId }, relations: { engine: true } });
+    const visible = await this.visibleVesselIds(user);
+    if (!run || (visible !== 'all' && !visible.includes(run.vesselId))) throw new NotFoundError('run', id);
+    const vessel = await this.dataSource.getRepository(Vessel).findOneOrFail({ where: { id: run.vesselId } });
+    return { ...toRunView(run, vessel.name), program: run.program, bands: run.bands };
+  }
+}
+
+function toRunView(run: Run, vesselName: string) {
+  const engine = run.engine!;
+  return {
+    id: run.id,
+    state: run.state,
+    vessel: { id: run.vesselId, name: vesselName },
+    engine: { id: engine.id, position: engine.position, maker: engine.maker, model: engine.model, serialNumber: engine.serialNumber, ratedRpmMin: engine.ratedRpmMin, ratedRpmMax: engine.ratedRpmMax },
+    programId: run.programId,
+    programName: run.program.name,
+    phaseCount: run.program.phases.length,
+    totalMinutes: run.program.phases.reduce((sum, p) => sum + p.requiredMinutes, 0),
+    submittedAt: run.submittedAt?.toISOString() ?? null,
+    signedOffAt: run.signedOffAt?.toISOString() ?? null,
+    createdAt: run.createdAt.toISOString(),
+    updatedAt: run.updatedAt.toISOString(),
+  };
+}
