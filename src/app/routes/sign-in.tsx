@@ -1,0 +1,22 @@
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { AuthFrame } from '../shell/auth-frame';
+import { safeNextPath } from '../shell/session';
+
+export function SignInRoute() {
+  const navigate = useNavigate();
+  const [params] = useSearchParams();
+  const next = safeNextPath(params.get('next'));
+
+  return (
+    <AuthFrame title="Sign in to Ringseat">
+      <title>Sign in · Ringseat</title>
+      <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
+      <p className="mt-5 text-sm text-muted">
+        New here? Your workshop sends you an invite link to set your password.
+      </p>
+    </AuthFrame>
+  );
+}
+
+export { SignInRoute as Component };

@@ -1,0 +1,54 @@
+import { useUsers } from '../../features/team/api';
+import { InviteForm } from '../../features/team/components/invite-form';
+import { PendingInvites, PeopleTable } from '../../features/team/components/team-lists';
+import { useVessels } from '../../features/vessels/api';
+import { ButtonLink } from '../../components/ui/button';
+import { Card } from '../../components/ui/card';
+import { LoadError, Loading } from '../../components/ui/status-message';
+import { useSessionUser } from '../shell/session';
+
+export function TeamRoute() {
+  const user = useSessionUser();
+  if (user.role !== 'manager') {
+    return (
+      <div className="flex flex-col gap-4">
+        <h1 className="text-3xl font-bold">Team</h1>
+        <p>Only the workshop&rsquo;s managers can see and invite people.</p>
+        <ButtonLink to="/" variant="secondary" className="self-start">Back to the start</ButtonLink>
+      </div>
+    );
+  }
+  return <ManagerTeam />;
+}
+
+function ManagerTeam() {
+  const team = useUsers();
+  const vessels = useVessels();
+  const vesselOptions = (vessels.data ?? []).map(({ id, name }) => ({ id, name }));
+
+  return (
+    <div className="flex flex-col gap-6">
+      <title>Team · Ringseat</title>
+      <h1 className="text-3xl font-bold">Team</h1>
+      <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
+        <div className="flex min-w-0 flex-col gap-6">
+          <section className="flex flex-col gap-3" aria-labelledby="people-heading">
+            <h2 id="people-heading" className="text-xl font-bold">People</h2>
+            {team.isPending && <Loading label="Loading people…" />}
+            {team.isError && <LoadError error={team.error} what="the team" onRetry={() => team.refetch()} />}
+            {team.data && <PeopleTable users={team.data.users} />}
+          </section>
+          <section className="flex flex-col gap-3" aria-labelledby="invites-heading">
+            <h2 id="invites-heading" className="text-xl font-bold">Pending invites</h2>
+            {team.data && <PendingInvites invites={team.data.invites} />}
+          </section>
+        </div>
+        <Card title="Invite someone" className="self-start">
+          <InviteForm vessels={vesselOptions} />
+        </Card>
+      </div>
+    </div>
+  );
+}
+
+export { TeamRoute as Component };

@@ -1,0 +1,17 @@
+import type { Role } from '../../../shared/auth/auth.schema';
+
+export type NavIcon = 'vessels' | 'workshop' | 'team';
+
+export interface NavItem {
+  label: string;
+  to: string;
+  icon: NavIcon;
+}
+
+/** Main navigation per role. Skippers see their own boats; staff see the workshop. */
+export function navItemsFor(role: Role): NavItem[] {
+  if (role === 'skipper') return [{ label: 'Vessels', to: '/', icon: 'vessels' }];
+  const items: NavItem[] = [{ label: 'Workshop', to: '/', icon: 'workshop' }];
+  if (role === 'manager') items.push({ label: 'Team', to: '/team', icon: 'team' });
+  return items;
+}

@@ -1,0 +1,73 @@
+import { useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import type { z } from 'zod';
+import { InviteInputSchema, ROLES, type InviteInput } from '../../../../shared/auth/auth.schema';
+import { errorMessage, isApiError } from '../../../lib/api-client';
+import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { roleLabel, useInvite, type SentInvite } from '../api';
+import { InviteLink } from './invite-link';
+import { VesselChoice, type VesselOption } from './vessel-choice';
+
+type InviteFormValues = z.input<typeof InviteInputSchema>;
+
+/** Invites a person to the workshop and shows the link to pass on. */
+export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
+  const invite = useInvite();
+  const [sent, setSent] = useState<SentInvite | null>(null);
+  const [refusal, setRefusal] = useState<string | null>(null);
+  const { register, control, handleSubmit, setError, reset, formState } = useForm<InviteFormValues, unknown, InviteInput>({
+    resolver: zodResolver(InviteInputSchema),
+    defaultValues: { email: '', role: 'skipper', vesselIds: [] },
+  });
+  const role = useWatch({ control, name: 'role' });
+
+  const onSubmit = handleSubmit((input) => {
+    setRefusal(null);
+    setSent(null);
+    const body = { ...input, vesselIds: input.role === 'skipper' ? input.vesselIds : [] };
+    invite.mutate(body, {
+      onSuccess: (result) => {
+        setSent(result);
+        reset();
+      },
+      onError: (error) => {
+        const leftOver = applyServerFieldErrors(error, setError, ['email', 'role', 'vesselIds']);
+        const onFieldsOnly = isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
+        if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+      },
+    });
+  });
+
+  return (
+    <div className="flex flex-col gap-4">
+      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
+        {refusal && <Alert title="Invite not sent">{refusal}</Alert>}
+        <TextField label="E-mail" type="email" autoComplete="off" autoCapitalize="none" spellCheck={false}
+          error={formState.errors.email?.message} {...register('email')} />
+        <SelectField label="Role" error={formState.errors.role?.message} {...register('role')}>
+          {ROLES.map((value) => (
+            <option key={value} value={value}>{roleLabel[value]}</option>
+          ))}
+        </SelectField>
+        {role === 'skipper' && vessels.length > 0 && (
+          <Controller
+            control={control}
+            name="vesselIds"
+            render={({ field, fieldState }) => (
+              <VesselChoice vessels={vessels} value={field.value ?? []} onChange={field.onChange}
+                error={fieldState.error?.message ?? formState.errors.vesselIds?.root?.message} />
+            )}
+          />
+        )}
+        <Button type="submit" pending={invite.isPending} pendingLabel="Sending invite…" className="self-start">
+          Send invite
+        </Button>
+      </form>
+      {sent && <InviteLink sent={sent} />}
+    </div>
+  );
+}

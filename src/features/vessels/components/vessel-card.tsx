@@ -1,0 +1,38 @@
+import { Card } from '../../../components/ui/card';
+import type { VesselSummary } from '../types';
+import { EngineDetails } from './engine-details';
+
+export function vesselFacts(vessel: VesselSummary): string {
+  const length = vessel.lengthM !== null ? `${vessel.lengthM} m` : null;
+  return [vessel.type, length, vessel.homePort].filter(Boolean).join(' · ');
+}
+
+/** A vessel and its engines. `showSkippers` is for workshop staff, who look after many boats. */
+export function VesselCard({ vessel, showSkippers = false }: { vessel: VesselSummary; showSkippers?: boolean }) {
+  return (
+    <Card title={vessel.name}>
+      <p className="text-muted">{vesselFacts(vessel)}</p>
+      <p className="mt-1">
+        <span className="text-muted">HIN </span>
+        <span className="figures break-all">{vessel.hin}</span>
+      </p>
+      {showSkippers && (
+        <p className="mt-1">
+          <span className="text-muted">Skippers </span>
+          {vessel.skippers.length ? vessel.skippers.map((s) => s.name).join(', ') : 'none linked yet'}
+        </p>
+      )}
+      {vessel.engines.length === 0 ? (
+        <p className="mt-3 text-muted">No engines recorded for this vessel yet.</p>
+      ) : (
+        <ul className="mt-3 grid gap-3 md:grid-cols-2" aria-label={`Engines of ${vessel.name}`}>
+          {vessel.engines.map((engine) => (
+            <li key={engine.id}>
+              <EngineDetails engine={engine} />
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
