@@ -1,5 +1,6 @@
 import { Foundation1796161893549 } from './1796161893549-Foundation.js';
 import { Programs1796162374272 } from './1796162374272-Programs.js';
+import { RunEvents1796163247780 } from './1796163247780-RunEvents.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
-export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272];
+export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272, RunEvents1796163247780];

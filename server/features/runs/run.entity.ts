@@ -45,6 +45,27 @@ export class Run {
   @Column('text')
   assignedById: string;
 
+  /** The phase the crew is on, as last set by a device or the workshop (last writer wins). */
+  @Column({ type: 'text', nullable: true })
+  currentPhaseId: string | null;
+
+  /** Free notes on the run, shared by skipper and workshop (last writer wins, see DEVELOPERS.md). */
+  @Column('text', { default: '' })
+  notes: string;
+
+  /** Largest gap seen between a device's clock and the server's on arrival, in ms (signed: + means device ahead). */
+  @Column({ type: 'integer', nullable: true })
+  clockSkewMs: number | null;
+
+  /** Device time of the newest event, epoch ms. */
+  @Column({ type: 'integer', nullable: true })
+  lastEventAt: number | null;
+
+  /** Change number of the last change to this row (see change_counter). */
+  @Index()
+  @Column({ type: 'integer', default: 0 })
+  seq: number;
+
   @Column({ type: 'datetime', nullable: true })
   submittedAt: Date | null;
 
