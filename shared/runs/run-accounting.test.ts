@@ -16,6 +16,14 @@ describe('attribution rule', () => {
     expect(phase.timeUnderMs).toBe(0);
   });
 
+  it('alerts and notes neither end a reading\'s hold nor count as time', () => {
+    const alert = { kind: 'alert' as const, id: '00000000-0000-4000-8000-0000000000a1', at: m(2), engineId: ENGINE, code: 'over-ceiling', message: 'Over the ceiling' };
+    const note = { kind: 'note' as const, id: '00000000-0000-4000-8000-0000000000a2', at: m(3), engineId: ENGINE, text: 'Chop picked up' };
+    const events = [start(m(0)), reading(m(0), 'half', 2000, 'half'), alert, note, stop(m(6))];
+    const [phase] = accountRun(events, phases).phases;
+    expect(phase.timeInBandMs).toBe(6 * MIN);
+  });
+
   it('a reading holds until the session stops', () => {
     const events = [start(m(0)), reading(m(1), 'half', 2000, 'half'), stop(m(5)), reading(m(7), 'half', 2000, 'half')];
     const account = accountRun(events, phases);

@@ -29,6 +29,28 @@ export const RpmSourceSchema = z.enum(['tachometer', 'frequency', 'estimate'], {
   error: 'How the rpm was obtained (rpmSource) must be tachometer, frequency or estimate.',
 });
 
+/**
+ * What a reading may carry beyond engine speed. The bounds are sanity limits of our own (no boat
+ * in scope does 80 kn or burns 400 L/h per engine), there to catch a slipped finger.
+ */
+const readingExtras = {
+  speedSource: z.enum(['gps', 'typed'], { error: 'Where the speed came from (speedSource) must be gps or typed.' }).optional(),
+  fuelLph: z
+    .number({ error: 'The fuel flow (fuelLph) must be a number of litres per hour.' })
+    .nonnegative({ error: 'The fuel flow (fuelLph) cannot be negative.' })
+    .max(400, { error: 'The fuel flow (fuelLph) must be at most 400 L/h.' })
+    .optional(),
+  hourMeter: z
+    .number({ error: 'The hour meter (hourMeter) must be a number of hours.' })
+    .nonnegative({ error: 'The hour meter (hourMeter) cannot be negative.' })
+    .max(100_000, { error: 'The hour meter (hourMeter) must be at most 100,000 h.' })
+    .optional(),
+  coolantOk: z.boolean({ error: 'The cooling-water tell-tale check (coolantOk) must be yes or no.' }).optional(),
+  lat: z.number().min(-90, { error: 'The latitude (lat) must be between -90 and 90.' }).max(90, { error: 'The latitude (lat) must be between -90 and 90.' }).optional(),
+  lon: z.number().min(-180, { error: 'The longitude (lon) must be between -180 and 180.' }).max(180, { error: 'The longitude (lon) must be between -180 and 180.' }).optional(),
+  note: z.string({ error: 'The note (note) must be text.' }).trim().max(1000, { error: 'The note (note) can have at most 1000 characters.' }).optional(),
+};
+
 export const ReadingSchema = z
   .object({
     kind: z.literal('reading'),
@@ -48,6 +70,7 @@ export const ReadingSchema = z
       .number({ error: 'The measured frequency (frequencyHz) must be a number of hertz.' })
       .positive({ error: 'The measured frequency (frequencyHz) must be more than zero.' })
       .optional(),
+    ...readingExtras,
   })
   .refine((r) => r.rpmSource !== 'frequency' || r.frequencyHz !== undefined, {
     error: 'Enter the measured frequency (frequencyHz) when the rpm comes from a frequency.',
@@ -59,9 +82,27 @@ export type Reading = z.infer<typeof ReadingSchema>;
 export const PhaseAdvanceSchema = z.object({ kind: z.literal('phase-advance'), ...eventBase, phaseId: phaseIdField });
 export type PhaseAdvance = z.infer<typeof PhaseAdvanceSchema>;
 
+/** A rule warning raised on the device (over the ceiling, full throttle too long…); logged, never counted as time. */
+export const AlertEventSchema = z.object({
+  kind: z.literal('alert'),
+  ...eventBase,
+  phaseId: phaseIdField.optional(),
+  code: z.string({ error: 'The alert code (code) must be text.' }).trim().min(1).max(64),
+  message: z.string({ error: 'The alert message (message) must be text.' }).trim().min(1).max(500),
+});
+export type AlertEvent = z.infer<typeof AlertEventSchema>;
+
+/** A free note by the crew or the workshop, tied to a moment of the run. */
+export const NoteEventSchema = z.object({
+  kind: z.literal('note'),
+  ...eventBase,
+  text: z.string({ error: 'Write the note (text).' }).trim().min(1, { error: 'Write the note (text).' }).max(2000, { error: 'The note (text) can have at most 2000 characters.' }),
+});
+export type NoteEvent = z.infer<typeof NoteEventSchema>;
+
 export const RunEventSchema = z.discriminatedUnion(
   'kind',
-  [SessionStartSchema, SessionStopSchema, ReadingSchema, PhaseAdvanceSchema],
-  { error: 'The event kind (kind) must be session-start, session-stop, reading or phase-advance.' },
+  [SessionStartSchema, SessionStopSchema, ReadingSchema, PhaseAdvanceSchema, AlertEventSchema, NoteEventSchema],
+  { error: 'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.' },
 );
 export type RunEvent = z.infer<typeof RunEventSchema>;

@@ -74,7 +74,7 @@ export const PROPERTY_PHASES: ResolvedPhase[] = [
 /** One step of a generated event stream: how long after the last event, and what. */
 export interface EventStep {
   dtMs: number;
-  kind: RunEvent['kind'];
+  kind: 'session-start' | 'session-stop' | 'reading' | 'phase-advance';
   id: string;
   rpm: number;
   throttle: ThrottlePosition;
@@ -89,7 +89,7 @@ export function eventsFromSteps(steps: readonly EventStep[]): RunEvent[] {
     const base = { id: step.id, at, engineId: ENGINE };
     if (step.kind === 'reading') return { ...base, kind: 'reading', phaseId: step.phaseId, rpm: step.rpm, throttle: step.throttle };
     if (step.kind === 'phase-advance') return { ...base, kind: 'phase-advance', phaseId: step.phaseId };
-    return { ...base, kind: step.kind };
+    return { ...base, kind: step.kind as 'session-start' | 'session-stop' };
   });
 }
 

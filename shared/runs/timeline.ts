@@ -79,7 +79,7 @@ function readInstant(ordered: readonly RunEvent[], from: number, instant: Instan
     if (event.kind === 'reading') instant.reading = event;
     else if (event.kind === 'session-start') instant.start = true;
     else if (event.kind === 'session-stop') instant.stop = true;
-    else instant.advance = true;
+    else if (event.kind === 'phase-advance') instant.advance = true;
   }
   return i;
 }
