@@ -59,7 +59,7 @@ describe('run event schemas', () => {
   it('reject an unknown event kind', () => {
     expect(firstIssue({ ...valid, kind: 'anchor-drop' })).toEqual({
       field: 'kind',
-      message: 'The event kind (kind) must be session-start, session-stop, reading or phase-advance.',
+      message: 'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.',
     });
   });
 });
