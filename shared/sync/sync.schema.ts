@@ -1,0 +1,80 @@
+import { z } from 'zod';
+import { RunEventSchema } from '../runs/run-event.schema';
+
+/*
+ * The sync protocol between a device and the server.
+ * Push: the device sends what waits in its outbox, in batches. Every item has an id made on
+ * the device; the server upserts by it, so a batch sent twice changes nothing the second time.
+ * Pull: the device asks for what changed after its cursor, a server change number (never a clock).
+ */
+
+export const MAX_PUSH_ITEMS = 500;
+
+/** A device-made event (reading, session start/stop, phase advance, alert, note) for one run. */
+export const EventItemSchema = z.object({
+  type: z.literal('event'),
+  runId: z.uuid({ error: 'The run (runId) must be a run id.' }),
+  event: RunEventSchema,
+});
+export type EventItem = z.infer<typeof EventItemSchema>;
+
+/**
+ * A change to the run itself. `id` makes it idempotent like an event. Fields left out are not
+ * changed. `submit` asks for the run to go to the workshop for review.
+ */
+export const RunPatchItemSchema = z.object({
+  type: z.literal('run-patch'),
+  id: z.uuid({ error: 'The change id (id) must be a UUID made on the device.' }),
+  runId: z.uuid({ error: 'The run (runId) must be a run id.' }),
+  at: z.number({ error: 'The change time (at) must be epoch milliseconds.' }).int().nonnegative(),
+  currentPhaseId: z.string().trim().min(1).max(64).optional(),
+  notes: z.string({ error: 'The run notes (notes) must be text.' }).max(4000, { error: 'The run notes (notes) can have at most 4000 characters.' }).optional(),
+  submit: z.literal(true).optional(),
+});
+export type RunPatchItem = z.infer<typeof RunPatchItemSchema>;
+
+/**
+ * Items are checked one by one on the server (an invalid item is rejected with its reason while
+ * the valid ones are stored), so the batch schema only checks the envelope.
+ */
+export const PushBatchSchema = z.object({
+  deviceId: z.uuid({ error: 'The device id (deviceId) must be a UUID.' }),
+  /** The device's clock when it sent the batch, to spot a device clock far off. */
+  sentAt: z.number({ error: 'The send time (sentAt) must be epoch milliseconds.' }).int().nonnegative(),
+  items: z
+    .array(z.unknown(), { error: 'The items (items) must be a list.' })
+    .min(1, { error: 'Send at least one item (items).' })
+    .max(MAX_PUSH_ITEMS, { error: `Send at most ${MAX_PUSH_ITEMS} items (items) per batch.` }),
+});
+export type PushBatch = z.infer<typeof PushBatchSchema>;
+
+export const PushItemSchema = z.discriminatedUnion('type', [EventItemSchema, RunPatchItemSchema], {
+  error: 'The item type (type) must be event or run-patch.',
+});
+export type PushItem = z.infer<typeof PushItemSchema>;
+
+/** stored: new and kept; duplicate: already had (nothing changed); rejected: not kept, see reason. */
+export const PushResultSchema = z.object({
+  id: z.string(),
+  status: z.enum(['stored', 'duplicate', 'rejected']),
+  reason: z.string().optional(),
+  field: z.string().optional(),
+});
+export type PushResult = z.infer<typeof PushResultSchema>;
+
+export const PushResponseSchema = z.object({
+  results: z.array(PushResultSchema),
+  serverTime: z.number(),
+});
+export type PushResponse = z.infer<typeof PushResponseSchema>;
+
+export const PullQuerySchema = z.object({
+  cursor: z.coerce.number({ error: 'The cursor (cursor) must be a whole number.' }).int().nonnegative().default(0),
+  limit: z.coerce.number().int().min(1).max(5000, { error: 'Ask for at most 5000 events (limit) at a time.' }).default(2000),
+});
+
+/** A day: a device clock further off than this is flagged on the run for the workshop. */
+export const CLOCK_SKEW_FLAG_MS = 24 * 60 * 60 * 1000;
+
+/** Id of a push item: the event's own id, or the patch id. */
+export const pushItemId = (item: PushItem): string => (item.type === 'event' ? item.event.id : item.id);
