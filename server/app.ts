@@ -16,6 +16,8 @@ import { ProgramsService } from './features/programs/programs.service.js';
 import { programsRouter } from './features/programs/programs.router.js';
 import { RunsService } from './features/runs/runs.service.js';
 import { runsRouter } from './features/runs/runs.router.js';
+import { SyncService } from './features/sync/sync.service.js';
+import { syncRouter } from './features/sync/sync.router.js';
 import { VesselsService } from './features/vessels/vessels.service.js';
 import { vesselsRouter } from './features/vessels/vessels.router.js';
 import { systemClock, type Clock } from './lib/clock.js';
@@ -64,13 +66,17 @@ export function createApp(deps: AppDeps): Express {
   }));
 
   const api = express.Router();
-  api.use(express.json({ limit: deps.jsonLimit ?? '100kb' }));
+  // Sync batches are larger than anything else: that route parses its own body with its own limit.
+  const json = express.json({ limit: deps.jsonLimit ?? '100kb' });
+  api.use((req, res, next) => (req.path === '/sync/push' ? next() : json(req, res, next)));
   api.use(originCheck(deps.publicOrigin));
   api.use(loadSession(lucia));
   api.use(healthRouter(deps.dataSource));
   api.use('/auth', authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }));
   api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin));
-  api.use(vesselsRouter(new VesselsService(deps.dataSource)));
+  const vessels = new VesselsService(deps.dataSource);
+  api.use(vesselsRouter(vessels));
+  api.use(syncRouter(new SyncService(deps.dataSource, clock, vessels)));
   api.use(workshopsRouter(deps.dataSource));
   api.use(programsRouter(new ProgramsService(deps.dataSource, clock)));
   api.use(runsRouter(new RunsService(deps.dataSource)));

@@ -7,9 +7,10 @@ import { OPEN_RUN_STATES, type AssignProgramInput } from '../../../shared/runs/r
 import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors.js';
 import { Program } from '../programs/program.entity.js';
 import { Engine } from '../vessels/engine.entity.js';
-import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
+import { visibleRunsWhere, visibleVesselIds } from './run-access.js';
 import { Run } from './run.entity.js';
+import { reserveChangeSeq } from '../sync/change-seq.js';
 
 export class RunsService {
   constructor(private readonly dataSource: DataSource) {}
@@ -30,6 +31,7 @@ export class RunsService {
       const run = Object.assign(new Run(), {
         id: randomUUID(), workshopId: user.workshopId, engineId: engine.id, vesselId: engine.vesselId, programId: program.id,
         program: structuredClone(program.definition), bands, state: 'planned', assignedById: user.id, submittedAt: null, signedOffAt: null,
+        currentPhaseId: null, notes: '', clockSkewMs: null, lastEventAt: null, seq: await reserveChangeSeq(manager),
       });
       await manager.getRepository(Run).insert(run);
       return run;
@@ -45,16 +47,8 @@ export class RunsService {
     }
   }
 
-  /** Vessel ids the user may see: all of the workshop for staff, the linked ones for a skipper. */
-  private async visibleVesselIds(user: SessionUser): Promise<string[] | 'all'> {
-    if (user.role !== 'skipper') return 'all';
-    const links = await this.dataSource.getRepository(VesselSkipper).find({ where: { userId: user.id } });
-    return links.map((l) => l.vesselId);
-  }
-
   async list(user: SessionUser) {
-    const visible = await this.visibleVesselIds(user);
-    const where = visible === 'all' ? { workshopId: user.workshopId } : { workshopId: user.workshopId, vesselId: In(visible) };
+    const where = await visibleRunsWhere(this.dataSource, user);
     const runs = await this.dataSource.getRepository(Run).find({ where, relations: { engine: true }, order: { updatedAt: 'DESC' } });
     const vessels = await this.dataSource.getRepository(Vessel).find({ where: { id: In([...new Set(runs.map((r) => r.vesselId))]) } });
     const vesselName = new Map(vessels.map((v) => [v.id, v.name]));
@@ -64,12 +58,15 @@ export class RunsService {
   /** A run the user may see, or 404 (never 403, so ids of other workshops are not confirmed). */
   async get(user: SessionUser, id: string) {
     const run = await this.dataSource.getRepository(Run).findOne({ where: { id, workshopId: user.workshopId }, relations: { engine: true } });
-    const visible = await this.visibleVesselIds(user);
+    const visible = await visibleVesselIds(this.dataSource, user);
     if (!run || (visible !== 'all' && !visible.includes(run.vesselId))) throw new NotFoundError('run', id);
     const vessel = await this.dataSource.getRepository(Vessel).findOneOrFail({ where: { id: run.vesselId } });
-    return { ...toRunView(run, vessel.name), program: run.program, bands: run.bands };
+    return toRunDetail(run, vessel.name);
   }
 }
+
+/** Everything a device needs to run and judge the break-in offline: the view plus the frozen program and bands. */
+export const toRunDetail = (run: Run, vesselName: string) => ({ ...toRunView(run, vesselName), program: run.program, bands: run.bands });
 
 function toRunView(run: Run, vesselName: string) {
   const engine = run.engine!;
@@ -82,6 +79,10 @@ function toRunView(run: Run, vesselName: string) {
     programName: run.program.name,
     phaseCount: run.program.phases.length,
     totalMinutes: run.program.phases.reduce((sum, p) => sum + p.requiredMinutes, 0),
+    currentPhaseId: run.currentPhaseId,
+    notes: run.notes,
+    clockSkewMs: run.clockSkewMs,
+    lastEventAt: run.lastEventAt,
     submittedAt: run.submittedAt?.toISOString() ?? null,
     signedOffAt: run.signedOffAt?.toISOString() ?? null,
     createdAt: run.createdAt.toISOString(),

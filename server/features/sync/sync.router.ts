@@ -1,0 +1,23 @@
+import express, { Router } from 'express';
+import { PullQuerySchema, PushBatchSchema } from '../../../shared/sync/sync.schema.js';
+import { currentUser, requireRole } from '../../middleware/require-role.js';
+import { validate } from '../../middleware/validate.js';
+import type { SyncService } from './sync.service.js';
+
+/** A batch of 500 readings is about 150 KB of JSON; 2 MB leaves room and still bounds memory. */
+const PUSH_BODY_LIMIT = '2mb';
+
+export function syncRouter(service: SyncService): Router {
+  const router = Router();
+
+  router.post('/sync/push', express.json({ limit: PUSH_BODY_LIMIT }), requireRole(), validate({ body: PushBatchSchema }), async (req, res) => {
+    res.json(await service.push(currentUser(res), req.body));
+  });
+
+  router.get('/sync/pull', requireRole(), validate({ query: PullQuerySchema }), async (_req, res) => {
+    const { cursor, limit } = res.locals.query as { cursor: number; limit: number };
+    res.json(await service.pull(currentUser(res), cursor, limit));
+  });
+
+  return router;
+}
