@@ -110,7 +110,7 @@ describe('push', () => {
 
 describe('pull', () => {
   it('returns each change once from a cursor', async () => {
-    const tech = await signedInAgent(server.app, DEMO.technician);
+    const tech = await skipper();
     const first = (await tech.get('/api/sync/pull?cursor=0')).body;
     const ids = first.events.map((e: { event: { id: string } }) => e.event.id);
     expect(new Set(ids).size).toBe(ids.length);
@@ -127,7 +127,7 @@ describe('pull', () => {
   });
 
   it('pages through events with a limit without losing or repeating any', async () => {
-    const tech = await signedInAgent(server.app, DEMO.technician);
+    const tech = await skipper();
     const seen: string[] = [];
     let cursor = 0;
     for (let page = 0; page < 50; page++) {
@@ -138,6 +138,15 @@ describe('pull', () => {
     }
     expect(new Set(seen).size).toBe(seen.length);
     expect(seen.length).toBe(await server.dataSource.getRepository(RunEventRow).count());
+  });
+
+  it('gives a workshop device only the runs still being logged', async () => {
+    const tech = await signedInAgent(server.app, DEMO.technician);
+    const body = (await tech.get('/api/sync/pull?cursor=0')).body;
+    expect(body.runIds).toContain(port.id);
+    expect(body.runIds).not.toContain(gannet.id); // signed off
+    expect(body.runIds).not.toContain(starboard.id); // with the workshop for review
+    expect(body.events.every((e: { runId: string }) => e.runId === port.id)).toBe(true);
   });
 });
 

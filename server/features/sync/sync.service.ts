@@ -13,6 +13,13 @@ import { ChangeCounter } from './change-counter.entity.js';
 import { applyItems, type Applied } from './apply-items.js';
 import { reserveChangeSeq } from './change-seq.js';
 
+/**
+ * A skipper's device holds all of their runs (they want to see verdicts and comments); a staff
+ * device only the runs still being logged, which is what the workshop runs on deck. The
+ * workshop reviews everything else online.
+ */
+const STAFF_DEVICE_STATES = ['planned', 'under-way', 'returned'] as const;
+
 type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
 
 /** Checks each item on its own: an invalid item is rejected with its reason, the others go on. */
@@ -39,7 +46,7 @@ export class SyncService {
    * a run it may no longer see or one newly shared with it.
    */
   async pull(user: SessionUser, cursor: number, limit: number) {
-    const where = await visibleRunsWhere(this.dataSource, user);
+    const where = { ...(await visibleRunsWhere(this.dataSource, user)), ...(user.role === 'skipper' ? {} : { state: In([...STAFF_DEVICE_STATES]) }) };
     const visible = await this.dataSource.getRepository(Run).find({ where, select: { id: true, seq: true } });
     const events = await this.changedEvents(user, visible.map((r) => r.id), cursor, limit);
     const more = events.length === limit;
@@ -61,9 +68,13 @@ export class SyncService {
   private async changedEvents(user: SessionUser, runIds: string[], cursor: number, limit: number) {
     if (runIds.length === 0) return [];
     type Row = { runId: string; receivedAt: number; body: string; seq: number };
-    // Staff see the whole workshop, so the workshop filter is enough; a skipper's few runs are listed.
+    // Staff devices carry the workshop's open runs; a subquery keeps the parameter list short.
     if (user.role !== 'skipper') {
-      return this.dataSource.query<Row[]>('SELECT "runId", "receivedAt", "body", "seq" FROM "run_event" WHERE "workshopId" = ? AND "seq" > ? ORDER BY "seq" LIMIT ?', [user.workshopId, cursor, limit]);
+      const states = STAFF_DEVICE_STATES.map(() => '?').join(', ');
+      return this.dataSource.query<Row[]>(
+        `SELECT "runId", "receivedAt", "body", "seq" FROM "run_event" WHERE "runId" IN (SELECT "id" FROM "run" WHERE "workshopId" = ? AND "state" IN (${states})) AND "seq" > ? ORDER BY "seq" LIMIT ?`,
+        [user.workshopId, ...STAFF_DEVICE_STATES, cursor, limit],
+      );
     }
     const marks = runIds.map(() => '?').join(', ');
     return this.dataSource.query<Row[]>(`SELECT "runId", "receivedAt", "body", "seq" FROM "run_event" WHERE "runId" IN (${marks}) AND "seq" > ? ORDER BY "seq" LIMIT ?`, [...runIds, cursor, limit]);

@@ -4,6 +4,8 @@ import { useSignOut } from '../../features/auth/api';
 import { Button } from '../../components/ui/button';
 import { ExitIcon, RingMark } from '../../components/ui/icons';
 import { errorMessage } from '../../lib/api-client';
+import { SyncPill } from '../../features/sync/components/sync-pill';
+import { SyncRunner } from '../../features/sync/components/sync-runner';
 import { DisplayModeMenu } from './display-mode-menu';
 import { MainNav } from './main-nav';
 
@@ -28,6 +30,8 @@ export function AppHeader({ user }: { user: SessionUser }) {
         </div>
         <MainNav role={user.role} />
         <div className="ml-auto flex items-center gap-2">
+          <SyncRunner />
+          <SyncPill />
           <DisplayModeMenu />
           <Button variant="secondary" className="px-3" pending={signOut.isPending}
             title={signOut.isError ? errorMessage(signOut.error) : undefined}

@@ -1,0 +1,114 @@
+import type { PushResponse } from '../../../shared/sync/sync.schema';
+import { api, isApiError } from '../api-client';
+import { db } from '../db';
+import { nextPushBatch, recordResults, rejectAll } from './outbox';
+import { uploadPendingPhotos, isFinalRefusal } from './photos';
+import { applyPull, type PullResponse } from './pull';
+import { getSyncStatus, setSyncStatus } from './sync-status';
+
+export { useSyncStatus } from './sync-status';
+
+const ONLINE_INTERVAL_MS = 60_000;
+const BACKOFF_BASE_MS = 2_000;
+const BACKOFF_MAX_MS = 5 * 60_000;
+
+async function deviceId(): Promise<string> {
+  const saved = (await db.meta.get('deviceId'))?.value as string | undefined;
+  if (saved) return saved;
+  const id = crypto.randomUUID();
+  await db.meta.put({ key: 'deviceId', value: id });
+  return id;
+}
+
+/** Sends every pending event and run change, one batch at a time, until the outbox is empty. */
+async function pushAll(): Promise<void> {
+  const device = await deviceId();
+  for (let round = 0; round < 1000; round++) {
+    const items = await nextPushBatch();
+    if (items.length === 0) return;
+    try {
+      const answer = await api.post<PushResponse>('/api/sync/push', { deviceId: device, sentAt: Date.now(), items });
+      await recordResults(items, answer.results);
+    } catch (error) {
+      if (isApiError(error) && isFinalRefusal(error.status)) await rejectAll(items, error.message);
+      else throw error;
+    }
+  }
+}
+
+async function pullAll(): Promise<void> {
+  for (let page = 0; page < 1000; page++) {
+    const cursor = ((await db.meta.get('pullCursor'))?.value as number | undefined) ?? 0;
+    const answer = await api.get<PullResponse>(`/api/sync/pull?cursor=${cursor}`);
+    const { needsFullPull } = await applyPull(answer);
+    if (needsFullPull) await db.meta.put({ key: 'pullCursor', value: 0 });
+    if (!answer.more && !needsFullPull) return;
+  }
+}
+
+let running: Promise<void> | null = null;
+let failures = 0;
+let retryTimer: ReturnType<typeof setTimeout> | undefined;
+
+/** One sync: push, photos, pull. Concurrent calls share the one in flight. */
+export function syncNow(): Promise<void> {
+  running ??= (async () => {
+    setSyncStatus({ syncing: true });
+    try {
+      await pushAll();
+      await uploadPendingPhotos();
+      await pullAll();
+      failures = 0;
+      setSyncStatus({ syncing: false, lastSyncAt: Date.now(), lastError: null, nextRetryAt: null });
+    } catch (error) {
+      failures++;
+      const delay = backoffDelay(failures);
+      setSyncStatus({ syncing: false, lastError: describe(error), nextRetryAt: Date.now() + delay });
+      clearTimeout(retryTimer);
+      retryTimer = setTimeout(() => void syncNow(), delay);
+    } finally {
+      running = null;
+    }
+  })();
+  return running;
+}
+
+/** Exponential backoff with full jitter between half and all of the step, capped at 5 minutes. */
+export function backoffDelay(failureCount: number, random = Math.random): number {
+  const step = Math.min(BACKOFF_MAX_MS, BACKOFF_BASE_MS * 2 ** Math.max(0, failureCount - 1));
+  return Math.round(step * (0.5 + random() * 0.5));
+}
+
+function describe(error: unknown): string {
+  if (isApiError(error)) {
+    if (error.isNetworkError) return 'No connection to the workshop server.';
+    if (error.status === 401) return 'Signed out: sign in again to send what is waiting.';
+    return error.message;
+  }
+  return 'Sync failed unexpectedly.';
+}
+
+let started = false;
+
+/** Syncs at start, when the network returns, when the app is shown again, and every minute while online. */
+export function startSync(): () => void {
+  if (started) return () => undefined;
+  started = true;
+  const kick = () => {
+    if (navigator.onLine) void syncNow();
+  };
+  const onVisible = () => document.visibilityState === 'visible' && kick();
+  window.addEventListener('online', kick);
+  document.addEventListener('visibilitychange', onVisible);
+  const timer = setInterval(kick, ONLINE_INTERVAL_MS);
+  kick();
+  return () => {
+    started = false;
+    window.removeEventListener('online', kick);
+    document.removeEventListener('visibilitychange', onVisible);
+    clearInterval(timer);
+    clearTimeout(retryTimer);
+  };
+}
+
+export const syncStatusNow = getSyncStatus;

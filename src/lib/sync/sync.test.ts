@@ -1,0 +1,81 @@
+import { beforeEach, describe, expect, it } from 'vitest';
+import { db, type EventRecord, type RunRecord } from '../db';
+import { nextPushBatch, outboxCounts, recordResults } from './outbox';
+import { applyPull, type PullResponse } from './pull';
+import { backoffDelay } from './sync-engine';
+
+const RUN = '11111111-1111-4111-8111-111111111111';
+const ENGINE = '22222222-2222-4222-8222-222222222222';
+
+function reading(id: string, at: number, sync: EventRecord['sync'] = 'pending'): EventRecord {
+  const event = { kind: 'reading' as const, id, at, engineId: ENGINE, phaseId: 'p1', rpm: 2500, throttle: 'half' as const };
+  return { id, runId: RUN, engineId: ENGINE, at, kind: 'reading', event, origin: 'device', sync, createdAt: at };
+}
+
+const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+
+beforeEach(async () => {
+  await db.delete();
+  await db.open();
+});
+
+describe('outbox', () => {
+  it('sends pending events oldest first, run changes after them, and nothing already synced', async () => {
+    await db.events.bulkAdd([reading(uuid(3), 3000), reading(uuid(1), 1000), reading(uuid(2), 2000, 'synced')]);
+    await db.runPatches.add({ id: uuid(9), runId: RUN, item: { type: 'run-patch', id: uuid(9), runId: RUN, at: 500, submit: true }, sync: 'pending', createdAt: 500 });
+    const batch = await nextPushBatch();
+    expect(batch.map((i) => (i.type === 'event' ? i.event.id : i.id))).toEqual([uuid(1), uuid(3), uuid(9)]);
+    expect(await nextPushBatch(1)).toHaveLength(1);
+  });
+
+  it('clears stored and already-had items, keeps refused ones with their reason', async () => {
+    await db.events.bulkAdd([reading(uuid(1), 1000), reading(uuid(2), 2000), reading(uuid(3), 3000)]);
+    const items = await nextPushBatch();
+    await recordResults(items, [
+      { id: uuid(1), status: 'stored' },
+      { id: uuid(2), status: 'duplicate' },
+      { id: uuid(3), status: 'rejected', reason: 'The engine speed (rpm) cannot be negative.' },
+    ]);
+    expect(await outboxCounts()).toEqual({ waiting: 0, rejected: 1 });
+    expect((await db.events.get(uuid(3)))?.rejectReason).toBe('The engine speed (rpm) cannot be negative.');
+    expect(await nextPushBatch()).toEqual([]);
+  });
+
+  it('leaves items waiting when the server gave no answer for them', async () => {
+    await db.events.bulkAdd([reading(uuid(1), 1000), reading(uuid(2), 2000)]);
+    await recordResults(await nextPushBatch(), [{ id: uuid(1), status: 'stored' }]);
+    expect(await outboxCounts()).toEqual({ waiting: 1, rejected: 0 });
+  });
+});
+
+describe('pull', () => {
+  const run = { id: RUN, state: 'under-way' } as RunRecord;
+  const page = (events: PullResponse['events'], runIds = [RUN]): PullResponse => ({ cursor: 42, more: false, runIds, runs: [run], events, vessels: [] });
+
+  it('adds events made elsewhere, confirms this device\'s own, and moves the cursor', async () => {
+    await db.events.add(reading(uuid(1), 1000));
+    const mine = (await db.events.get(uuid(1)))!.event;
+    const theirs = { ...mine, id: uuid(2), at: 2000 };
+    await applyPull(page([{ runId: RUN, receivedAt: 5000, event: mine }, { runId: RUN, receivedAt: 5000, event: theirs }]));
+    expect((await db.events.get(uuid(1)))).toMatchObject({ origin: 'device', sync: 'synced' });
+    expect((await db.events.get(uuid(2)))).toMatchObject({ origin: 'server', sync: 'synced' });
+    expect((await db.meta.get('pullCursor'))?.value).toBe(42);
+  });
+
+  it('drops runs no longer shared with this user and asks for a full pull when one is missing', async () => {
+    await db.runs.put({ ...run, id: uuid(7) });
+    const { needsFullPull } = await applyPull({ ...page([], [RUN, uuid(8)]), runs: [run] });
+    expect(await db.runs.get(uuid(7))).toBeUndefined();
+    expect(needsFullPull).toBe(true);
+  });
+});
+
+describe('retry timing', () => {
+  it('backs off exponentially with jitter and stops growing at five minutes', () => {
+    expect(backoffDelay(1, () => 0)).toBe(1000);
+    expect(backoffDelay(1, () => 1)).toBe(2000);
+    expect(backoffDelay(4, () => 1)).toBe(16_000);
+    expect(backoffDelay(30, () => 1)).toBe(300_000);
+    expect(backoffDelay(30, () => 0)).toBe(150_000);
+  });
+});
