@@ -4,6 +4,7 @@ import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { EventItem, PushItem, PushResult, RunPatchItem } from '../../../shared/sync/sync.schema.js';
 import type { Run } from '../runs/run.entity.js';
 import { reserveChangeSeq } from './change-seq.js';
+import { eventStore } from './event-store.js';
 import { RunPatchRow } from './run-patch.entity.js';
 
 export type Applied = { results: PushResult[]; touched: Set<Run> };
@@ -51,40 +52,28 @@ async function applyPatch(manager: EntityManager, ctx: Context, run: Run, patch:
   return { id: patch.id, status: 'stored' };
 }
 
-const EVENT_COLUMNS = ['id', 'runId', 'workshopId', 'engineId', 'kind', 'at', 'receivedAt', 'authorId', 'phaseId', 'rpm', 'throttle', 'body', 'seq'];
-// 13 parameters a row; SQLite allows 32,766 per statement, and smaller chunks keep statements cacheable.
-const ROWS_PER_INSERT = 250;
-
-/** Inserts the events that are new; `INSERT OR IGNORE … RETURNING` tells which ids were new. */
+/** Inserts the events that are new, each with its change number; returns the ids that were new. */
 async function insertEvents(manager: EntityManager, ctx: Context, candidates: Candidate[]): Promise<Set<string>> {
   const stored = new Set<string>();
   if (candidates.length === 0) return stored;
   let seq = await reserveChangeSeq(manager, candidates.length);
-  for (let from = 0; from < candidates.length; from += ROWS_PER_INSERT) {
-    const chunk = candidates.slice(from, from + ROWS_PER_INSERT);
-    const params: unknown[] = [];
-    for (const { item, run } of chunk) {
-      const e = item.event;
-      params.push(e.id, run.id, run.workshopId, e.engineId, e.kind, e.at, ctx.now, ctx.user.id,
-        'phaseId' in e ? (e.phaseId ?? null) : null, e.kind === 'reading' ? e.rpm : null, e.kind === 'reading' ? e.throttle : null, JSON.stringify(e), seq++);
-    }
-    const placeholders = chunk.map(() => `(${EVENT_COLUMNS.map(() => '?').join(', ')})`).join(', ');
-    const sql = `INSERT OR IGNORE INTO "run_event" (${EVENT_COLUMNS.map((c) => `"${c}"`).join(', ')}) VALUES ${placeholders} RETURNING "id"`;
-    const rows: Array<{ id: string }> = await manager.query(sql, params);
-    for (const row of rows) stored.add(row.id);
+  const store = eventStore(manager);
+  for (const { item, run } of candidates) {
+    const e = item.event;
+    const isReading = e.kind === 'reading';
+    const isNew = store.insert([
+      e.id, run.id, run.workshopId, e.engineId, e.kind, e.at, ctx.now, ctx.user.id,
+      'phaseId' in e ? (e.phaseId ?? null) : null, isReading ? e.rpm : null, isReading ? e.throttle : null, JSON.stringify(e), seq++,
+    ]);
+    if (isNew) stored.add(e.id);
   }
   return stored;
 }
 
 /** Ids already stored: a copy of something the server has is always "duplicate", even on a run now frozen. */
-async function existingEventIds(manager: EntityManager, ids: string[]): Promise<Set<string>> {
-  const existing = new Set<string>();
-  for (let from = 0; from < ids.length; from += 500) {
-    const chunk = ids.slice(from, from + 500);
-    const rows: Array<{ id: string }> = await manager.query(`SELECT "id" FROM "run_event" WHERE "id" IN (${chunk.map(() => '?').join(', ')})`, chunk);
-    for (const row of rows) existing.add(row.id);
-  }
-  return existing;
+function existingEventIds(manager: EntityManager, ids: string[]): Set<string> {
+  const store = eventStore(manager);
+  return new Set(ids.filter((id) => store.exists(id)));
 }
 
 function noteEventOnRun(run: Run, event: RunEvent) {
@@ -97,7 +86,7 @@ export async function applyItems(manager: EntityManager, ctx: Context): Promise<
   const results: PushResult[] = new Array(ctx.items.length);
   const touched = new Set<Run>();
   const candidates: Candidate[] = [];
-  const seen = await existingEventIds(manager, ctx.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])));
+  const seen = existingEventIds(manager, ctx.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])));
   for (const [index, item] of ctx.items.entries()) {
     const run = ctx.runs.get(item.runId)!;
     if (item.type === 'run-patch') {

@@ -1,0 +1,123 @@
+import 'reflect-metadata';
+import { randomUUID } from 'node:crypto';
+import fs from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+import Database from 'better-sqlite3';
+import { MAX_PUSH_ITEMS } from '../shared/sync/sync.schema.js';
+import { createApp } from '../server/app.js';
+import { prepareData } from '../server/lib/bootstrap.js';
+import { openDatabase } from '../server/lib/database.js';
+import { createLogger } from '../server/lib/logger.js';
+
+/*
+ * Issue target: pushing 10,000 readings through POST /api/sync/push, in batches as the device
+ * sends them, takes at most 3× the time of inserting the same rows straight into SQLite with
+ * better-sqlite3 in one transaction. Both are measured here, side by side, several times.
+ */
+const READINGS = 10_000;
+const ROUNDS = 5;
+const TARGET_RATIO = 3;
+
+const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-bench-sync-'));
+const dataSource = await openDatabase(path.join(dir, 'bench.sqlite'));
+await prepareData(dataSource, { seed: 'demo' });
+const app = createApp({ dataSource, logger: createLogger('silent') });
+const server = app.listen(0, '127.0.0.1');
+await new Promise((resolve) => server.once('listening', resolve));
+const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+
+async function call(pathname: string, cookie: string, body?: unknown) {
+  const res = await fetch(base + pathname, {
+    method: body === undefined ? 'GET' : 'POST',
+    headers: { 'content-type': 'application/json', origin: base, cookie },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  if (!res.ok) throw new Error(`${pathname}: ${res.status} ${await res.text()}`);
+  return res;
+}
+
+async function signIn(email: string) {
+  const res = await call('/api/auth/sign-in', '', { email, password: 'ringseat-demo' });
+  return res.headers.get('set-cookie')!.split(';')[0];
+}
+
+const tech = await signIn('ivo@tidewright.example');
+const skipper = await signIn('sunniva@skipper.example');
+const vessels = (await (await call('/api/vessels', tech)).json()).vessels;
+const programs = (await (await call('/api/programs', tech)).json()).programs;
+
+async function newRun(position: 'port' | 'starboard' | 'single', vesselName: string) {
+  const engine = vessels.find((v: { name: string }) => v.name === vesselName).engines.find((e: { position: string }) => e.position === position);
+  const program = programs.find((p: { builtInKey: string }) => p.builtInKey === 'four-stroke-outboard');
+  return (await (await call('/api/runs', tech, { engineId: engine.id, programId: program.id })).json()).run;
+}
+
+function readings(run: { id: string; engine: { id: string }; program: { phases: Array<{ id: string }> } }) {
+  const t0 = Date.parse('2026-12-01T08:00:00Z');
+  return Array.from({ length: READINGS }, (_, i) => ({
+    type: 'event' as const,
+    runId: run.id,
+    event: { kind: 'reading' as const, id: randomUUID(), at: t0 + i * 5000, engineId: run.engine.id, phaseId: run.program.phases[1].id, rpm: 2600 + (i % 40) * 10, throttle: 'half' as const },
+  }));
+}
+
+async function timePush(items: ReturnType<typeof readings>) {
+  const deviceId = randomUUID();
+  const started = performance.now();
+  for (let from = 0; from < items.length; from += MAX_PUSH_ITEMS) {
+    await call('/api/sync/push', skipper, { deviceId, sentAt: Date.now(), items: items.slice(from, from + MAX_PUSH_ITEMS) });
+  }
+  return performance.now() - started;
+}
+
+/** The same rows straight into a copy of the database (same tables, indexes and foreign keys). */
+async function timeRaw(items: ReturnType<typeof readings>, workshopId: string) {
+  const file = path.join(dir, `raw-${randomUUID()}.sqlite`);
+  await dataSource.query('VACUUM INTO ?', [file]);
+  const db = new Database(file);
+  db.pragma('journal_mode = WAL');
+  db.pragma('synchronous = NORMAL');
+  db.prepare('DELETE FROM run_event').run();
+  const insert = db.prepare('INSERT INTO run_event (id, runId, workshopId, engineId, kind, at, receivedAt, authorId, phaseId, rpm, throttle, body, seq) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)');
+  const started = performance.now();
+  db.transaction(() => {
+    items.forEach(({ runId, event }, i) => insert.run(event.id, runId, workshopId, event.engineId, event.kind, event.at, Date.now(), 'bench', event.phaseId, event.rpm, event.throttle, JSON.stringify(event), i + 1));
+  })();
+  const elapsed = performance.now() - started;
+  db.close();
+  return elapsed;
+}
+
+const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+const ratios: number[] = [];
+const pushes: number[] = [];
+const raws: number[] = [];
+const runSlots: Array<[('port' | 'starboard' | 'single'), string]> = [['single', 'Gannet'], ['port', 'Blue Tern'], ['starboard', 'Blue Tern']];
+for (let round = 0; round < ROUNDS; round++) {
+  const [position, vessel] = runSlots[round % runSlots.length];
+  if (round >= runSlots.length) await dataSource.query('UPDATE run SET state = ? WHERE engineId IN (SELECT id FROM engine WHERE position = ?)', ['signed-off', position]);
+  const run = await newRun(position, vessel);
+  const items = readings(run);
+  const [{ workshopId }] = await dataSource.query('SELECT workshopId FROM run WHERE id = ?', [run.id]);
+  const raw = await timeRaw(items, workshopId);
+  const push = await timePush(items);
+  raws.push(raw);
+  pushes.push(push);
+  ratios.push(push / raw);
+  console.log(`round ${round + 1}: push ${push.toFixed(0)} ms (${Math.ceil(READINGS / MAX_PUSH_ITEMS)} batches of ${MAX_PUSH_ITEMS}), raw insert ${raw.toFixed(0)} ms, ratio ${(push / raw).toFixed(2)}`);
+}
+const stored = (await dataSource.query('SELECT COUNT(*) AS n FROM run_event'))[0].n;
+server.close();
+await dataSource.destroy();
+fs.rmSync(dir, { recursive: true, force: true });
+
+const ratio = median(ratios);
+console.log(`sync push: ${READINGS} readings, median push ${median(pushes).toFixed(0)} ms, median raw ${median(raws).toFixed(0)} ms, median ratio ${ratio.toFixed(2)} (target ≤ ${TARGET_RATIO}); rows stored ${stored}`);
+if (stored !== READINGS * ROUNDS) {
+  console.log(`FAIL: expected ${READINGS * ROUNDS} rows`);
+  process.exit(1);
+}
+console.log(ratio <= TARGET_RATIO ? 'PASS' : 'FAIL');
+process.exit(ratio <= TARGET_RATIO ? 0 : 1);
