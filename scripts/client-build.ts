@@ -26,7 +26,11 @@ export function clientBuildIsCurrent(): boolean {
 export function ensureClientBuilt(log: (line: string) => void = console.log): void {
   if (clientBuildIsCurrent()) return;
   log('Building the client (vite build)…');
-  const result = spawnSync(process.execPath, [path.join('node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'], { stdio: 'inherit' });
+  const result = spawnSync(process.execPath, [path.join('node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'], {
+    stdio: 'inherit',
+    // Test runners set NODE_ENV=test, which would make Vite bundle React's development build.
+    env: { ...process.env, NODE_ENV: 'production' },
+  });
   if (result.status !== 0) throw new Error('vite build failed');
   fs.writeFileSync(STAMP, new Date().toISOString());
 }

@@ -22,10 +22,10 @@ export function SyncDetails({ onClose }: { onClose: () => void }) {
   const lines = useOutboxLines() ?? [];
   const status = useSyncStatus();
   const dialog = useRef<HTMLDialogElement>(null);
+  // No close in a cleanup: React's strict mode runs effects twice, and closing would fire onClose.
   useEffect(() => {
     const element = dialog.current;
-    element?.showModal?.();
-    return () => element?.close?.();
+    if (element && !element.open) element.showModal?.();
   }, []);
   const refused = lines.filter((l) => l.sync === 'rejected');
   const waiting = lines.filter((l) => l.sync === 'pending');
