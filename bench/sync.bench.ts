@@ -1,15 +1,8 @@
-import 'reflect-metadata';
 import { randomUUID } from 'node:crypto';
-import fs from 'node:fs';
-import type { AddressInfo } from 'node:net';
-import os from 'node:os';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import { MAX_PUSH_ITEMS } from '../shared/sync/sync.schema.js';
-import { createApp } from '../server/app.js';
-import { prepareData } from '../server/lib/bootstrap.js';
-import { openDatabase } from '../server/lib/database.js';
-import { createLogger } from '../server/lib/logger.js';
+import { startRealServer } from '../tests/helpers/real-server.js';
 
 /*
  * Issue target: pushing 10,000 readings through POST /api/sync/push, in batches as the device
@@ -20,13 +13,12 @@ const READINGS = 10_000;
 const ROUNDS = 5;
 const TARGET_RATIO = 3;
 
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-bench-sync-'));
-const dataSource = await openDatabase(path.join(dir, 'bench.sqlite'));
-await prepareData(dataSource, { seed: 'demo' });
-const app = createApp({ dataSource, logger: createLogger('silent') });
-const server = app.listen(0, '127.0.0.1');
-await new Promise((resolve) => server.once('listening', resolve));
-const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
+// The server runs in its own process, as in production, so the device side's work (building
+// and sending JSON) is not counted against it.
+const server = await startRealServer({ LOG_LEVEL: 'silent' });
+const base = server.baseURL;
+const databaseFile = path.join(server.dir, 'ringseat.sqlite');
+const reader = new Database(databaseFile);
 
 async function call(pathname: string, cookie: string, body?: unknown) {
   const res = await fetch(base + pathname, {
@@ -74,8 +66,8 @@ async function timePush(items: ReturnType<typeof readings>) {
 
 /** The same rows straight into a copy of the database (same tables, indexes and foreign keys). */
 async function timeRaw(items: ReturnType<typeof readings>, workshopId: string) {
-  const file = path.join(dir, `raw-${randomUUID()}.sqlite`);
-  await dataSource.query('VACUUM INTO ?', [file]);
+  const file = path.join(server.dir, `raw-${randomUUID()}.sqlite`);
+  reader.prepare('VACUUM INTO ?').run(file);
   const db = new Database(file);
   db.pragma('journal_mode = WAL');
   db.pragma('synchronous = NORMAL');
@@ -97,10 +89,14 @@ const raws: number[] = [];
 const runSlots: Array<[('port' | 'starboard' | 'single'), string]> = [['single', 'Gannet'], ['port', 'Blue Tern'], ['starboard', 'Blue Tern']];
 for (let round = 0; round < ROUNDS; round++) {
   const [position, vessel] = runSlots[round % runSlots.length];
-  if (round >= runSlots.length) await dataSource.query('UPDATE run SET state = ? WHERE engineId IN (SELECT id FROM engine WHERE position = ?)', ['signed-off', position]);
+  if (round >= runSlots.length) {
+    const writer = new Database(databaseFile);
+    writer.prepare('UPDATE run SET state = ? WHERE engineId IN (SELECT id FROM engine WHERE position = ?)').run('signed-off', position);
+    writer.close();
+  }
   const run = await newRun(position, vessel);
   const items = readings(run);
-  const [{ workshopId }] = await dataSource.query('SELECT workshopId FROM run WHERE id = ?', [run.id]);
+  const { workshopId } = reader.prepare('SELECT workshopId FROM run WHERE id = ?').get(run.id) as { workshopId: string };
   const raw = await timeRaw(items, workshopId);
   const push = await timePush(items);
   raws.push(raw);
@@ -108,10 +104,9 @@ for (let round = 0; round < ROUNDS; round++) {
   ratios.push(push / raw);
   console.log(`round ${round + 1}: push ${push.toFixed(0)} ms (${Math.ceil(READINGS / MAX_PUSH_ITEMS)} batches of ${MAX_PUSH_ITEMS}), raw insert ${raw.toFixed(0)} ms, ratio ${(push / raw).toFixed(2)}`);
 }
-const stored = (await dataSource.query('SELECT COUNT(*) AS n FROM run_event'))[0].n;
-server.close();
-await dataSource.destroy();
-fs.rmSync(dir, { recursive: true, force: true });
+const { n: stored } = reader.prepare("SELECT COUNT(*) AS n FROM run_event WHERE kind = 'reading'").get() as { n: number };
+reader.close();
+await server.stop();
 
 const ratio = median(ratios);
 console.log(`sync push: ${READINGS} readings, median push ${median(pushes).toFixed(0)} ms, median raw ${median(raws).toFixed(0)} ms, median ratio ${ratio.toFixed(2)} (target ≤ ${TARGET_RATIO}); rows stored ${stored}`);
