@@ -15,7 +15,7 @@ const TARGET_RATIO = 3;
 
 // The server runs in its own process, as in production, so the device side's work (building
 // and sending JSON) is not counted against it.
-const server = await startRealServer({ LOG_LEVEL: 'silent' });
+const server = await startRealServer({ LOG_LEVEL: 'silent', ...(process.env.PROFILE_SERVER ? { NODE_OPTIONS: '--cpu-prof --cpu-prof-dir=/tmp/sprof' } : {}) });
 const base = server.baseURL;
 const databaseFile = path.join(server.dir, 'ringseat.sqlite');
 const reader = new Database(databaseFile);
@@ -35,6 +35,7 @@ async function signIn(email: string) {
   return res.headers.get('set-cookie')!.split(';')[0];
 }
 
+const benchRunIds: string[] = [];
 const tech = await signIn('ivo@tidewright.example');
 const skipper = await signIn('sunniva@skipper.example');
 const vessels = (await (await call('/api/vessels', tech)).json()).vessels;
@@ -95,6 +96,7 @@ for (let round = 0; round < ROUNDS; round++) {
     writer.close();
   }
   const run = await newRun(position, vessel);
+  benchRunIds.push(run.id);
   const items = readings(run);
   const { workshopId } = reader.prepare('SELECT workshopId FROM run WHERE id = ?').get(run.id) as { workshopId: string };
   const raw = await timeRaw(items, workshopId);
@@ -104,7 +106,7 @@ for (let round = 0; round < ROUNDS; round++) {
   ratios.push(push / raw);
   console.log(`round ${round + 1}: push ${push.toFixed(0)} ms (${Math.ceil(READINGS / MAX_PUSH_ITEMS)} batches of ${MAX_PUSH_ITEMS}), raw insert ${raw.toFixed(0)} ms, ratio ${(push / raw).toFixed(2)}`);
 }
-const { n: stored } = reader.prepare("SELECT COUNT(*) AS n FROM run_event WHERE kind = 'reading'").get() as { n: number };
+const { n: stored } = reader.prepare(`SELECT COUNT(*) AS n FROM run_event WHERE runId IN (${benchRunIds.map(() => '?').join(', ')})`).get(...benchRunIds) as { n: number };
 reader.close();
 await server.stop();
 

@@ -8,7 +8,7 @@ import { RunEventSchema } from '../runs/run-event.schema';
  * Pull: the device asks for what changed after its cursor, a server change number (never a clock).
  */
 
-export const MAX_PUSH_ITEMS = 500;
+export const MAX_PUSH_ITEMS = 2000;
 
 /** A device-made event (reading, session start/stop, phase advance, alert, note) for one run. */
 export const EventItemSchema = z.object({

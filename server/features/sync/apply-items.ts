@@ -70,12 +70,6 @@ async function insertEvents(manager: EntityManager, ctx: Context, candidates: Ca
   return stored;
 }
 
-/** Ids already stored: a copy of something the server has is always "duplicate", even on a run now frozen. */
-function existingEventIds(manager: EntityManager, ids: string[]): Set<string> {
-  const store = eventStore(manager);
-  return new Set(ids.filter((id) => store.exists(id)));
-}
-
 function noteEventOnRun(run: Run, event: RunEvent) {
   if (run.state === 'planned' || run.state === 'returned') run.state = 'under-way';
   run.lastEventAt = Math.max(run.lastEventAt ?? 0, event.at);
@@ -86,7 +80,8 @@ export async function applyItems(manager: EntityManager, ctx: Context): Promise<
   const results: PushResult[] = new Array(ctx.items.length);
   const touched = new Set<Run>();
   const candidates: Candidate[] = [];
-  const seen = existingEventIds(manager, ctx.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])));
+  const seen = new Set<string>();
+  const store = eventStore(manager);
   for (const [index, item] of ctx.items.entries()) {
     const run = ctx.runs.get(item.runId)!;
     if (item.type === 'run-patch') {
@@ -94,8 +89,10 @@ export async function applyItems(manager: EntityManager, ctx: Context): Promise<
       if (results[index].status === 'stored') touched.add(run);
       continue;
     }
-    const refusal = seen.has(item.event.id) ? null : eventRefusal(run, item.event);
-    if (seen.has(item.event.id)) results[index] = { id: item.event.id, status: 'duplicate' };
+    const refusal = eventRefusal(run, item.event);
+    // A copy of something already stored is "duplicate" even on a run now frozen, so the device
+    // can clear it; only refused items need the look-up, the rest learn it from the insert.
+    if (seen.has(item.event.id) || (refusal && store.exists(item.event.id))) results[index] = { id: item.event.id, status: 'duplicate' };
     else if (refusal) results[index] = rejected(item.event.id, refusal.reason, refusal.field);
     else {
       seen.add(item.event.id);

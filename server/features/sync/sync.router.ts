@@ -4,8 +4,8 @@ import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { SyncService } from './sync.service.js';
 
-/** A batch of 500 readings is about 150 KB of JSON; 2 MB leaves room and still bounds memory. */
-const PUSH_BODY_LIMIT = '2mb';
+/** A batch of 2,000 readings is about 600 KB of JSON; 4 MB leaves room and still bounds memory. */
+const PUSH_BODY_LIMIT = '4mb';
 
 export function syncRouter(service: SyncService): Router {
   const router = Router();

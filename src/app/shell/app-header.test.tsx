@@ -26,19 +26,19 @@ const navLinkNames = () =>
 describe('AppHeader', () => {
   it('shows a manager Workshop and Team', () => {
     renderHeader('manager');
-    expect(navLinkNames()).toEqual(['Workshop', 'Team']);
+    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Deck', 'Team']);
     expect(screen.getByRole('link', { name: 'Team' })).toHaveAttribute('href', '/team');
   });
 
   it('shows a technician the workshop but not the team', () => {
     renderHeader('technician');
-    expect(navLinkNames()).toEqual(['Workshop']);
+    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Deck']);
     expect(screen.queryByRole('link', { name: 'Team' })).not.toBeInTheDocument();
   });
 
-  it('shows a skipper their vessels only', () => {
+  it('shows a skipper their vessels and the deck only', () => {
     renderHeader('skipper');
-    expect(navLinkNames()).toEqual(['Vessels']);
+    expect(navLinkNames()).toEqual(['Vessels', 'Deck']);
     expect(screen.queryByRole('link', { name: 'Team' })).not.toBeInTheDocument();
   });
 

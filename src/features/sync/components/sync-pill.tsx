@@ -1,6 +1,8 @@
-import { useState } from 'react';
+import { lazy, Suspense, useState } from 'react';
 import { useOutboxCounts, useSyncStatus } from '../api';
-import { SyncDetails } from './sync-details';
+
+// The details (and the date formatting they need) load only when someone opens them.
+const SyncDetails = lazy(() => import('./sync-details').then((m) => ({ default: m.SyncDetails })));
 
 /** Pill words; the shape (filled, outlined, dashed) says the same thing without colour. */
 function pillFace(waiting: number, rejected: number, syncing: boolean, failed: boolean) {
@@ -23,7 +25,11 @@ export function SyncPill() {
         className={`min-h-touch rounded-full border-2 px-3 text-sm font-semibold whitespace-nowrap ${face.style}`}>
         {face.text}
       </button>
-      {open && <SyncDetails onClose={() => setOpen(false)} />}
+      {open && (
+        <Suspense fallback={null}>
+          <SyncDetails onClose={() => setOpen(false)} />
+        </Suspense>
+      )}
     </>
   );
 }
