@@ -20,6 +20,20 @@ import { SyncService } from './features/sync/sync.service.js';
 import { syncRouter } from './features/sync/sync.router.js';
 import { VesselsService } from './features/vessels/vessels.service.js';
 import { vesselsRouter } from './features/vessels/vessels.router.js';
+import { EnginesService } from './features/vessels/engines.service.js';
+import { enginesRouter } from './features/vessels/engines.router.js';
+import { SkipperLinksService } from './features/vessels/skipper-links.service.js';
+import { ChecklistsService } from './features/checklists/checklists.service.js';
+import { checklistsRouter } from './features/checklists/checklists.router.js';
+import { AttachmentStorage } from './features/attachments/attachment-storage.js';
+import { AttachmentsService } from './features/attachments/attachments.service.js';
+import { attachmentsRouter } from './features/attachments/attachments.router.js';
+import { loadConfig } from './lib/config.js';
+import { devMailRouter } from './features/mail/dev-mail.router.js';
+import type { MailCatcher } from './features/mail/mail-catcher.js';
+import { Outbox } from './features/mail/outbox.js';
+import { reviewRoutes } from './features/review/review-routes.js';
+import type { Mailer } from './lib/mailer.js';
 import { systemClock, type Clock } from './lib/clock.js';
 import type { Logger } from './lib/logger.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
@@ -37,6 +51,12 @@ export type AppDeps = {
   signInLimit?: SignInLimit;
   /** Largest JSON body accepted by ordinary routes. */
   jsonLimit?: string;
+  /** Folder for uploads (`<dataDir>/uploads`); defaults to RINGSEAT_DATA_DIR. */
+  dataDir?: string;
+  /** Where e-mail goes (an SMTP server or the local catcher); without one nothing is sent and callers say so. */
+  mailer?: Mailer | null;
+  /** The local catcher, read by the managers' /dev/mail page (outside production only). */
+  mailbox?: MailCatcher;
 };
 
 /** Builds the Express app from its dependencies; `server/index.ts` listens, tests call it directly. */
@@ -73,15 +93,22 @@ export function createApp(deps: AppDeps): Express {
   api.use(loadSession(lucia));
   api.use(healthRouter(deps.dataSource));
   api.use('/auth', authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }));
-  api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin));
-  const vessels = new VesselsService(deps.dataSource);
-  api.use(vesselsRouter(vessels));
+  const outbox = new Outbox(deps.mailer ?? null, deps.logger);
+  api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin, outbox));
+  const vessels = new VesselsService(deps.dataSource, clock);
+  api.use(vesselsRouter(vessels, new SkipperLinksService(deps.dataSource, vessels)));
+  api.use(enginesRouter(new EnginesService(deps.dataSource, clock)));
+  api.use(checklistsRouter(new ChecklistsService(deps.dataSource, clock)));
+  const storage = new AttachmentStorage(deps.dataDir ?? loadConfig().dataDir);
+  api.use(attachmentsRouter(new AttachmentsService(deps.dataSource, storage), storage));
   api.use(syncRouter(new SyncService(deps.dataSource, clock, vessels)));
   api.use(workshopsRouter(deps.dataSource));
   api.use(programsRouter(new ProgramsService(deps.dataSource, clock)));
   api.use(runsRouter(new RunsService(deps.dataSource)));
+  api.use(reviewRoutes({ dataSource: deps.dataSource, clock, outbox, dataDir: deps.dataDir ?? loadConfig().dataDir }));
   api.use(apiNotFound);
   app.use('/api', api);
+  if (deps.mailbox) app.use('/dev/mail', devMailRouter(deps.mailbox, loadSession(lucia)));
 
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
   app.use(errorHandler(deps.logger));

@@ -6,6 +6,14 @@ import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
 import { createLogger } from './lib/logger.js';
 import { prepareData } from './lib/bootstrap.js';
+import { systemClock } from './lib/clock.js';
+import { startMail } from './features/mail/start-mail.js';
+import { Outbox } from './features/mail/outbox.js';
+import { DEFAULT_REMINDER_INTERVAL_MS, ReminderJob } from './features/reminders/reminder-job.js';
+import { ServiceDueService } from './features/reminders/service-due.service.js';
+import { RunSummaries } from './features/review/run-summaries.js';
+import { storeMissingCertificates } from './features/signoff/certificate-files.js';
+import { CertificateStore } from './features/signoff/certificate-store.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -16,7 +24,17 @@ async function main() {
   if ((await prepareData(dataSource, { seed: config.seed })).seeded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
-  const app = createApp({ dataSource, logger, clientDir: path.join(root, 'dist', 'client'), publicOrigin: config.publicOrigin });
+  // Demo certificates are seeded as records; their PDFs are written once the data folder is known.
+  await storeMissingCertificates(dataSource, new CertificateStore(config.dataDir), systemClock.now());
+  const mail = await startMail({ production: config.production, dataDir: config.dataDir, logger });
+  const app = createApp({ dataSource, logger, clientDir: path.join(root, 'dist', 'client'), publicOrigin: config.publicOrigin, dataDir: config.dataDir, mailer: mail.mailer, mailbox: mail.mailbox });
+  const reminderMinutes = Number(process.env.RINGSEAT_REMINDER_MINUTES);
+  const reminders = new ReminderJob({
+    dataSource, logger, clock: systemClock, outbox: new Outbox(mail.mailer, logger),
+    serviceDue: new ServiceDueService(dataSource, new RunSummaries(dataSource), systemClock),
+    intervalMs: reminderMinutes > 0 ? reminderMinutes * 60_000 : DEFAULT_REMINDER_INTERVAL_MS,
+  });
+  reminders.start();
   const server = app.listen(config.port, config.host, () => {
     logger.info(`Ringseat is serving on http://localhost:${config.port} (database ${config.databasePath})`);
   });
@@ -24,6 +42,8 @@ async function main() {
   const shutdown = (signal: string) => {
     logger.info(`${signal}: closing`);
     server.close(async () => {
+      await reminders.stop();
+      await mail.close();
       await dataSource.destroy();
       process.exit(0);
     });

@@ -1,6 +1,6 @@
 /**
  * Our own invented demo scenario: a small workshop on a fictional harbour, two skippers and
- * three boats. Every name, serial number and figure here is made up for the demo.
+ * six boats. Every name, serial number and figure here is made up for the demo.
  */
 export const DEMO_PASSWORD = 'ringseat-demo';
 
@@ -22,6 +22,8 @@ export const DEMO_USERS = [
 type DemoEngine = {
   position: 'single' | 'port' | 'starboard' | 'inboard';
   installation: 'outboard' | 'inboard';
+  /** Stable key the demo runs refer to. */
+  key: string;
   maker: string;
   model: string;
   serialNumber: string;
@@ -42,6 +44,7 @@ type DemoEngine = {
 };
 
 const twinOutboard = (position: 'port' | 'starboard', serial: string): DemoEngine => ({
+  key: `blue-tern-${position}`,
   position,
   installation: 'outboard',
   maker: 'Norrvik',
@@ -63,14 +66,25 @@ const twinOutboard = (position: 'port' | 'starboard', serial: string): DemoEngin
   commissionedOn: '2026-11-24',
 });
 
+const cormorantOutboard = (position: 'port' | 'starboard', serial: string): DemoEngine => ({
+  ...twinOutboard(position, serial),
+  key: `cormorant-${position}`,
+  model: 'NV-115 4S',
+  ratedPowerKw: 85,
+  propPitchIn: 17,
+  hourMeterAtCommissioning: 0.8,
+  commissionedOn: '2026-11-25',
+});
+
 export const DEMO_VESSELS: Array<{
   key: string;
   name: string;
   hin: string;
-  type: 'workboat' | 'sport-fishing' | 'sailing-yacht';
+  type: 'workboat' | 'sport-fishing' | 'sailing-yacht' | 'rib' | 'runabout';
   lengthM: number;
   homePort: string;
-  skipper: 'skipperA' | 'skipperB';
+  /** Null: nobody is linked yet (the workshop invites the skipper later). */
+  skipper: 'skipperA' | 'skipperB' | null;
   engines: DemoEngine[];
 }> = [
   {
@@ -83,6 +97,7 @@ export const DEMO_VESSELS: Array<{
     skipper: 'skipperA',
     engines: [
       {
+        key: 'gannet-single',
         position: 'single',
         installation: 'outboard',
         maker: 'Norrvik',
@@ -125,6 +140,7 @@ export const DEMO_VESSELS: Array<{
     skipper: 'skipperB',
     engines: [
       {
+        key: 'halcyon-inboard',
         position: 'inboard',
         installation: 'inboard',
         maker: 'Brennholt',
@@ -144,6 +160,82 @@ export const DEMO_VESSELS: Array<{
         pulleyRatio: 2.5,
         hourMeterAtCommissioning: 2.0,
         commissionedOn: '2026-11-27',
+      },
+    ],
+  },
+  {
+    key: 'cormorant',
+    name: 'Cormorant',
+    hin: 'KSW31884M526',
+    type: 'rib',
+    lengthM: 7.4,
+    homePort: 'Kestrel Harbour',
+    skipper: 'skipperA',
+    engines: [cormorantOutboard('port', 'NV115-26-00871'), cormorantOutboard('starboard', 'NV115-26-00874')],
+  },
+  {
+    key: 'skua',
+    name: 'Skua',
+    hin: 'TDW40251H526',
+    type: 'workboat',
+    lengthM: 6.1,
+    homePort: 'Kestrel Harbour',
+    skipper: 'skipperA',
+    engines: [
+      {
+        key: 'skua-single',
+        position: 'single',
+        installation: 'outboard',
+        maker: 'Norrvik',
+        model: 'NV-40 4S',
+        serialNumber: 'NV40-26-00233',
+        ratedPowerKw: 29.4,
+        fuel: 'petrol',
+        cycle: 'four-stroke',
+        ratedRpmMin: 5000,
+        ratedRpmMax: 6000,
+        gearRatio: 2.0,
+        propBlades: 3,
+        propDiameterIn: 10.25,
+        propPitchIn: 13,
+        tachSource: 'charging-coil',
+        poles: 12,
+        pulleyRatio: null,
+        hourMeterAtCommissioning: 0.3,
+        commissionedOn: '2026-11-23',
+      },
+    ],
+  },
+  {
+    key: 'kittiwake',
+    name: 'Kittiwake',
+    hin: 'TDW40288D626',
+    type: 'runabout',
+    lengthM: 4.6,
+    homePort: 'Kestrel Harbour',
+    skipper: null,
+    engines: [
+      {
+        key: 'kittiwake-single',
+        position: 'single',
+        installation: 'outboard',
+        maker: 'Saltmere',
+        model: 'S-25 2T',
+        serialNumber: 'SM25-26-10392',
+        ratedPowerKw: 18.4,
+        fuel: 'petrol',
+        cycle: 'two-stroke',
+        ratedRpmMin: 4800,
+        ratedRpmMax: 5500,
+        gearRatio: 2.08,
+        propBlades: 3,
+        propDiameterIn: 9.9,
+        propPitchIn: 11,
+        tachSource: 'charging-coil',
+        poles: 12,
+        pulleyRatio: null,
+        hourMeterAtCommissioning: 0.2,
+        commissionedOn: '2026-11-30',
       },
     ],
   },

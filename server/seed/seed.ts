@@ -9,6 +9,7 @@ import { Vessel } from '../features/vessels/vessel.entity.js';
 import { Workshop } from '../features/workshops/workshop.entity.js';
 import { hashPassword } from '../lib/passwords.js';
 import { DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS, DEMO_WORKSHOP } from './demo-data.js';
+import { seedDemoRuns } from './seed-runs.js';
 
 /** True when the database holds no workshop yet: the only case in which demo data is added. */
 export async function isEmpty(dataSource: DataSource): Promise<boolean> {
@@ -28,19 +29,23 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
       userIds.set(user.key, id);
       await manager.getRepository(User).insert({ id, workshopId, email: user.email, name: user.name, role: user.role, passwordHash, archivedAt: null });
     }
-    for (const vessel of DEMO_VESSELS) await seedVessel(manager, workshopId, vessel, userIds.get(vessel.skipper)!);
+    const engineIds = new Map<string, string>();
+    for (const vessel of DEMO_VESSELS) await seedVessel(manager, workshopId, vessel, vessel.skipper ? userIds.get(vessel.skipper)! : null, engineIds);
+    await seedDemoRuns(manager, { workshopId, userIds, engineIds });
   });
   return true;
 }
 
-async function seedVessel(manager: EntityManager, workshopId: string, vessel: (typeof DEMO_VESSELS)[number], skipperId: string) {
+async function seedVessel(manager: EntityManager, workshopId: string, vessel: (typeof DEMO_VESSELS)[number], skipperId: string | null, engineIds: Map<string, string>) {
   const vesselId = randomUUID();
   // Demo data goes through the same schemas as user input, so it can never hold what a form would refuse.
   const checked = VesselInputSchema.parse({ name: vessel.name, hin: vessel.hin, type: vessel.type, lengthM: vessel.lengthM, homePort: vessel.homePort });
   await manager.getRepository(Vessel).insert({ id: vesselId, workshopId, ...checked, archivedAt: null });
-  await manager.getRepository(VesselSkipper).insert({ vesselId, userId: skipperId });
-  for (const engine of vessel.engines) {
+  if (skipperId) await manager.getRepository(VesselSkipper).insert({ vesselId, userId: skipperId });
+  for (const { key, ...engine } of vessel.engines) {
     const input = EngineInputSchema.parse({ ...engine, vesselId });
-    await manager.getRepository(Engine).insert({ id: randomUUID(), workshopId, ...input, archivedAt: null });
+    const id = randomUUID();
+    engineIds.set(key, id);
+    await manager.getRepository(Engine).insert({ id, workshopId, ...input, archivedAt: null });
   }
 }

@@ -19,3 +19,29 @@ export const VesselInputSchema = z.object({
   homePort: z.string().trim().max(80).default(''),
 });
 export type VesselInput = z.infer<typeof VesselInputSchema>;
+
+export const vesselTypeLabel: Record<VesselType, string> = {
+  workboat: 'Workboat',
+  'sport-fishing': 'Sport-fishing boat',
+  'sailing-yacht': 'Sailing yacht',
+  'motor-yacht': 'Motor yacht',
+  rib: 'RIB',
+  runabout: 'Runabout',
+  other: 'Other',
+};
+
+/** Which records a list shows: the ones in use, the archived ones, or both. */
+export const ListStatusSchema = z.enum(['active', 'archived', 'all'], { error: 'The status filter (status) must be active, archived or all.' });
+export type ListStatus = z.infer<typeof ListStatusSchema>;
+
+export const VesselListQuerySchema = z.object({
+  /** Matches name, HIN, home port, skipper, engine maker/model/serial. */
+  q: z.string({ error: 'The search text (q) must be text.' }).trim().max(80, { error: 'The search text (q) can have at most 80 characters.' }).default(''),
+  status: ListStatusSchema.default('active'),
+});
+export type VesselListQuery = z.infer<typeof VesselListQuerySchema>;
+
+export const SkipperLinkParamsSchema = z.object({
+  id: z.uuid({ error: 'The vessel id in the address is not valid.' }),
+  userId: z.uuid({ error: 'The skipper id in the address is not valid.' }),
+});

@@ -95,9 +95,9 @@ describe('app routes', () => {
   });
 
   it('answers an unknown address with a page inside the app and a way back', async () => {
-    renderApp('/engines/nowhere', testUser('skipper'));
+    renderApp('/harbour/nowhere', testUser('skipper'));
     expect(await screen.findByRole('heading', { level: 1, name: 'Page not found' })).toBeInTheDocument();
-    expect(screen.getByText('/engines/nowhere')).toBeInTheDocument();
+    expect(screen.getByText('/harbour/nowhere')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Go to your vessels' })).toHaveAttribute('href', '/');
     expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
   });

@@ -76,6 +76,25 @@ export interface PhotoRecord {
   createdAt: number;
 }
 
+/**
+ * An outing on this device: one or more engines of one vessel run together from start to end.
+ * Device-only (never synced): the engine time itself lives in the session-start/stop events.
+ * It remembers which engines went out, whether the outing is paused, and that the cautions were
+ * read, so a reload or a killed app comes back to the same screen.
+ */
+export interface OutingRecord {
+  id: string;
+  vesselId: string;
+  /** The runs (one per engine) taking part. */
+  runIds: string[];
+  startedAt: number;
+  pausedAt: number | null;
+  endedAt: number | null;
+  /** When the skipper confirmed the cautions for this outing; they are shown once per outing. */
+  cautionsReadAt: number | null;
+  createdAt: number;
+}
+
 export interface MetaRecord {
   key: 'me' | 'deviceId' | 'pullCursor' | 'lastSyncAt' | 'lastSyncError' | string;
   value: unknown;
@@ -88,6 +107,7 @@ export class RingseatDb extends Dexie {
   runPatches!: Table<RunPatchRecord, string>;
   photos!: Table<PhotoRecord, string>;
   meta!: Table<MetaRecord, string>;
+  outings!: Table<OutingRecord, string>;
 
   constructor(name = 'ringseat') {
     super(name);
@@ -99,12 +119,51 @@ export class RingseatDb extends Dexie {
       photos: 'id, runId, sync',
       meta: 'key',
     });
+    // Version 2 adds outings; every version-1 table keeps its shape.
+    this.version(2).stores({ outings: 'id, vesselId, startedAt' });
   }
 }
 
 export const db = new RingseatDb();
 
 /** The signed-in user as last confirmed by the server; lets the app open offline. */
-export async function cachedUser(): Promise<SessionUser | null> {
-  return ((await db.meta.get('me'))?.value as SessionUser | undefined) ?? null;
+export async function cachedUser(database: RingseatDb = db): Promise<SessionUser | null> {
+  return ((await database.meta.get('me'))?.value as SessionUser | undefined) ?? null;
+}
+
+/**
+ * Records the user the server just confirmed. When someone else signs in on this device, the
+ * previous user's copies and unsent records go first: nobody sees, or sends, another person's log.
+ */
+export async function rememberUser(user: SessionUser, database: RingseatDb = db): Promise<void> {
+  const owner = (await cachedUser(database))?.id ?? ((await database.meta.get('outboxOwner'))?.value as string | undefined);
+  if (owner !== undefined && owner !== user.id) await clearUserData(database, { keepOutbox: false });
+  await database.transaction('rw', database.meta, async () => {
+    await database.meta.delete('outboxOwner');
+    await database.meta.put({ key: 'me', value: user });
+  });
+}
+
+/**
+ * Signed out, or the server said the session is gone: forget the user's copies. By default what
+ * was logged here and not yet sent stays (with its outings), so a session that expired at sea
+ * loses nothing: it goes out when the same person signs in again.
+ */
+export async function clearUserData(database: RingseatDb = db, { keepOutbox = true } = {}): Promise<void> {
+  const tables = [database.vessels, database.runs, database.events, database.runPatches, database.photos, database.meta, database.outings];
+  await database.transaction('rw', tables, async () => {
+    const owner = (await cachedUser(database))?.id;
+    await Promise.all([database.vessels.clear(), database.runs.clear()]);
+    const outbox = [database.events, database.runPatches, database.photos] as const;
+    if (keepOutbox) {
+      for (const table of outbox) await (table as Table<{ sync: SyncState }, string>).where('sync').notEqual('pending').delete();
+    } else {
+      await Promise.all([...outbox.map((table) => table.clear()), database.outings.clear()]);
+    }
+    const keys = await database.meta.toCollection().primaryKeys();
+    // The device id names this device, not its user: it stays.
+    await database.meta.bulkDelete(keys.filter((key) => key !== 'deviceId' && !(keepOutbox && key === 'outboxOwner')));
+    const counts = keepOutbox ? await Promise.all(outbox.map((table) => (table as Table<{ sync: SyncState }, string>).where('sync').equals('pending').count())) : [];
+    if (owner !== undefined && counts.some((n) => n > 0)) await database.meta.put({ key: 'outboxOwner', value: owner });
+  });
 }

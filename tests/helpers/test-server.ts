@@ -35,7 +35,7 @@ export async function startTestServer(overrides: Partial<AppDeps> = {}, options:
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-test-'));
   const dataSource = await openDatabase(path.join(dir, 'ringseat.sqlite'));
   await prepareData(dataSource, { seed: options.seed === false ? 'none' : 'demo' });
-  const app = createApp({ dataSource, logger: createLogger('silent'), ...overrides });
+  const app = createApp({ dataSource, logger: createLogger('silent'), dataDir: dir, ...overrides });
   return {
     app,
     dataSource,

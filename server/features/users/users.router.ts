@@ -4,11 +4,13 @@ import { InviteInputSchema } from '../../../shared/auth/auth.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { AuthService } from '../auth/auth.service.js';
+import { inviteMail } from '../mail/mail-templates.js';
+import type { Outbox } from '../mail/outbox.js';
 import type { UsersService } from './users.service.js';
 
 const TokenParamsSchema = z.object({ token: z.string().min(20, { error: 'The invite link is incomplete.' }).max(200) });
 
-export function usersRouter(service: UsersService, auth: AuthService, publicOrigin?: string): Router {
+export function usersRouter(service: UsersService, auth: AuthService, publicOrigin: string | undefined, outbox: Outbox): Router {
   const router = Router();
   const inviteLink = (req: Request, token: string) => `${publicOrigin ?? `${req.protocol}://${req.get('host')}`}/invite/${token}`;
 
@@ -17,10 +19,17 @@ export function usersRouter(service: UsersService, auth: AuthService, publicOrig
   });
 
   router.post('/invites', requireRole('manager'), validate({ body: InviteInputSchema }), async (req, res) => {
-    const { invite, token } = await service.createInvite(currentUser(res), req.body);
+    const inviter = currentUser(res);
+    const { invite, token } = await service.createInvite(inviter, req.body);
+    const link = inviteLink(req, token);
+    // The invite stands even when the e-mail cannot go: the link is in the answer to pass on by hand.
+    const mail = await outbox.send(inviteMail({
+      to: invite.email, workshopName: inviter.workshopName, inviterName: inviter.name, role: invite.role, link, expiresOn: invite.expiresAt.toISOString().slice(0, 10),
+    }));
     res.status(201).json({
       invite: { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() },
-      link: inviteLink(req, token),
+      link,
+      mail,
     });
   });
 

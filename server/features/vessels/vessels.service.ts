@@ -1,43 +1,88 @@
-import { IsNull, type DataSource, type FindOptionsWhere } from 'typeorm';
+import { randomUUID } from 'node:crypto';
+import { In, IsNull, Not, type DataSource, type EntityManager, type FindOptionsWhere } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
+import { OPEN_RUN_STATES } from '../../../shared/runs/run.schema.js';
+import type { VesselView } from '../../../shared/vessels/vessel-view.js';
+import { VesselListQuerySchema, type VesselInput, type VesselListQuery } from '../../../shared/vessels/vessel.schema.js';
+import type { Clock } from '../../lib/clock.js';
+import { systemClock } from '../../lib/clock.js';
+import { ConflictError } from '../../lib/errors.js';
+import { Run } from '../runs/run.entity.js';
+import { findVisibleVessel } from './vessel-access.js';
+import { toVesselView, vesselMatches } from './vessel-views.js';
 import { Vessel } from './vessel.entity.js';
 
-export class VesselsService {
-  constructor(private readonly dataSource: DataSource) {}
+const archivedWhere = (status: VesselListQuery['status']) =>
+  status === 'active' ? { archivedAt: IsNull() } : status === 'archived' ? { archivedAt: Not(IsNull()) } : {};
 
-  /** Staff see every vessel of their workshop; a skipper only the vessels linked to them. */
-  async listFor(user: SessionUser) {
-    const where: FindOptionsWhere<Vessel> = { workshopId: user.workshopId, archivedAt: IsNull() };
+export class VesselsService {
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly clock: Clock = systemClock,
+  ) {}
+
+  /**
+   * Staff see every vessel of their workshop (archived ones when asked); a skipper only the
+   * vessels linked to them that are in use.
+   */
+  async listFor(user: SessionUser, query: VesselListQuery = VesselListQuerySchema.parse({})): Promise<VesselView[]> {
+    const status = user.role === 'skipper' ? 'active' : query.status;
+    const where: FindOptionsWhere<Vessel> = { workshopId: user.workshopId, ...archivedWhere(status) };
     if (user.role === 'skipper') where.skippers = { userId: user.id };
     const ids = (await this.dataSource.getRepository(Vessel).find({ select: { id: true }, where })).map((v) => v.id);
     if (ids.length === 0) return [];
     const vessels = await this.dataSource.getRepository(Vessel).find({
-      where: ids.map((id) => ({ id })),
+      where: { id: In(ids) },
       relations: { engines: true, skippers: { user: true } },
       order: { name: 'ASC' },
     });
-    return vessels.map(toVesselView);
+    return vessels.map(toVesselView).filter((view) => vesselMatches(view, query.q));
+  }
+
+  async get(user: SessionUser, id: string): Promise<VesselView> {
+    await findVisibleVessel(this.dataSource.manager, user, id);
+    return this.view(this.dataSource.manager, id);
+  }
+
+  async create(user: SessionUser, input: VesselInput): Promise<VesselView> {
+    const id = randomUUID();
+    await this.dataSource.getRepository(Vessel).insert({ id, workshopId: user.workshopId, ...input, archivedAt: null });
+    return this.view(this.dataSource.manager, id);
+  }
+
+  async update(user: SessionUser, id: string, input: VesselInput): Promise<VesselView> {
+    return this.dataSource.transaction(async (manager) => {
+      const vessel = await findVisibleVessel(manager, user, id);
+      refuseArchived(vessel);
+      await manager.getRepository(Vessel).update({ id }, { ...input });
+      return this.view(manager, id);
+    });
+  }
+
+  /** Archiving hides a vessel and its engines from everyday lists; nothing is deleted. */
+  async setArchived(user: SessionUser, id: string, archived: boolean): Promise<VesselView> {
+    return this.dataSource.transaction(async (manager) => {
+      const vessel = await findVisibleVessel(manager, user, id);
+      if (archived && !vessel.archivedAt) {
+        await refuseOpenRuns(manager, { vesselId: id }, `${vessel.name} has an engine with a break-in run that is not signed off. Finish or sign off that run first.`);
+      }
+      await manager.getRepository(Vessel).update({ id }, { archivedAt: archived ? (vessel.archivedAt ?? this.clock.now()) : null });
+      return this.view(manager, id);
+    });
+  }
+
+  private async view(manager: EntityManager, id: string): Promise<VesselView> {
+    const vessel = await manager.getRepository(Vessel).findOneOrFail({ where: { id }, relations: { engines: true, skippers: { user: true } } });
+    return toVesselView(vessel);
   }
 }
 
-function toVesselView(vessel: Vessel) {
-  return {
-    id: vessel.id,
-    name: vessel.name,
-    hin: vessel.hin,
-    type: vessel.type,
-    lengthM: vessel.lengthM,
-    homePort: vessel.homePort,
-    skippers: (vessel.skippers ?? []).map((s) => ({ id: s.userId, name: s.user?.name ?? '' })),
-    engines: (vessel.engines ?? [])
-      .filter((e) => !e.archivedAt)
-      .sort((a, b) => POSITION_ORDER.indexOf(a.position) - POSITION_ORDER.indexOf(b.position))
-      .map(({ createdAt, updatedAt, archivedAt: _a, vessel: _v, workshopId: _w, ...engine }) => ({
-        ...engine,
-        createdAt: createdAt.toISOString(),
-        updatedAt: updatedAt.toISOString(),
-      })),
-  };
+export function refuseArchived(vessel: Vessel) {
+  if (vessel.archivedAt) throw new ConflictError(`${vessel.name} is archived. Restore it before changing it.`);
 }
 
-const POSITION_ORDER = ['port', 'centre', 'starboard', 'single', 'inboard'];
+/** A record with a break-in still open cannot be archived: the run would lose its place. */
+export async function refuseOpenRuns(manager: EntityManager, where: { vesselId: string } | { engineId: string }, detail: string) {
+  const open = await manager.getRepository(Run).exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
+  if (open) throw new ConflictError(detail);
+}

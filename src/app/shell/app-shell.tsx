@@ -1,5 +1,7 @@
+import { useEffect } from 'react';
 import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../../features/auth/api';
+import { clearUserData } from '../../lib/db';
 import { AppHeader } from './app-header';
 import { Splash } from './splash';
 import { signInPath, type SessionContext } from './session';
@@ -11,6 +13,10 @@ import { signInPath, type SessionContext } from './session';
 export function AppShell() {
   const me = useMe();
   const location = useLocation();
+  // Any 401 means the session is gone: the user's copies leave the device (unsent readings stay).
+  useEffect(() => {
+    if (me.data === null) void clearUserData().catch(() => undefined);
+  }, [me.data]);
 
   if (me.data === null) return <Navigate to={signInPath(location.pathname + location.search)} replace />;
   if (me.data === undefined) {

@@ -2,9 +2,11 @@ import { NavLink } from 'react-router-dom';
 import type { Role } from '../../../shared/auth/auth.schema';
 import { HullIcon, PeopleIcon, WrenchIcon } from '../../components/ui/icons';
 import { cx } from '../../components/ui/cx';
+import { DeckIcon } from '../../features/deck/components/deck-icon';
+import { RunsIcon } from '../../features/board/components/runs-icon';
 import { navItemsFor, type NavIcon } from './nav-items';
 
-const icons: Record<NavIcon, typeof HullIcon> = { vessels: HullIcon, workshop: WrenchIcon, team: PeopleIcon };
+const icons: Record<NavIcon, typeof HullIcon> = { vessels: HullIcon, workshop: WrenchIcon, team: PeopleIcon, deck: DeckIcon, runs: RunsIcon };
 
 /**
  * One navigation for every screen size: a bar along the bottom edge on phones (within reach of the
@@ -21,7 +23,7 @@ export function MainNav({ role }: { role: Role }) {
             <li key={to} className="flex-1 sm:flex-none">
               <NavLink to={to} end
                 className={({ isActive }) => cx(
-                  'flex min-h-touch flex-col items-center justify-center gap-0.5 border-b-4 px-4 py-1 font-semibold no-underline',
+                  'flex min-h-touch flex-col items-center justify-center gap-0.5 border-b-4 px-1 py-1 font-semibold no-underline sm:px-4',
                   'sm:flex-row sm:gap-2 sm:py-0',
                   isActive ? 'border-accent text-ink' : 'border-transparent text-muted hover:text-ink',
                 )}>

@@ -1,6 +1,6 @@
 import type { Role } from '../../../shared/auth/auth.schema';
 
-export type NavIcon = 'vessels' | 'workshop' | 'team';
+export type NavIcon = 'vessels' | 'workshop' | 'team' | 'deck' | 'runs';
 
 export interface NavItem {
   label: string;
@@ -10,8 +10,8 @@ export interface NavItem {
 
 /** Main navigation per role. Skippers see their own boats; staff see the workshop. */
 export function navItemsFor(role: Role): NavItem[] {
-  if (role === 'skipper') return [{ label: 'Vessels', to: '/', icon: 'vessels' }];
-  const items: NavItem[] = [{ label: 'Workshop', to: '/', icon: 'workshop' }];
+  if (role === 'skipper') return [{ label: 'Vessels', to: '/', icon: 'vessels' }, { label: 'Deck', to: '/deck', icon: 'deck' }];
+  const items: NavItem[] = [{ label: 'Workshop', to: '/', icon: 'workshop' }, { label: 'Vessels', to: '/vessels', icon: 'vessels' }, { label: 'Runs', to: '/runs', icon: 'runs' }, { label: 'Deck', to: '/deck', icon: 'deck' }];
   if (role === 'manager') items.push({ label: 'Team', to: '/team', icon: 'team' });
   return items;
 }

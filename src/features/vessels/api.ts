@@ -1,10 +1,37 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { VesselInput, ListStatus } from '../../../shared/vessels/vessel.schema';
+import type { SkipperOption, VesselView } from '../../../shared/vessels/vessel-view';
 import { api } from '../../lib/api-client';
 import type { VesselSummary } from './types';
 
+export type VesselFilters = { q: string; status: ListStatus };
+export type EngineFilters = { q: string; status: ListStatus; vesselId?: string };
+
+const search = (filters: Record<string, string | undefined>) => {
+  const params = new URLSearchParams();
+  for (const [key, value] of Object.entries(filters)) if (value) params.set(key, value);
+  const text = params.toString();
+  return text ? `?${text}` : '';
+};
+
+/** One key factory for vessels and engines: a change to either shows up in both lists. */
 export const vesselKeys = {
   all: ['vessels'] as const,
   list: () => [...vesselKeys.all, 'list'] as const,
+  filtered: (filters: VesselFilters) => [...vesselKeys.list(), filters] as const,
+  detail: (id: string) => [...vesselKeys.all, 'detail', id] as const,
+  skippers: () => [...vesselKeys.all, 'skippers'] as const,
+  save: () => [...vesselKeys.all, 'save'] as const,
+  archive: () => [...vesselKeys.all, 'archive'] as const,
+  link: () => [...vesselKeys.all, 'link-skipper'] as const,
+};
+
+export const engineKeys = {
+  all: ['engines'] as const,
+  list: (filters: EngineFilters) => [...engineKeys.all, 'list', filters] as const,
+  detail: (id: string) => [...engineKeys.all, 'detail', id] as const,
+  save: () => [...engineKeys.all, 'save'] as const,
+  archive: () => [...engineKeys.all, 'archive'] as const,
 };
 
 export const vesselQueries = {
@@ -14,7 +41,68 @@ export const vesselQueries = {
       queryFn: ({ signal }) => api.get<{ vessels: VesselSummary[] }>('/api/vessels', signal),
       select: (data) => data.vessels,
     }),
+  filtered: (filters: VesselFilters) =>
+    queryOptions({
+      queryKey: vesselKeys.filtered(filters),
+      queryFn: ({ signal }) => api.get<{ vessels: VesselView[] }>(`/api/vessels${search(filters)}`, signal),
+      select: (data) => data.vessels,
+      // The list stays on screen (and keeps its sorting) while a new search loads.
+      placeholderData: keepPreviousData,
+    }),
+  detail: (id: string) =>
+    queryOptions({
+      queryKey: vesselKeys.detail(id),
+      queryFn: ({ signal }) => api.get<{ vessel: VesselView }>(`/api/vessels/${id}`, signal),
+      select: (data) => data.vessel,
+    }),
+  skippers: () =>
+    queryOptions({
+      queryKey: vesselKeys.skippers(),
+      queryFn: ({ signal }) => api.get<{ skippers: SkipperOption[] }>('/api/skippers', signal),
+      select: (data) => data.skippers,
+    }),
 };
 
 /** Vessels the signed-in user may see: a skipper's own, or all of the workshop's for staff. */
 export const useVessels = () => useQuery(vesselQueries.list());
+export const useVesselList = (filters: VesselFilters) => useQuery(vesselQueries.filtered(filters));
+export const useVessel = (id: string) => useQuery(vesselQueries.detail(id));
+export const useSkippers = () => useQuery(vesselQueries.skippers());
+
+/** After any change to a vessel or an engine, every list and page showing them is refetched. */
+export function useInvalidateFleet() {
+  const queryClient = useQueryClient();
+  return () => Promise.all([queryClient.invalidateQueries({ queryKey: vesselKeys.all }), queryClient.invalidateQueries({ queryKey: engineKeys.all })]);
+}
+
+export function useSaveVessel() {
+  const invalidate = useInvalidateFleet();
+  return useMutation({
+    mutationKey: vesselKeys.save(),
+    mutationFn: ({ id, input }: { id?: string; input: VesselInput }) =>
+      id ? api.put<{ vessel: VesselView }>(`/api/vessels/${id}`, input) : api.post<{ vessel: VesselView }>('/api/vessels', input),
+    onSuccess: () => invalidate(),
+  });
+}
+
+export function useArchiveVessel() {
+  const invalidate = useInvalidateFleet();
+  return useMutation({
+    mutationKey: vesselKeys.archive(),
+    mutationFn: ({ id, archived }: { id: string; archived: boolean }) =>
+      api.post<{ vessel: VesselView }>(`/api/vessels/${id}/${archived ? 'archive' : 'restore'}`),
+    onSuccess: () => invalidate(),
+  });
+}
+
+export function useSkipperLink() {
+  const invalidate = useInvalidateFleet();
+  return useMutation({
+    mutationKey: vesselKeys.link(),
+    mutationFn: ({ vesselId, userId, linked }: { vesselId: string; userId: string; linked: boolean }) =>
+      linked
+        ? api.put<{ vessel: VesselView }>(`/api/vessels/${vesselId}/skippers/${userId}`)
+        : api.delete<{ vessel: VesselView }>(`/api/vessels/${vesselId}/skippers/${userId}`),
+    onSuccess: () => invalidate(),
+  });
+}

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { Table, Td, Th } from '../../../components/ui/table';
 import type { VesselSummary } from '../types';
 import { engineTitle, RatedRpm } from './engine-details';
@@ -21,7 +22,7 @@ export function FleetTable({ vessels }: { vessels: VesselSummary[] }) {
         {vessels.map((vessel) => (
           <tr key={vessel.id}>
             <Td>
-              <p className="font-bold">{vessel.name}</p>
+              <Link to={`/vessels/${vessel.id}`} className="font-bold underline underline-offset-4">{vessel.name}</Link>
               <p className="text-sm text-muted">{vesselFacts(vessel)}</p>
               <p className="figures text-sm">{vessel.hin}</p>
             </Td>
@@ -40,7 +41,7 @@ function EngineColumns({ vessel }: { vessel: VesselSummary }) {
   }
   return (
     <>
-      <Td>{vessel.engines.map((e) => <p key={e.id}>{engineTitle(e)}</p>)}</Td>
+      <Td>{vessel.engines.map((e) => <p key={e.id}><Link to={`/engines/${e.id}`} className="underline underline-offset-4">{engineTitle(e)}</Link></p>)}</Td>
       <Td>{vessel.engines.map((e) => <p key={e.id} className="figures">{e.serialNumber}</p>)}</Td>
       <Td>{vessel.engines.map((e) => <p key={e.id}><RatedRpm engine={e} /></p>)}</Td>
     </>

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card';
 import type { VesselSummary } from '../types';
 import { EngineDetails } from './engine-details';
@@ -7,10 +8,14 @@ export function vesselFacts(vessel: VesselSummary): string {
   return [vessel.type, length, vessel.homePort].filter(Boolean).join(' · ');
 }
 
-/** A vessel and its engines. `showSkippers` is for workshop staff, who look after many boats. */
+/**
+ * A vessel and its engines. `showSkippers` is for workshop staff, who look after many boats; their
+ * card also leads to the vessel's page.
+ */
 export function VesselCard({ vessel, showSkippers = false }: { vessel: VesselSummary; showSkippers?: boolean }) {
+  const title = showSkippers ? <Link to={`/vessels/${vessel.id}`} className="underline underline-offset-4">{vessel.name}</Link> : vessel.name;
   return (
-    <Card title={vessel.name}>
+    <Card title={title}>
       <p className="text-muted">{vesselFacts(vessel)}</p>
       <p className="mt-1">
         <span className="text-muted">HIN </span>

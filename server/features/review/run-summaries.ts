@@ -1,0 +1,98 @@
+import type { DataSource, EntityManager } from 'typeorm';
+import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
+import type { Program } from '../../../shared/programs/program.schema.js';
+import { frozenPhases } from '../../../shared/review/frozen-phases.js';
+import { accountRun } from '../../../shared/runs/run-accounting.js';
+import { latestHourMeters, loadRunEvents } from './run-events.js';
+
+const BATCH = 200;
+
+type RunRow = { id: string; workshopId: string; engineId: string; program: string; bands: string };
+
+/**
+ * Keeps run_summary in step with the events. Every event carries a change number handed out in
+ * commit order and events are never edited, so "events numbered above the workshop's mark" is
+ * exactly what is new since the last refresh; only those runs (and runs never summarised) are
+ * accounted again.
+ */
+export class RunSummaries {
+  constructor(private readonly dataSource: DataSource) {}
+
+  private readonly running = new Map<string, Promise<void>>();
+
+  /** Brings the workshop's summaries up to date; refreshes of one workshop run one after another. */
+  async refresh(workshopId: string): Promise<void> {
+    const previous = this.running.get(workshopId) ?? Promise.resolve();
+    const next = previous.catch(() => undefined).then(() => this.refreshNow(workshopId));
+    this.running.set(workshopId, next);
+    try {
+      await next;
+    } finally {
+      if (this.running.get(workshopId) === next) this.running.delete(workshopId);
+    }
+  }
+
+  private async refreshNow(workshopId: string): Promise<void> {
+    const db = this.dataSource.manager;
+    const mark = await this.mark(db, workshopId);
+    // Read by the change-number index (the unary + keeps SQLite off the workshop index, which
+    // would walk every event of the workshop); usually only a handful of rows are new.
+    const newer: Array<{ runId: string; seq: number }> = await db.query(
+      'SELECT "runId", "seq" FROM "run_event" WHERE "seq" > ? AND +"workshopId" = ? ORDER BY "seq"',
+      [mark, workshopId],
+    );
+    const changed = newer.reduce((latest, e) => latest.set(e.runId, e.seq), new Map<string, number>());
+    const missing: Array<{ id: string }> = await db.query(
+      'SELECT "r"."id" FROM "run" "r" LEFT JOIN "run_summary" "s" ON "s"."runId" = "r"."id" WHERE "r"."workshopId" = ? AND "s"."runId" IS NULL',
+      [workshopId],
+    );
+    const stale = [...new Set([...changed.keys(), ...missing.map((m) => m.id)])];
+    // A batch at a time, each its own transaction, letting other requests in between: the first
+    // visit after a large import accounts thousands of runs.
+    for (let from = 0; from < stale.length; from += BATCH) {
+      await this.dataSource.transaction((manager) => this.summarise(manager, stale.slice(from, from + BATCH)));
+      if (from + BATCH < stale.length) await new Promise((resolve) => setImmediate(resolve));
+    }
+    const newest = Math.max(mark, ...changed.values());
+    if (newest > mark) {
+      await db.query(
+        `INSERT INTO "run_summary_mark" ("workshopId", "eventSeq") VALUES (?, ?)
+         ON CONFLICT ("workshopId") DO UPDATE SET "eventSeq" = MAX("eventSeq", excluded."eventSeq")`,
+        [workshopId, newest],
+      );
+    }
+  }
+
+  private async mark(manager: EntityManager, workshopId: string): Promise<number> {
+    const rows: Array<{ eventSeq: number }> = await manager.query('SELECT "eventSeq" FROM "run_summary_mark" WHERE "workshopId" = ?', [workshopId]);
+    return rows[0]?.eventSeq ?? 0;
+  }
+
+  private async summarise(manager: EntityManager, runIds: string[]): Promise<void> {
+    const runs: RunRow[] = await manager.query(
+      `SELECT "id", "workshopId", "engineId", "program", "bands" FROM "run" WHERE "id" IN (${runIds.map(() => '?').join(', ')})`,
+      runIds,
+    );
+    const events = await loadRunEvents(manager, runIds);
+    const meters = await latestHourMeters(manager, runIds);
+    for (const run of runs) {
+      const program = JSON.parse(run.program) as Program;
+      const phases = frozenPhases(program, JSON.parse(run.bands) as Record<string, RpmBand>);
+      const { events: list, maxSeq } = events.get(run.id)!;
+      const account = accountRun(list, phases, { engineId: run.engineId });
+      const open = account.phases.findIndex((p) => p.progressShare < 1);
+      const meter = meters.get(run.id) ?? null;
+      await manager.query(
+        `INSERT INTO "run_summary" ("runId", "workshopId", "eventSeq", "programName", "serviceHours", "serviceMonths", "verdict", "progress", "breachCount", "openPhaseName", "sessionMs", "hourMeter", "hourMeterAt")
+         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         ON CONFLICT ("runId") DO UPDATE SET "eventSeq" = excluded."eventSeq", "programName" = excluded."programName", "serviceHours" = excluded."serviceHours",
+           "serviceMonths" = excluded."serviceMonths", "verdict" = excluded."verdict", "progress" = excluded."progress",
+           "breachCount" = excluded."breachCount", "openPhaseName" = excluded."openPhaseName", "sessionMs" = excluded."sessionMs",
+           "hourMeter" = excluded."hourMeter", "hourMeterAt" = excluded."hourMeterAt"`,
+        [run.id, run.workshopId, maxSeq, program.name, program.firstService.hours ?? null, program.firstService.months ?? null, account.verdict, account.overallProgress,
+          account.phases.reduce((n, p) => n + p.reasons.filter((r) => r.code !== 'short-of-time').length, 0),
+          open < 0 ? null : program.phases[open].name, account.sessionMs, meter?.hourMeter ?? null, meter?.at ?? null],
+      );
+    }
+  }
+}

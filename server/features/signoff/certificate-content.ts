@@ -1,0 +1,47 @@
+import type { PhaseChart } from '../../../shared/review/chart-series.js';
+import type { CertificateContent } from '../../../shared/review/certificate-content.js';
+import { calendarDateIn } from '../../../shared/review/first-service.js';
+import type { RunContext } from '../review/run-context.js';
+
+const minutes = (ms: number) => Math.round(ms / 600) / 100;
+const isoOrNull = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
+
+/** Everything the certificate prints, taken from the run as it stands at sign-off. */
+export function certificateContent(
+  ctx: RunContext,
+  charts: PhaseChart[],
+  decision: { number: string; issuedAt: Date; comments: string; technician: { name: string; role: string } },
+): CertificateContent {
+  const { run, engine, vessel, workshop, account } = ctx;
+  return {
+    number: decision.number,
+    issuedAt: decision.issuedAt.toISOString(),
+    issuedOn: calendarDateIn(workshop.timezone, decision.issuedAt),
+    timezone: workshop.timezone,
+    workshop: { name: workshop.name, address: workshop.address, email: workshop.email },
+    vessel: { name: vessel.name, hin: vessel.hin, homePort: vessel.homePort },
+    skippers: ctx.skippers.map((s) => s.name),
+    engine: {
+      position: engine.position, maker: engine.maker, model: engine.model, serialNumber: engine.serialNumber,
+      ratedRpmMin: engine.ratedRpmMin, ratedRpmMax: engine.ratedRpmMax,
+      hourMeterAtCommissioning: engine.hourMeterAtCommissioning, commissionedOn: engine.commissionedOn,
+    },
+    program: { name: run.program.name, source: run.program.source },
+    phases: ctx.phases.map((phase, i) => {
+      const a = account.phases[i];
+      return {
+        name: phase.name, performedBy: phase.performedBy, band: phase.band, throttleCeiling: phase.throttleCeiling,
+        requiredMinutes: minutes(a.requiredMs), inBandMinutes: minutes(a.timeInBandMs), overMinutes: minutes(a.timeOverMs), underMinutes: minutes(a.timeUnderMs),
+        verdict: a.verdict, firstAt: isoOrNull(charts[i].firstAt), lastAt: isoOrNull(charts[i].lastAt),
+        reasons: a.reasons.map((r) => r.message),
+      };
+    }),
+    verdict: account.verdict,
+    comments: decision.comments,
+    technician: decision.technician,
+    submittedAt: run.submittedAt?.toISOString() ?? null,
+    firstService: ctx.firstService
+      ? { dueAtHours: ctx.firstService.dueAtHours, dueOn: ctx.firstService.dueOn, hoursNow: ctx.firstService.hoursNow, hoursSource: ctx.firstService.hoursSource }
+      : null,
+  };
+}

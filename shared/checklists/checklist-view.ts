@@ -1,0 +1,14 @@
+import type { ChecklistInput } from './checklist.schema';
+import type { ChecklistEvaluation } from './evaluate-checklist';
+
+/** GET/PUT /api/engines/:id/checklist answer. `id` is null until the checklist is first saved. */
+export interface ChecklistView {
+  id: string | null;
+  engineId: string;
+  entries: ChecklistInput;
+  evaluation: ChecklistEvaluation;
+  updatedAt: string | null;
+  updatedBy: { id: string; name: string } | null;
+  completedAt: string | null;
+  completedBy: { id: string; name: string } | null;
+}

@@ -1,0 +1,65 @@
+import { z } from 'zod';
+
+/** What a technician decides on a run submitted for review. */
+export const SIGN_OFF_DECISIONS = ['confirm', 'return'] as const;
+export const SignOffDecisionSchema = z.enum(SIGN_OFF_DECISIONS, {
+  error: 'Choose whether to confirm the run or return it to the skipper (decision).',
+});
+export type SignOffDecision = z.infer<typeof SignOffDecisionSchema>;
+
+export const MAX_COMMENTS = 2000;
+
+export const SignOffInputSchema = z
+  .object({
+    decision: SignOffDecisionSchema,
+    comments: z
+      .string({ error: 'The comments (comments) must be text.' })
+      .trim()
+      .max(MAX_COMMENTS, { error: `The comments (comments) can have at most ${MAX_COMMENTS} characters.` })
+      .default(''),
+  })
+  .refine((input) => input.decision !== 'return' || input.comments.length > 0, {
+    error: 'Write what the skipper should do (comments) when you return a run.',
+    path: ['comments'],
+  });
+export type SignOffInput = z.infer<typeof SignOffInputSchema>;
+export type SignOffFormValues = z.input<typeof SignOffInputSchema>;
+
+/** The message when a confirmation of a run the computation did not judge complete has no comment. */
+export const CONFIRM_NEEDS_COMMENT =
+  'This run is not judged complete by the computation: say why you confirm it anyway (comments).';
+
+export const READINGS_PAGE_MAX = 500;
+
+export const ReadingsQuerySchema = z.object({
+  offset: z.coerce
+    .number({ error: 'The offset (offset) must be a whole number.' })
+    .int({ error: 'The offset (offset) must be a whole number.' })
+    .nonnegative({ error: 'The offset (offset) cannot be negative.' })
+    .default(0),
+  limit: z.coerce
+    .number({ error: 'The page size (limit) must be a whole number.' })
+    .int({ error: 'The page size (limit) must be a whole number.' })
+    .min(1, { error: 'The page size (limit) must be at least 1.' })
+    .max(READINGS_PAGE_MAX, { error: `The page size (limit) can be at most ${READINGS_PAGE_MAX}.` })
+    .default(100),
+});
+export type ReadingsQuery = z.infer<typeof ReadingsQuerySchema>;
+
+/** Which runs the board lists: what needs action (the default), all, or one state. */
+export const BOARD_SHOWS = ['action', 'all', 'planned', 'under-way', 'submitted', 'signed-off', 'returned'] as const;
+export type BoardShow = (typeof BOARD_SHOWS)[number];
+
+export const BOARD_PAGE_MAX = 500;
+
+export const BoardQuerySchema = z.object({
+  show: z.enum(BOARD_SHOWS, { error: 'Show (show) must be action, all or a run state.' }).default('action'),
+  q: z.string({ error: 'The search text (q) must be text.' }).trim().max(80, { error: 'The search text (q) can have at most 80 characters.' }).default(''),
+  limit: z.coerce
+    .number({ error: 'The number of runs (limit) must be a whole number.' })
+    .int({ error: 'The number of runs (limit) must be a whole number.' })
+    .min(1, { error: 'The number of runs (limit) must be at least 1.' })
+    .max(BOARD_PAGE_MAX, { error: `The number of runs (limit) can be at most ${BOARD_PAGE_MAX}.` })
+    .default(100),
+});
+export type BoardQuery = z.infer<typeof BoardQuerySchema>;

@@ -1,0 +1,37 @@
+import type { RunEvent } from '../../../../shared/runs/run-event.schema';
+import { db, type RunRecord } from '../../../lib/db';
+import { renderPage } from '../../../test/render';
+import { startOuting } from '../deck-store';
+import { MIN, refOf, testVessel, VESSEL_ID } from '../test-fixtures';
+import { DeckScreen } from './deck-screen';
+
+// Puts records into the device database the way the deck and the sync engine do, for screen tests.
+
+let n = 0;
+const eventId = () => `00000000-0000-4000-8000-${(++n).toString(16).padStart(12, '0')}`;
+
+export async function store(run: RunRecord, events: Array<Omit<RunEvent, 'id' | 'engineId'>>) {
+  await db.events.bulkPut(
+    events.map((e) => {
+      const event = { ...e, id: eventId(), engineId: run.engine.id } as RunEvent;
+      return { id: event.id, runId: run.id, engineId: run.engine.id, at: event.at, kind: event.kind, event, origin: 'device' as const, sync: 'pending' as const, createdAt: event.at };
+    }),
+  );
+}
+
+/** An outing started `minutesAgo`, already on the "below half" phase of each run. */
+export async function outingOn(runs: RunRecord[], minutesAgo = 5) {
+  const startedAt = Date.now() - minutesAgo * MIN;
+  await db.runs.bulkPut(runs);
+  await db.vessels.put(testVessel(runs));
+  await startOuting(db, VESSEL_ID, runs.map(refOf), startedAt);
+  for (const run of runs) await store(run, [{ kind: 'phase-advance', at: startedAt + 1, phaseId: 'below-half' } as never]);
+  return startedAt;
+}
+
+export const readingAt = (at: number, rpm: number, throttle = 'half') => ({ kind: 'reading', at, phaseId: 'below-half', rpm, throttle }) as never;
+
+export const clearDevice = () =>
+  Promise.all([db.events.clear(), db.runs.clear(), db.vessels.clear(), db.outings.clear(), db.photos.clear(), db.runPatches.clear()]);
+
+export const showDeck = (role: 'skipper' | 'technician' = 'skipper') => renderPage(<DeckScreen vesselId={VESSEL_ID} role={role} />);

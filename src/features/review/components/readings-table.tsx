@@ -1,0 +1,56 @@
+import { useState } from 'react';
+import { BAND_WORDS } from '../../../../shared/review/readings';
+import { Button, buttonClass } from '../../../components/ui/button';
+import { LoadError, Loading } from '../../../components/ui/status-message';
+import { Table, Td, Th } from '../../../components/ui/table';
+import { readingsCsvUrl, useReadings } from '../api';
+import { formatMoment } from '../format';
+
+const PAGE = 50;
+const BAND_MARK = { 'in-band': '■', over: '▲', under: '▽' } as const;
+
+/** Every reading, fifty at a time, with the whole list as a CSV download. */
+export function ReadingsTable({ runId, total }: { runId: string; total: number }) {
+  const [offset, setOffset] = useState(0);
+  const readings = useReadings(runId, offset, PAGE);
+  const last = Math.min(offset + PAGE, readings.data?.total ?? total);
+  return (
+    <div className="flex flex-col gap-3">
+      <div className="flex flex-wrap items-center gap-3">
+        <a href={readingsCsvUrl(runId)} download className={buttonClass('secondary')}>Download all readings (CSV)</a>
+        <p className="text-muted">{total} readings, oldest first. Times are the device&rsquo;s.</p>
+      </div>
+      {readings.isPending && <Loading label="Loading readings…" />}
+      {readings.isError && <LoadError error={readings.error} what="the readings" onRetry={() => readings.refetch()} />}
+      {readings.data && readings.data.readings.length > 0 && (
+        <Table>
+          <caption className="sr-only">Readings {offset + 1} to {last} of {readings.data.total}</caption>
+          <thead>
+            <tr><Th>Time</Th><Th>Phase</Th><Th>RPM</Th><Th>Throttle</Th><Th>Band</Th><Th>Speed</Th><Th>Hour meter</Th><Th>Note</Th></tr>
+          </thead>
+          <tbody>
+            {readings.data.readings.map((r) => (
+              <tr key={r.id}>
+                <Td className="figures whitespace-nowrap">{formatMoment(r.at)}</Td>
+                <Td>{r.phaseName}</Td>
+                <Td className="figures">{r.rpm}{r.rpmSource === 'frequency' && r.frequencyHz !== null ? ` (${r.frequencyHz} Hz)` : ''}</Td>
+                <Td>{r.throttle}</Td>
+                <Td className="whitespace-nowrap">{r.band ? <><span aria-hidden="true">{BAND_MARK[r.band]} </span>{BAND_WORDS[r.band]}</> : '—'}</Td>
+                <Td className="figures">{r.speedKn !== null ? `${r.speedKn} kn` : '—'}</Td>
+                <Td className="figures">{r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}</Td>
+                <Td>{r.note ?? ''}</Td>
+              </tr>
+            ))}
+          </tbody>
+        </Table>
+      )}
+      {readings.data && readings.data.total > PAGE && (
+        <nav aria-label="Readings pages" className="flex flex-wrap items-center gap-3">
+          <Button variant="secondary" disabled={offset === 0} onClick={() => setOffset(Math.max(0, offset - PAGE))}>Earlier</Button>
+          <span className="figures">{offset + 1}–{last} of {readings.data.total}</span>
+          <Button variant="secondary" disabled={last >= readings.data.total} onClick={() => setOffset(offset + PAGE)}>Later</Button>
+        </nav>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,42 @@
+import { installationLabel, tachSourceLabel } from '../../../../shared/engines/engine.schema';
+import type { EngineView } from '../../../../shared/vessels/vessel-view';
+import { formatDate, formatHours, formatRpmRange } from '../../../lib/format';
+
+const cycleWord = { 'two-stroke': 'two-stroke', 'four-stroke': 'four-stroke' } as const;
+const orDash = (value: string | null) => value ?? '—';
+
+/** Every recorded fact of an engine, for the workshop's engine page. */
+export function EngineFacts({ engine }: { engine: EngineView }) {
+  const propeller = [
+    engine.propBlades !== null ? `${engine.propBlades} blades` : null,
+    engine.propDiameterIn !== null ? `${engine.propDiameterIn} in diameter` : null,
+    engine.propPitchIn !== null ? `${engine.propPitchIn} in pitch` : null,
+  ].filter(Boolean).join(', ');
+  const tach = [
+    tachSourceLabel[engine.tachSource],
+    engine.poles !== null ? `${engine.poles} poles` : null,
+    engine.pulleyRatio !== null ? `pulley ratio ${engine.pulleyRatio}` : null,
+  ].filter(Boolean).join(', ');
+  const facts: Array<[string, string, boolean?]> = [
+    ['Serial number', engine.serialNumber, true],
+    ['Installation', installationLabel[engine.installation]],
+    ['Fuel and cycle', `${engine.fuel === 'petrol' ? 'Petrol' : 'Diesel'}, ${cycleWord[engine.cycle]}`],
+    ['Rated power', engine.ratedPowerKw !== null ? `${engine.ratedPowerKw} kW` : '—', true],
+    ['Rated full throttle', `${formatRpmRange(engine.ratedRpmMin, engine.ratedRpmMax)} RPM`, true],
+    ['Gear ratio', engine.gearRatio !== null ? `${engine.gearRatio}:1` : '—', true],
+    ['Propeller', propeller || '—'],
+    ['Tachometer signal', tach],
+    ['Hour meter at commissioning', engine.hourMeterAtCommissioning !== null ? `${formatHours(engine.hourMeterAtCommissioning)} h` : '—', true],
+    ['Commissioned', orDash(engine.commissionedOn && formatDate(engine.commissionedOn))],
+  ];
+  return (
+    <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[auto_1fr]">
+      {facts.map(([label, value, figures]) => (
+        <div key={label} className="contents">
+          <dt className="text-muted">{label}</dt>
+          <dd className={figures ? 'figures break-all' : undefined}>{value}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}

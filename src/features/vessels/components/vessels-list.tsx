@@ -1,0 +1,70 @@
+import { Link } from 'react-router-dom';
+import { vesselTypeLabel } from '../../../../shared/vessels/vessel.schema';
+import type { VesselView } from '../../../../shared/vessels/vessel-view';
+import { Card } from '../../../components/ui/card';
+import { Table, Td } from '../../../components/ui/table';
+import { useSorting, type SortValue } from '../use-sorting';
+import { SortableTh, SortSelect } from './sortable-th';
+import { ArchivedPill } from './status-pills';
+
+type Column = 'name' | 'type' | 'homePort' | 'skippers' | 'engines';
+const columns: Record<Column, (v: VesselView) => SortValue> = {
+  name: (v) => v.name,
+  type: (v) => vesselTypeLabel[v.type],
+  homePort: (v) => v.homePort,
+  skippers: (v) => v.skippers.map((s) => s.name).join(', '),
+  engines: (v) => v.engines.length,
+};
+const labels: Record<Column, string> = { name: 'Vessel', type: 'Type', homePort: 'Home port', skippers: 'Skippers', engines: 'Engines' };
+
+const enginesText = (v: VesselView) =>
+  v.engines.length === 0 ? 'none yet' : v.engines.map((e) => `${e.position} ${e.maker} ${e.model}`).join('; ');
+
+/** Vessels as a sortable table on wide screens and as cards on phones. */
+export function VesselsList({ vessels }: { vessels: VesselView[] }) {
+  const { sorted, sort, sortBy, setSort } = useSorting<VesselView, Column>(vessels, columns, { key: 'name', direction: 'ascending' });
+  if (vessels.length === 0) return <p className="py-4">No vessels match. Change the search or the filter, or add a vessel.</p>;
+  return (
+    <>
+      {/* display:none keeps the hidden layout out of the accessibility tree. */}
+      <div className="hidden sm:block">
+        <Table>
+          <caption className="sr-only">Vessels, sortable by each column</caption>
+          <thead>
+            <tr>{(Object.keys(labels) as Column[]).map((c) => <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />)}</tr>
+          </thead>
+          <tbody>
+            {sorted.map((v) => (
+              <tr key={v.id}>
+                <Td>
+                  <Link to={`/vessels/${v.id}`} className="font-bold underline underline-offset-4">{v.name}</Link>{' '}
+                  <ArchivedPill archivedAt={v.archivedAt} />
+                  {v.hin && <p className="figures text-sm text-muted">{v.hin}</p>}
+                </Td>
+                <Td>{vesselTypeLabel[v.type]}{v.lengthM !== null && <span className="figures text-muted"> · {v.lengthM} m</span>}</Td>
+                <Td>{v.homePort || <span className="text-muted">—</span>}</Td>
+                <Td>{v.skippers.map((s) => s.name).join(', ') || <span className="text-muted">none linked</span>}</Td>
+                <Td><span className="figures font-bold">{v.engines.length}</span> <span className="text-sm text-muted">{enginesText(v)}</span></Td>
+              </tr>
+            ))}
+          </tbody>
+        </Table>
+      </div>
+      <div className="flex flex-col gap-3 sm:hidden">
+        <SortSelect options={labels} sort={sort} onChange={setSort} />
+        <ul className="flex flex-col gap-3" aria-label="Vessels">
+          {sorted.map((v) => (
+            <li key={v.id}>
+              <Card level={3} title={<Link to={`/vessels/${v.id}`} className="flex min-h-touch items-center underline underline-offset-4">{v.name}</Link>}>
+                <ArchivedPill archivedAt={v.archivedAt} />
+                <p className="text-muted">{[vesselTypeLabel[v.type], v.lengthM !== null ? `${v.lengthM} m` : null, v.homePort].filter(Boolean).join(' · ')}</p>
+                <p><span className="text-muted">Skippers </span>{v.skippers.map((s) => s.name).join(', ') || 'none linked'}</p>
+                <p><span className="text-muted">Engines </span>{enginesText(v)}</p>
+              </Card>
+            </li>
+          ))}
+        </ul>
+      </div>
+    </>
+  );
+}
