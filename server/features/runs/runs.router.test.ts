@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { AuditEntry } from '../audit/audit-entry.entity.js';
 import { addOtherWorkshop, DEMO, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
 
 let server: TestServer;
@@ -30,6 +31,8 @@ describe('assigning a program to an engine', () => {
     expect(created.status).toBe(201);
     const run = created.body.run;
     expect(run).toMatchObject({ state: 'planned', vessel: { name: 'Blue Tern' }, engine: { position: 'port' } });
+    const trail = await server.dataSource.getRepository(AuditEntry).findBy({ recordId: run.id });
+    expect(trail).toMatchObject([{ action: 'run-assigned', actorName: 'Ivo Brandt', detail: copy.definition.name }]);
     // Share bands are resolved against this engine's rated maximum (6000 rpm in the demo data).
     for (const band of Object.values(run.bands) as Array<{ rpmMax: number }>) expect(band.rpmMax).toBeLessThanOrEqual(port.ratedRpmMax);
 

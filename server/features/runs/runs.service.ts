@@ -5,6 +5,7 @@ import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import { checkProgramForEngine, resolvePhaseBand } from '../../../shared/programs/resolve-band.js';
 import { OPEN_RUN_STATES, type AssignProgramInput } from '../../../shared/runs/run.schema.js';
 import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { Program } from '../programs/program.entity.js';
 import { Engine } from '../vessels/engine.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
@@ -34,6 +35,7 @@ export class RunsService {
         currentPhaseId: null, notes: '', clockSkewMs: null, lastEventAt: null, seq: await reserveChangeSeq(manager),
       });
       await manager.getRepository(Run).insert(run);
+      await recordAudit(manager, { workshopId: user.workshopId, recordType: 'run', recordId: run.id, action: 'run-assigned', actor: { id: user.id, name: user.name }, at: new Date(), detail: program.definition.name });
       return run;
     });
   }
