@@ -82,6 +82,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'engines/:id/checklist', lazy: () => import('./routes/engine-checklist'), errorElement },
             { path: 'runs', lazy: () => import('./routes/runs'), errorElement },
             { path: 'runs/:id', lazy: () => import('./routes/run-review'), errorElement },
+            { path: 'programs', lazy: () => import('./routes/programs'), errorElement },
+            { path: 'programs/:id', lazy: () => import('./routes/program'), errorElement },
             { path: '*', lazy: () => import('./routes/not-found'), errorElement },
           ],
         },

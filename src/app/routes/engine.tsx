@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { EngineRow } from '../../../shared/vessels/vessel-view';
+import { AssignProgram } from '../../features/programs/components/assign-program';
 import { AttachmentPanel } from '../../features/attachments/components/attachment-panel';
 import { useVesselList } from '../../features/vessels/api';
 import { useArchiveEngine, useEngine } from '../../features/vessels/engine-api';
@@ -58,6 +59,7 @@ function EnginePage({ id }: { id: string }) {
         </ButtonLink>
       </Card>
       <DetailsCard engine={e} />
+      {!e.archivedAt && <Card title="Assign break-in program" aria-label="Assign break-in program"><AssignProgram engineId={e.id} /></Card>}
       <Card title="Photos and documents">
         <AttachmentPanel recordType="engine" recordId={e.id} canAdd={!e.archivedAt} />
       </Card>

@@ -26,13 +26,13 @@ const navLinkNames = () =>
 describe('AppHeader', () => {
   it('shows a manager Workshop and Team', () => {
     renderHeader('manager');
-    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Deck', 'Team']);
+    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Programs', 'Deck', 'Team']);
     expect(screen.getByRole('link', { name: 'Team' })).toHaveAttribute('href', '/team');
   });
 
   it('shows a technician the workshop but not the team', () => {
     renderHeader('technician');
-    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Deck']);
+    expect(navLinkNames()).toEqual(['Workshop', 'Vessels', 'Runs', 'Programs', 'Deck']);
     expect(screen.queryByRole('link', { name: 'Team' })).not.toBeInTheDocument();
   });
 

@@ -1,0 +1,57 @@
+import { useFormContext } from 'react-hook-form';
+import { THROTTLE_CEILINGS } from '../../../../shared/programs/throttle';
+import { Button } from '../../../components/ui/button';
+import { Card } from '../../../components/ui/card';
+import { controlClass, Field, SelectField, TextField } from '../../../components/ui/field';
+import { errorAt, numberOptions, type ProgramFormValues } from '../form-values';
+import { BandFields } from './band-fields';
+import { RulesFields } from './rules-fields';
+
+interface PhaseFieldsProps {
+  index: number;
+  count: number;
+  onMove: (from: number, to: number) => void;
+  onRemove: (index: number) => void;
+}
+
+export const ceilingLabel: Record<(typeof THROTTLE_CEILINGS)[number], string> = {
+  idle: 'Idle',
+  half: 'Half throttle',
+  'three-quarter': 'Three-quarter throttle',
+  full: 'Full throttle',
+  varied: 'Varied (limits set by the rules)',
+};
+
+export function PhaseFields({ index, count, onMove, onRemove }: PhaseFieldsProps) {
+  const { register, formState } = useFormContext<ProgramFormValues>();
+  const base = `phases.${index}` as const;
+  const error = (name: string) => errorAt(formState.errors, `${base}.${name}`);
+  return (
+    <Card title={`Phase ${index + 1}`} level={3} aria-label={`Phase ${index + 1}`}>
+      <div className="flex flex-col gap-4">
+        <TextField label="Phase name" error={error('name')} {...register(`${base}.name`)} />
+        <div className="grid gap-3 sm:grid-cols-3">
+          <SelectField label="Performed by" error={error('performedBy')} {...register(`${base}.performedBy`)}>
+            <option value="workshop">The workshop</option>
+            <option value="skipper">The skipper</option>
+          </SelectField>
+          <TextField label="Required minutes in band" inputMode="numeric" error={error('requiredMinutes')}
+            {...register(`${base}.requiredMinutes`, numberOptions)} />
+          <SelectField label="Throttle ceiling" error={error('throttleCeiling')} {...register(`${base}.throttleCeiling`)}>
+            {THROTTLE_CEILINGS.map((ceiling) => <option key={ceiling} value={ceiling}>{ceilingLabel[ceiling]}</option>)}
+          </SelectField>
+        </div>
+        <BandFields index={index} />
+        <RulesFields index={index} />
+        <Field label="Instructions" error={error('instructions')}>
+          {(control) => <textarea {...control} rows={3} className={`${controlClass} py-2`} {...register(`${base}.instructions`)} />}
+        </Field>
+        <div className="flex flex-wrap gap-2">
+          <Button variant="secondary" disabled={index === 0} onClick={() => onMove(index, index - 1)}>Move up</Button>
+          <Button variant="secondary" disabled={index === count - 1} onClick={() => onMove(index, index + 1)}>Move down</Button>
+          <Button variant="secondary" disabled={count === 1} onClick={() => onRemove(index)}>Remove phase</Button>
+        </div>
+      </div>
+    </Card>
+  );
+}
