@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { VesselInput, ListStatus } from '../../../shared/vessels/vessel.schema';
 import type { SkipperOption, VesselView } from '../../../shared/vessels/vessel-view';
-import { api } from '../../lib/api-client';
+import { api, isApiError } from '../../lib/api-client';
+import { db } from '../../lib/db';
 import type { VesselSummary } from './types';
 
 export type VesselFilters = { q: string; status: ListStatus };
@@ -34,11 +35,26 @@ export const engineKeys = {
   archive: () => [...engineKeys.all, 'archive'] as const,
 };
 
+/**
+ * The user's vessels; with no network, the copy sync keeps on this device, so a skipper opening
+ * the app offshore still sees their boats.
+ */
+export async function fetchVesselList(signal?: AbortSignal): Promise<{ vessels: VesselSummary[] }> {
+  try {
+    return await api.get<{ vessels: VesselSummary[] }>('/api/vessels', signal);
+  } catch (error) {
+    if (!isApiError(error) || !error.isNetworkError) throw error;
+    const onDevice = (await db.vessels.toArray()).sort((a, b) => a.name.localeCompare(b.name));
+    if (onDevice.length === 0) throw error;
+    return { vessels: onDevice };
+  }
+}
+
 export const vesselQueries = {
   list: () =>
     queryOptions({
       queryKey: vesselKeys.list(),
-      queryFn: ({ signal }) => api.get<{ vessels: VesselSummary[] }>('/api/vessels', signal),
+      queryFn: ({ signal }) => fetchVesselList(signal),
       select: (data) => data.vessels,
     }),
   filtered: (filters: VesselFilters) =>
