@@ -4,6 +4,7 @@ import { RunEvents1796163247780 } from './1796163247780-RunEvents.js';
 import { RunPatches1796163491458 } from './1796163491458-RunPatches.js';
 import { WorkshopFleet1796163738205 } from './1796163738205-WorkshopFleet.js';
 import { ReviewSignOff1796163848909 } from './1796163848909-ReviewSignOff.js';
+import { RunEventLeanIndexes1796250000000 } from './1796250000000-RunEventLeanIndexes.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
-export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272, RunEvents1796163247780, RunPatches1796163491458, WorkshopFleet1796163738205, ReviewSignOff1796163848909];
+export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272, RunEvents1796163247780, RunPatches1796163491458, WorkshopFleet1796163738205, ReviewSignOff1796163848909, RunEventLeanIndexes1796250000000];

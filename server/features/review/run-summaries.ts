@@ -35,10 +35,9 @@ export class RunSummaries {
   private async refreshNow(workshopId: string): Promise<void> {
     const db = this.dataSource.manager;
     const mark = await this.mark(db, workshopId);
-    // Read by the change-number index (the unary + keeps SQLite off the workshop index, which
-    // would walk every event of the workshop); usually only a handful of rows are new.
+    // Read by the change-number index; usually only a handful of rows are new.
     const newer: Array<{ runId: string; seq: number }> = await db.query(
-      'SELECT "runId", "seq" FROM "run_event" WHERE "seq" > ? AND +"workshopId" = ? ORDER BY "seq"',
+      'SELECT "runId", "seq" FROM "run_event" WHERE "seq" > ? AND "workshopId" = ? ORDER BY "seq"',
       [mark, workshopId],
     );
     const changed = newer.reduce((latest, e) => latest.set(e.runId, e.seq), new Map<string, number>());

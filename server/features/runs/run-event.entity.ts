@@ -19,7 +19,7 @@ export class RunEventRow {
   @JoinColumn({ name: 'runId' })
   run?: Run;
 
-  @Index()
+  /** Kept for tenancy checks on a row; not indexed (nothing reads events by workshop alone). */
   @Column('text')
   workshopId: string;
 
