@@ -4,6 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { createApp } from './app.js';
 import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
+import { startWalCheckpointer } from './lib/wal-checkpointer.js';
 import { createLogger } from './lib/logger.js';
 import { prepareData } from './lib/bootstrap.js';
 import { systemClock } from './lib/clock.js';
@@ -21,6 +22,7 @@ async function main() {
   const config = loadConfig();
   const logger = createLogger(config.logLevel);
   const dataSource = await openDatabase(config.databasePath);
+  const checkpointer = await startWalCheckpointer(config.databasePath, logger);
   if ((await prepareData(dataSource, { seed: config.seed })).seeded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
@@ -44,6 +46,7 @@ async function main() {
     server.close(async () => {
       await reminders.stop();
       await mail.close();
+      await checkpointer.stop();
       await dataSource.destroy();
       process.exit(0);
     });
