@@ -20,13 +20,14 @@ export async function freePort(): Promise<number> {
 /**
  * Starts the server exactly as `npm start` does after its build step (tsx server/index.ts), on a
  * fresh data folder. This catches what vitest's transformer hides, such as untyped entity columns.
+ * With `nodeArgs` (e.g. --cpu-prof) the server runs in one node process through tsx's loader.
  */
-export async function startRealServer(env: Record<string, string> = {}): Promise<RealServer> {
+export async function startRealServer(env: Record<string, string> = {}, nodeArgs: string[] = []): Promise<RealServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-real-'));
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
   let output = '';
-  const child = spawn(process.execPath, [path.join('node_modules', 'tsx', 'dist', 'cli.mjs'), 'server/index.ts'], {
+  const child = spawn(process.execPath, nodeArgs.length === 0 ? [path.join('node_modules', 'tsx', 'dist', 'cli.mjs'), 'server/index.ts'] : [...nodeArgs, '--import', 'tsx', 'server/index.ts'], {
     env: { ...process.env, PORT: String(port), HOST: '127.0.0.1', RINGSEAT_DB: path.join(dir, 'ringseat.sqlite'), RINGSEAT_DATA_DIR: dir, LOG_LEVEL: 'warn', NODE_ENV: 'test', ...env },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
