@@ -1,12 +1,8 @@
-import { StrictMode } from 'react';
-import { createRoot } from 'react-dom/client';
-import { RouterProvider } from 'react-router-dom';
 import { registerSW } from 'virtual:pwa-register';
 import '@fontsource-variable/atkinson-hyperlegible-next';
 import '@fontsource-variable/atkinson-hyperlegible-mono';
 import './styles/app.css';
-import { AppProviders, createAppQueryClient } from './app/providers';
-import { createAppRouter } from './app/router';
+import { isDeckPath } from './features/deck/deck-navigation';
 import { applyDisplayMode, readDisplayMode, watchSystemScheme } from './lib/display-mode';
 
 applyDisplayMode(readDisplayMode());
@@ -21,23 +17,20 @@ if (import.meta.env.PROD) {
   registerSW({
     immediate: true,
     onNeedReload: () => {
-      if (!window.location.pathname.startsWith('/deck') || document.visibilityState === 'hidden') return window.location.reload();
+      if (!isDeckPath(window.location.pathname) || document.visibilityState === 'hidden') return window.location.reload();
       const reloadWhenHidden = () => document.visibilityState === 'hidden' && window.location.reload();
       document.addEventListener('visibilitychange', reloadWhenHidden);
     },
   });
 }
 
-const queryClient = createAppQueryClient();
-const router = createAppRouter(queryClient);
-
 const container = document.getElementById('root');
 if (!container) throw new Error('Ringseat: the page has no #root element.');
 
-createRoot(container).render(
-  <StrictMode>
-    <AppProviders queryClient={queryClient}>
-      <RouterProvider router={router} />
-    </AppProviders>
-  </StrictMode>,
-);
+/*
+ * Two apps share this page. /deck addresses get the deck app, which a phone opens cold at sea and
+ * which therefore loads only what the deck needs; every other address gets the workshop app.
+ * Moving between them is a page load (both are precached, so it works offline too).
+ */
+if (isDeckPath(window.location.pathname)) void import('./deck/deck-main').then((m) => m.renderDeckApp(container));
+else void import('./app/app-main').then((m) => m.renderWorkshopApp(container));

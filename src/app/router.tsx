@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { createBrowserRouter, Outlet, redirect, ScrollRestoration, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
 import type { QueryClient } from '@tanstack/react-query';
 import { authQueries } from '../features/auth/api';
@@ -5,10 +6,15 @@ import { teamQueries } from '../features/team/api';
 import { vesselQueries } from '../features/vessels/api';
 import { AppShell } from './shell/app-shell';
 import { RouteError } from './shell/route-error';
-import { safeNextPath, signInPath } from './shell/session';
+import { safeNextPath, signInPath } from './shell/sign-in-path';
 import { Splash } from './shell/splash';
 
 const errorElement = <RouteError />;
+
+function LoadDeckApp() {
+  useEffect(() => window.location.reload(), []);
+  return <Splash />;
+}
 
 function RootLayout() {
   return (
@@ -74,8 +80,8 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               lazy: () => import('./routes/team'),
               errorElement,
             },
-            { path: 'deck', lazy: () => import('./routes/deck'), errorElement },
-            { path: 'deck/:vesselId', lazy: () => import('./routes/deck-vessel'), errorElement },
+            // The deck is its own app (src/deck); the address is already /deck…, so load the page.
+            { path: 'deck/*', element: <LoadDeckApp /> },
             { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
             { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
             { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },

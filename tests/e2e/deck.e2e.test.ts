@@ -162,4 +162,24 @@ describe('on deck with no signal', () => {
       await context.close();
     }
   });
+
+  it('goes from the workshop to the deck and back through the main navigation, online and offline', async () => {
+    const context = await newContext(browser, baseURL);
+    const page = await context.newPage();
+    await signIn(page, 'ivo@tidewright.example');
+    await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 30_000 });
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.getByRole('link', { name: 'Deck' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 }).toBe(true);
+    await expect.poll(() => page.getByRole('link', { name: 'Go on deck with Blue Tern' }).isVisible()).toBe(true);
+    await page.getByRole('link', { name: 'Go on deck with Blue Tern' }).click();
+    await expect.poll(() => new URL(page.url()).pathname).toBe(`/deck/${ternId}`);
+    await context.setOffline(true);
+    await nav.getByRole('link', { name: 'Runs' }).click();
+    await expect.poll(() => new URL(page.url()).pathname, { timeout: 15_000 }).toBe('/runs');
+    await expect.poll(() => nav.getByRole('link', { name: 'Runs' }).getAttribute('aria-current'), { timeout: 15_000 }).toBe('page');
+    await nav.getByRole('link', { name: 'Deck' }).click();
+    await expect.poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 }).toBe(true);
+    await context.close();
+  }, 90_000);
 });

@@ -4,7 +4,7 @@ import { AcceptInviteForm } from '../../features/auth/components/accept-invite-f
 import { isApiError } from '../../lib/api-client';
 import { formatDate } from '../../lib/format';
 import { Alert } from '../../components/ui/alert';
-import { ButtonLink } from '../../components/ui/button';
+import { ButtonLink } from '../../components/ui/button-link';
 import { Loading } from '../../components/ui/status-message';
 import { AuthFrame } from '../shell/auth-frame';
 

@@ -1,5 +1,5 @@
 import { useLocation } from 'react-router-dom';
-import { ButtonLink } from '../../components/ui/button';
+import { ButtonLink } from '../../components/ui/button-link';
 import { useSessionUser } from '../shell/session';
 
 export function NotFoundRoute() {

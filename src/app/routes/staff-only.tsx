@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { ButtonLink } from '../../components/ui/button';
+import { ButtonLink } from '../../components/ui/button-link';
 import { useSessionUser } from '../shell/session';
 
 /** Workshop pages: a skipper who follows a link here is told so and sent back to their boats. */

@@ -2,7 +2,7 @@ import { useUsers } from '../../features/team/api';
 import { InviteForm } from '../../features/team/components/invite-form';
 import { PendingInvites, PeopleTable } from '../../features/team/components/team-lists';
 import { useVessels } from '../../features/vessels/api';
-import { ButtonLink } from '../../components/ui/button';
+import { ButtonLink } from '../../components/ui/button-link';
 import { Card } from '../../components/ui/card';
 import { LoadError, Loading } from '../../components/ui/status-message';
 import { useSessionUser } from '../shell/session';

@@ -4,7 +4,8 @@ import { useMe } from '../../features/auth/api';
 import { clearUserData } from '../../lib/db';
 import { AppHeader } from './app-header';
 import { Splash } from './splash';
-import { signInPath, type SessionContext } from './session';
+import { type SessionContext } from './session';
+import { signInPath } from './sign-in-path';
 
 /**
  * The signed-in frame: header, navigation and the page. The route loader checks the session on

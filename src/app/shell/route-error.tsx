@@ -1,19 +1,12 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
-import { isApiError } from '../../lib/api-client';
+import { describeError } from './error-words';
 import { Button, buttonClass } from '../../components/ui/button';
 
 function describe(error: unknown): { title: string; detail: string } {
   if (isRouteErrorResponse(error) && error.status === 404) {
     return { title: 'Page not found', detail: 'There is no page at this address.' };
   }
-  if (isApiError(error)) {
-    return { title: error.isNetworkError ? 'No connection' : 'The server could not answer', detail: error.message };
-  }
-  // A chunk that fails to load usually means a newer version of the app was installed.
-  if (error instanceof TypeError && /dynamically imported module|Importing a module script/i.test(error.message)) {
-    return { title: 'Ringseat was updated', detail: 'Reload the page to get the new version.' };
-  }
-  return { title: 'Something went wrong', detail: 'This page stopped working. Try again, or go back to the start.' };
+  return describeError(error);
 }
 
 /** The error element of every route: says what happened and always offers a way back. */

@@ -1,8 +1,8 @@
 import type { ComponentProps } from 'react';
-import { Link, type LinkProps } from 'react-router-dom';
 import { cx } from './cx';
 
-type Variant = 'primary' | 'secondary' | 'quiet';
+export type ButtonVariant = 'primary' | 'secondary' | 'quiet';
+type Variant = ButtonVariant;
 
 const base =
   'inline-flex min-h-touch min-w-touch items-center justify-center gap-2 rounded-md px-4 font-semibold ' +
@@ -36,8 +36,4 @@ export function Button({ variant = 'primary', pending, pendingLabel, className, 
       {pending && pendingLabel ? pendingLabel : children}
     </button>
   );
-}
-
-export function ButtonLink({ variant = 'primary', className, ...rest }: LinkProps & { variant?: Variant }) {
-  return <Link className={buttonClass(variant, className)} {...rest} />;
 }

@@ -1,7 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { AcceptInviteInput, InvitePreview, SessionUser, SignInInput } from '../../../shared/auth/auth.schema';
-import { api, isApiError } from '../../lib/api-client';
-import { cachedUser, clearUserData, rememberUser } from '../../lib/db';
+import { api } from '../../lib/api-client';
+import { fetchSessionUser, quietly, signOutOnServer } from './session-user';
+import { clearUserData, rememberUser } from '../../lib/db';
 
 export const authKeys = {
   all: ['auth'] as const,
@@ -12,37 +13,11 @@ export const authKeys = {
   acceptInvite: () => [...authKeys.all, 'accept-invite'] as const,
 };
 
-/** The device database must never stand in the way of signing in: a failure there is only logged. */
-const quietly = <T,>(work: Promise<T>) => work.catch((error: unknown) => console.warn('Ringseat: the device database failed.', error));
-
-/**
- * The signed-in user, or null when nobody is signed in (401 is an answer here, not an error).
- * With no network at all (at sea) the user the server last confirmed on this device stands in,
- * so the app opens offline; a 401 means signed out and clears the user's copies on the device.
- */
-async function fetchMe(signal?: AbortSignal): Promise<SessionUser | null> {
-  try {
-    const { user } = await api.get<{ user: SessionUser }>('/api/auth/me', signal);
-    await quietly(rememberUser(user));
-    return user;
-  } catch (error) {
-    if (isApiError(error) && error.status === 401) {
-      await quietly(clearUserData());
-      return null;
-    }
-    if (isApiError(error) && error.isNetworkError) {
-      const cached = await cachedUser().catch(() => null);
-      if (cached) return cached;
-    }
-    throw error;
-  }
-}
-
 export const authQueries = {
   me: () =>
     queryOptions({
       queryKey: authKeys.me(),
-      queryFn: ({ signal }) => fetchMe(signal),
+      queryFn: ({ signal }) => fetchSessionUser(signal),
       staleTime: 5 * 60_000,
       // Asked even when the browser reports no network: the answer then comes from the device.
       networkMode: 'always',
@@ -89,14 +64,7 @@ export function useSignOut() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey: authKeys.signOut(),
-    mutationFn: async () => {
-      try {
-        await api.post<void>('/api/auth/sign-out');
-      } catch (error) {
-        // Already signed out on the server (expired session): the goal is reached.
-        if (!(isApiError(error) && error.status === 401)) throw error;
-      }
-    },
+    mutationFn: signOutOnServer,
     onSuccess: () => replaceSession(queryClient, null),
   });
 }

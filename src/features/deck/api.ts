@@ -1,7 +1,7 @@
-import { useMutation } from '@tanstack/react-query';
 import { useLiveQuery } from 'dexie-react-hooks';
 import type { RunEvent } from '../../../shared/runs/run-event.schema';
 import { db, type OutingRecord, type RunRecord } from '../../lib/db';
+import { useDeviceWrite } from '../../lib/use-device-write';
 import type { VesselSummary } from '../vessels/types';
 import {
   activeOuting, advancePhase, changeOuting, logAlert, logReadings, startOuting, type PhotoInput, type ReadingEntry, type RunRef,
@@ -10,17 +10,8 @@ import {
 /*
  * The deck reads and writes the device database only, so it works with no network at all.
  * Reads are Dexie live queries (the screen follows every write, including the sync engine's);
- * writes are mutations that never wait for a connection (networkMode 'always').
+ * writes go straight to the device and never wait for a connection.
  */
-
-export const deckKeys = {
-  all: ['deck'] as const,
-  startOuting: () => [...deckKeys.all, 'start-outing'] as const,
-  changeOuting: () => [...deckKeys.all, 'change-outing'] as const,
-  logReading: () => [...deckKeys.all, 'log-reading'] as const,
-  advancePhase: () => [...deckKeys.all, 'advance-phase'] as const,
-  logAlert: () => [...deckKeys.all, 'log-alert'] as const,
-};
 
 export interface DeckVessel {
   id: string;
@@ -64,41 +55,19 @@ async function loadVesselDeck(vesselId: string): Promise<VesselDeck | null> {
 /** One vessel's deck: its runs, their events and the outing under way; null when unknown here. */
 export const useVesselDeck = (vesselId: string) => useLiveQuery(() => loadVesselDeck(vesselId), [vesselId]);
 
-const offline = { networkMode: 'always' } as const;
-
 export const useStartOuting = () =>
-  useMutation({
-    ...offline,
-    mutationKey: deckKeys.startOuting(),
-    mutationFn: ({ vesselId, runs }: { vesselId: string; runs: RunRef[] }) => startOuting(db, vesselId, runs, Date.now()),
-  });
+  useDeviceWrite(({ vesselId, runs }: { vesselId: string; runs: RunRef[] }) => startOuting(db, vesselId, runs, Date.now()));
 
 export const useChangeOuting = () =>
-  useMutation({
-    ...offline,
-    mutationKey: deckKeys.changeOuting(),
-    mutationFn: ({ outingId, runs, change }: { outingId: string; runs: RunRef[]; change: 'pause' | 'resume' | 'end' }) =>
-      changeOuting(db, outingId, runs, change, Date.now()),
-  });
+  useDeviceWrite(({ outingId, runs, change }: { outingId: string; runs: RunRef[]; change: 'pause' | 'resume' | 'end' }) =>
+    changeOuting(db, outingId, runs, change, Date.now()));
 
 export const useLogReading = () =>
-  useMutation({
-    ...offline,
-    mutationKey: deckKeys.logReading(),
-    mutationFn: ({ entries, photo }: { entries: ReadingEntry[]; photo?: PhotoInput }) => logReadings(db, entries, Date.now(), photo),
-  });
+  useDeviceWrite(({ entries, photo }: { entries: ReadingEntry[]; photo?: PhotoInput }) => logReadings(db, entries, Date.now(), photo));
 
 export const useAdvancePhase = () =>
-  useMutation({
-    ...offline,
-    mutationKey: deckKeys.advancePhase(),
-    mutationFn: ({ run, phaseId }: { run: RunRef; phaseId: string }) => advancePhase(db, run, phaseId, Date.now()),
-  });
+  useDeviceWrite(({ run, phaseId }: { run: RunRef; phaseId: string }) => advancePhase(db, run, phaseId, Date.now()));
 
 export const useLogAlert = () =>
-  useMutation({
-    ...offline,
-    mutationKey: deckKeys.logAlert(),
-    mutationFn: ({ run, alert }: { run: RunRef; alert: { code: string; message: string; phaseId?: string; sinceMs: number } }) =>
-      logAlert(db, run, alert, Date.now()),
-  });
+  useDeviceWrite(({ run, alert }: { run: RunRef; alert: { code: string; message: string; phaseId?: string; sinceMs: number } }) =>
+    logAlert(db, run, alert, Date.now()));

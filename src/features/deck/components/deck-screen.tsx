@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import type { Role } from '../../../../shared/auth/auth.schema';
-import { ButtonLink } from '../../../components/ui/button';
+import { DeckButtonLink } from './deck-link';
 import type { RunRecord } from '../../../lib/db';
 import { useAdvancePhase, useChangeOuting, useLogReading, useStartOuting, useVesselDeck, type VesselDeck } from '../api';
 import { useNow, useWakeLock } from '../device';
@@ -98,7 +98,7 @@ function NotOnDevice() {
     <div className="flex flex-col gap-3">
       <h1 className="text-2xl font-bold">Not on this device</h1>
       <p>This vessel is not stored on this phone. Open Ringseat once with a connection so your vessels and runs are copied here.</p>
-      <ButtonLink to="/deck" variant="secondary">Choose a vessel</ButtonLink>
+      <DeckButtonLink to="/deck" variant="secondary">Choose a vessel</DeckButtonLink>
     </div>
   );
 }

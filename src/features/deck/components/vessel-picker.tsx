@@ -1,5 +1,5 @@
 import { Card } from '../../../components/ui/card';
-import { ButtonLink } from '../../../components/ui/button';
+import { DeckButtonLink } from './deck-link';
 import { Pill } from '../../../components/ui/pill';
 import { useDeckVessels, type DeckVessel } from '../api';
 import { capitalise } from '../format';
@@ -47,7 +47,7 @@ function VesselEntry({ vessel }: { vessel: DeckVessel }) {
           <li key={engine.id} className="text-muted">{capitalise(engine.position)} · {engine.maker} {engine.model}: no break-in run yet</li>
         ))}
       </ul>
-      <ButtonLink to={`/deck/${vessel.id}`} className="mt-3 w-full" aria-label={`Go on deck with ${vessel.name}`}>On deck</ButtonLink>
+      <DeckButtonLink to={`/deck/${vessel.id}`} className="mt-3 w-full" aria-label={`Go on deck with ${vessel.name}`}>On deck</DeckButtonLink>
     </Card>
   );
 }

@@ -1,0 +1,96 @@
+import { Component, useEffect, useState, type ReactNode } from 'react';
+import type { SessionUser } from '../../shared/auth/auth.schema';
+import { describeError } from '../app/shell/error-words';
+import { signInPath } from '../app/shell/sign-in-path';
+import { Splash } from '../app/shell/splash';
+import { Button } from '../components/ui/button';
+import { fetchSessionUser } from '../features/auth/session-user';
+import { usePathname } from '../features/deck/deck-navigation';
+import { DeckHeader } from './deck-header';
+import { DeckHome, deckPageFor, DeckVesselPage } from './deck-pages';
+
+type Session = { state: 'checking' } | { state: 'signed-in'; user: SessionUser } | { state: 'failed'; error: unknown };
+
+/**
+ * Who is signed in: the server's answer, or with no network the user it last confirmed on this
+ * device (fetchSessionUser). Nobody signed in means the sign-in page, coming back here after.
+ */
+function useDeckSession(): Session {
+  const [session, setSession] = useState<Session>({ state: 'checking' });
+  useEffect(() => {
+    const controller = new AbortController();
+    fetchSessionUser(controller.signal).then(
+      (user) => {
+        if (user) setSession({ state: 'signed-in', user });
+        else window.location.replace(signInPath(window.location.pathname + window.location.search));
+      },
+      (error: unknown) => !controller.signal.aborted && setSession({ state: 'failed', error }),
+    );
+    return () => controller.abort();
+  }, []);
+  return session;
+}
+
+function Problem({ error }: { error: unknown }) {
+  const { title, detail } = describeError(error);
+  return (
+    <div role="alert" className="mx-auto flex max-w-xl flex-col gap-4 px-3 py-10">
+      <h1 className="text-2xl font-bold">{title}</h1>
+      <p>{detail}</p>
+      <div className="flex flex-wrap gap-3">
+        <Button onClick={() => window.location.reload()}>Try again</Button>
+        <a href="/" className="self-center font-semibold">Back to the start</a>
+      </div>
+    </div>
+  );
+}
+
+/** A page that throws shows what happened instead of a blank screen. */
+class PageBoundary extends Component<{ children: ReactNode; resetKey: string }, { error: unknown }> {
+  state: { error: unknown } = { error: null };
+
+  static getDerivedStateFromError(error: unknown) {
+    return { error };
+  }
+
+  componentDidUpdate(previous: { resetKey: string }) {
+    if (previous.resetKey !== this.props.resetKey && this.state.error !== null) this.setState({ error: null });
+  }
+
+  render() {
+    return this.state.error !== null ? <Problem error={this.state.error} /> : this.props.children;
+  }
+}
+
+/** An address the deck does not have belongs to the workshop app: load it. */
+function LeaveDeck() {
+  useEffect(() => window.location.reload(), []);
+  return <Splash />;
+}
+
+/**
+ * The deck app: what a phone opens at sea, from the home screen, often with no signal. It is
+ * loaded instead of the workshop app for /deck addresses (src/main.tsx) and carries only what the
+ * deck needs: no router, no server-state library, no workshop screens (DEVELOPERS.md).
+ */
+export function DeckApp() {
+  const session = useDeckSession();
+  const pathname = usePathname();
+  if (session.state === 'checking') return <Splash />;
+  if (session.state === 'failed') return <Problem error={session.error} />;
+  const page = deckPageFor(pathname);
+  if (!page) return <LeaveDeck />;
+  return (
+    <div className="flex min-h-dvh flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-40 focus:bg-surface focus:p-3">
+        Skip to content
+      </a>
+      <DeckHeader user={session.user} />
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-3 pb-bottom-bar pt-4 sm:px-5 sm:pb-10 sm:pt-6">
+        <PageBoundary resetKey={pathname}>
+          {page.page === 'home' ? <DeckHome /> : <DeckVesselPage vesselId={page.vesselId} user={session.user} />}
+        </PageBoundary>
+      </main>
+    </div>
+  );
+}

@@ -1,0 +1,47 @@
+import { useState } from 'react';
+import type { SessionUser } from '../../shared/auth/auth.schema';
+import { signOutOnServer } from '../features/auth/session-user';
+import { DeckLink } from '../features/deck/components/deck-link';
+import { errorMessage } from '../lib/api-client';
+import { clearUserData } from '../lib/db';
+import { navBarClass, navIcons, navLinkClass } from '../app/shell/nav-look';
+import { navItemsFor } from '../app/shell/nav-items';
+import { SiteHeader } from '../app/shell/site-header';
+
+/** The same header and navigation as the workshop app; links outside the deck load that app. */
+export function DeckHeader({ user }: { user: SessionUser }) {
+  const [signOut, setSignOut] = useState<{ pending: boolean; error: string | null }>({ pending: false, error: null });
+  const onSignOut = async () => {
+    setSignOut({ pending: true, error: null });
+    try {
+      await signOutOnServer();
+      await clearUserData().catch(() => undefined);
+      window.location.replace('/sign-in');
+    } catch (error) {
+      setSignOut({ pending: false, error: errorMessage(error) });
+    }
+  };
+  return (
+    <SiteHeader user={user}
+      home={(className, content) => <a href="/" className={className}>{content}</a>}
+      nav={(
+        <nav aria-label="Main" className={navBarClass}>
+          <ul className="flex sm:gap-1">
+            {navItemsFor(user.role).map(({ label, to, icon }) => {
+              const Icon = navIcons[icon];
+              const here = to === '/deck';
+              return (
+                <li key={to} className="flex-1 sm:flex-none">
+                  <DeckLink to={to} className={navLinkClass(here)} aria-current={here ? 'page' : undefined}>
+                    <Icon />
+                    <span>{label}</span>
+                  </DeckLink>
+                </li>
+              );
+            })}
+          </ul>
+        </nav>
+      )}
+      signOut={{ ...signOut, onSignOut: () => void onSignOut() }} />
+  );
+}
