@@ -1,11 +1,12 @@
 import type { RequestHandler } from 'express';
-import type { z } from 'zod';
+import { z } from 'zod';
 import type { FieldError } from '../../shared/problem/problem.schema.js';
 import { ValidationError } from '../lib/errors.js';
 
-type Schemas = { body?: z.ZodType; query?: z.ZodType; params?: z.ZodType };
+/** Classic and zod/mini schemas alike (the deck-path schemas in shared/ are on zod/mini). */
+type Schemas = { body?: z.core.$ZodType; query?: z.core.$ZodType; params?: z.core.$ZodType };
 
-export function fieldErrors(error: z.ZodError, prefix?: string): FieldError[] {
+export function fieldErrors(error: z.core.$ZodError, prefix?: string): FieldError[] {
   return error.issues.map((issue) => ({
     field: [prefix, ...issue.path.map(String)].filter(Boolean).join('.') || '(request)',
     message: issue.message,
@@ -23,7 +24,7 @@ export function validate(schemas: Schemas): RequestHandler {
       const schema = schemas[part];
       if (!schema) continue;
       const raw = part === 'body' && req.body === undefined ? {} : req[part];
-      const result = schema.safeParse(raw);
+      const result = z.safeParse(schema, raw);
       if (!result.success) {
         errors.push(...fieldErrors(result.error, part === 'body' ? undefined : part));
         continue;

@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 
 /** RFC 9457 problem details, as every non-2xx answer of the API carries them. */
 export const FieldErrorSchema = z.object({
@@ -11,9 +12,9 @@ export type FieldError = z.infer<typeof FieldErrorSchema>;
 export const ProblemSchema = z.object({
   type: z.string(),
   title: z.string(),
-  status: z.number().int(),
-  detail: z.string().optional(),
-  instance: z.string().optional(),
-  errors: z.array(FieldErrorSchema).optional(),
+  status: z.number().check(z.int()),
+  detail: z.optional(z.string()),
+  instance: z.optional(z.string()),
+  errors: z.optional(z.array(FieldErrorSchema)),
 });
 export type Problem = z.infer<typeof ProblemSchema>;

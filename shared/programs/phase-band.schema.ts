@@ -1,19 +1,20 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 
 /** Highest rpm the app accepts anywhere; no engine in scope turns faster (our sanity bound). */
 export const RPM_UPPER_BOUND = 20_000;
 
 const rpmField = (label: string, key: string) =>
-  z
-    .number({ error: `Enter the ${label} (${key}) as a number of rpm.` })
-    .min(0, { error: `The ${label} (${key}) cannot be negative.` })
-    .max(RPM_UPPER_BOUND, { error: `The ${label} (${key}) must be at most ${RPM_UPPER_BOUND} rpm.` });
+  z.number({ error: `Enter the ${label} (${key}) as a number of rpm.` }).check(
+    z.minimum(0, { error: `The ${label} (${key}) cannot be negative.` }),
+    z.maximum(RPM_UPPER_BOUND, { error: `The ${label} (${key}) must be at most ${RPM_UPPER_BOUND} rpm.` }),
+  );
 
 const shareField = (label: string, key: string) =>
-  z
-    .number({ error: `Enter the ${label} (${key}) as a share of rated full-throttle rpm, from 0 to 1.` })
-    .min(0, { error: `The ${label} (${key}) must be a share from 0 to 1; it is below 0.` })
-    .max(1, { error: `The ${label} (${key}) must be a share from 0 to 1; it is above 1.` });
+  z.number({ error: `Enter the ${label} (${key}) as a share of rated full-throttle rpm, from 0 to 1.` }).check(
+    z.minimum(0, { error: `The ${label} (${key}) must be a share from 0 to 1; it is below 0.` }),
+    z.maximum(1, { error: `The ${label} (${key}) must be a share from 0 to 1; it is above 1.` }),
+  );
 
 /*
  * "Overlapping or inverted bands" are rejected. We read that as a band whose own limits
@@ -26,10 +27,12 @@ export const AbsoluteBandSchema = z
     rpmMin: rpmField('lowest rpm of the band', 'rpmMin'),
     rpmMax: rpmField('highest rpm of the band', 'rpmMax'),
   })
-  .refine((band) => band.rpmMin < band.rpmMax, {
-    error: 'The highest rpm of the band (rpmMax) must be above its lowest rpm (rpmMin).',
-    path: ['rpmMax'],
-  });
+  .check(
+    z.refine((band) => band.rpmMin < band.rpmMax, {
+      error: 'The highest rpm of the band (rpmMax) must be above its lowest rpm (rpmMin).',
+      path: ['rpmMax'],
+    }),
+  );
 
 export const ShareOfRatedBandSchema = z
   .object({
@@ -37,10 +40,12 @@ export const ShareOfRatedBandSchema = z
     shareMin: shareField('lowest share of the band', 'shareMin'),
     shareMax: shareField('highest share of the band', 'shareMax'),
   })
-  .refine((band) => band.shareMin < band.shareMax, {
-    error: 'The highest share of the band (shareMax) must be above its lowest share (shareMin).',
-    path: ['shareMax'],
-  });
+  .check(
+    z.refine((band) => band.shareMin < band.shareMax, {
+      error: 'The highest share of the band (shareMax) must be above its lowest share (shareMin).',
+      path: ['shareMax'],
+    }),
+  );
 
 export const PhaseBandSchema = z.discriminatedUnion('kind', [AbsoluteBandSchema, ShareOfRatedBandSchema], {
   error: 'The band kind (kind) must be "absolute" (rpm) or "share-of-rated" (share of rated full-throttle rpm).',

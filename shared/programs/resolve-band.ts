@@ -1,20 +1,23 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 import type { RpmBand } from './phase-band.schema';
 import type { Phase, Program } from './program.schema';
 
 export const EngineRatingSchema = z
   .object({
-    ratedRpmMin: z.number({ error: 'Enter the lowest rated full-throttle rpm (ratedRpmMin).' }).positive({
-      error: 'The lowest rated full-throttle rpm (ratedRpmMin) must be more than zero.',
-    }),
-    ratedRpmMax: z.number({ error: 'Enter the highest rated full-throttle rpm (ratedRpmMax).' }).positive({
-      error: 'The highest rated full-throttle rpm (ratedRpmMax) must be more than zero.',
-    }),
+    ratedRpmMin: z
+      .number({ error: 'Enter the lowest rated full-throttle rpm (ratedRpmMin).' })
+      .check(z.positive({ error: 'The lowest rated full-throttle rpm (ratedRpmMin) must be more than zero.' })),
+    ratedRpmMax: z
+      .number({ error: 'Enter the highest rated full-throttle rpm (ratedRpmMax).' })
+      .check(z.positive({ error: 'The highest rated full-throttle rpm (ratedRpmMax) must be more than zero.' })),
   })
-  .refine((r) => r.ratedRpmMin < r.ratedRpmMax, {
-    error: 'The highest rated full-throttle rpm (ratedRpmMax) must be above the lowest (ratedRpmMin).',
-    path: ['ratedRpmMax'],
-  });
+  .check(
+    z.refine((r) => r.ratedRpmMin < r.ratedRpmMax, {
+      error: 'The highest rated full-throttle rpm (ratedRpmMax) must be above the lowest (ratedRpmMin).',
+      path: ['ratedRpmMax'],
+    }),
+  );
 /** The engine's rated full-throttle rpm range, from its maker. */
 export type EngineRating = z.infer<typeof EngineRatingSchema>;
 

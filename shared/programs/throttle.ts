@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 
 /** Where the skipper's throttle lever sits, as logged with a reading. */
 export const THROTTLE_POSITIONS = ['idle', 'quarter', 'half', 'three-quarter', 'full'] as const;

@@ -56,6 +56,10 @@ describe('run event schemas', () => {
     expect(ReadingSchema.safeParse({ ...valid, rpmSource: 'frequency', frequencyHz: 280 }).success).toBe(true);
   });
 
+  it("word a field without its own message in zod's English, not a bare \"Invalid input\"", () => {
+    expect(firstIssue({ ...valid, lat: 'north' })).toEqual({ field: 'lat', message: 'Invalid input: expected number, received string' });
+  });
+
   it('reject an unknown event kind', () => {
     expect(firstIssue({ ...valid, kind: 'anchor-drop' })).toEqual({
       field: 'kind',

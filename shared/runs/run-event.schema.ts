@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 import { RPM_UPPER_BOUND } from '../programs/phase-band.schema';
 import { ThrottlePositionSchema } from '../programs/throttle';
 
@@ -11,12 +12,11 @@ const eventBase = {
   id: z.uuid({ error: 'The event id (id) must be a UUID made on the device.' }),
   at: z
     .number({ error: 'The event time (at) must be a time in epoch milliseconds.' })
-    .int({ error: 'The event time (at) must be whole milliseconds.' })
-    .nonnegative({ error: 'The event time (at) cannot be before 1970.' }),
-  engineId: z.string({ error: 'Choose the engine (engineId).' }).trim().min(1, { error: 'Choose the engine (engineId).' }),
+    .check(z.int({ error: 'The event time (at) must be whole milliseconds.' }), z.nonnegative({ error: 'The event time (at) cannot be before 1970.' })),
+  engineId: z.string({ error: 'Choose the engine (engineId).' }).check(z.trim(), z.minLength(1, { error: 'Choose the engine (engineId).' })),
 };
 
-const phaseIdField = z.string({ error: 'Choose the phase (phaseId).' }).trim().min(1, { error: 'Choose the phase (phaseId).' });
+const phaseIdField = z.string({ error: 'Choose the phase (phaseId).' }).check(z.trim(), z.minLength(1, { error: 'Choose the phase (phaseId).' }));
 
 export const SessionStartSchema = z.object({ kind: z.literal('session-start'), ...eventBase });
 export type SessionStart = z.infer<typeof SessionStartSchema>;
@@ -34,21 +34,45 @@ export const RpmSourceSchema = z.enum(['tachometer', 'frequency', 'estimate'], {
  * in scope does 80 kn or burns 400 L/h per engine), there to catch a slipped finger.
  */
 const readingExtras = {
-  speedSource: z.enum(['gps', 'typed'], { error: 'Where the speed came from (speedSource) must be gps or typed.' }).optional(),
-  fuelLph: z
-    .number({ error: 'The fuel flow (fuelLph) must be a number of litres per hour.' })
-    .nonnegative({ error: 'The fuel flow (fuelLph) cannot be negative.' })
-    .max(400, { error: 'The fuel flow (fuelLph) must be at most 400 L/h.' })
-    .optional(),
-  hourMeter: z
-    .number({ error: 'The hour meter (hourMeter) must be a number of hours.' })
-    .nonnegative({ error: 'The hour meter (hourMeter) cannot be negative.' })
-    .max(100_000, { error: 'The hour meter (hourMeter) must be at most 100,000 h.' })
-    .optional(),
-  coolantOk: z.boolean({ error: 'The cooling-water tell-tale check (coolantOk) must be yes or no.' }).optional(),
-  lat: z.number().min(-90, { error: 'The latitude (lat) must be between -90 and 90.' }).max(90, { error: 'The latitude (lat) must be between -90 and 90.' }).optional(),
-  lon: z.number().min(-180, { error: 'The longitude (lon) must be between -180 and 180.' }).max(180, { error: 'The longitude (lon) must be between -180 and 180.' }).optional(),
-  note: z.string({ error: 'The note (note) must be text.' }).trim().max(1000, { error: 'The note (note) can have at most 1000 characters.' }).optional(),
+  speedSource: z.optional(z.enum(['gps', 'typed'], { error: 'Where the speed came from (speedSource) must be gps or typed.' })),
+  fuelLph: z.optional(
+    z
+      .number({ error: 'The fuel flow (fuelLph) must be a number of litres per hour.' })
+      .check(
+        z.nonnegative({ error: 'The fuel flow (fuelLph) cannot be negative.' }),
+        z.maximum(400, { error: 'The fuel flow (fuelLph) must be at most 400 L/h.' }),
+      ),
+  ),
+  hourMeter: z.optional(
+    z
+      .number({ error: 'The hour meter (hourMeter) must be a number of hours.' })
+      .check(
+        z.nonnegative({ error: 'The hour meter (hourMeter) cannot be negative.' }),
+        z.maximum(100_000, { error: 'The hour meter (hourMeter) must be at most 100,000 h.' }),
+      ),
+  ),
+  coolantOk: z.optional(z.boolean({ error: 'The cooling-water tell-tale check (coolantOk) must be yes or no.' })),
+  lat: z.optional(
+    z
+      .number()
+      .check(
+        z.minimum(-90, { error: 'The latitude (lat) must be between -90 and 90.' }),
+        z.maximum(90, { error: 'The latitude (lat) must be between -90 and 90.' }),
+      ),
+  ),
+  lon: z.optional(
+    z
+      .number()
+      .check(
+        z.minimum(-180, { error: 'The longitude (lon) must be between -180 and 180.' }),
+        z.maximum(180, { error: 'The longitude (lon) must be between -180 and 180.' }),
+      ),
+  ),
+  note: z.optional(
+    z
+      .string({ error: 'The note (note) must be text.' })
+      .check(z.trim(), z.maxLength(1000, { error: 'The note (note) can have at most 1000 characters.' })),
+  ),
 };
 
 export const ReadingSchema = z
@@ -58,24 +82,30 @@ export const ReadingSchema = z
     phaseId: phaseIdField,
     rpm: z
       .number({ error: 'Enter the engine speed (rpm) as a number.' })
-      .min(0, { error: 'The engine speed (rpm) cannot be negative.' })
-      .max(RPM_UPPER_BOUND, { error: `The engine speed (rpm) must be at most ${RPM_UPPER_BOUND} rpm.` }),
+      .check(
+        z.minimum(0, { error: 'The engine speed (rpm) cannot be negative.' }),
+        z.maximum(RPM_UPPER_BOUND, { error: `The engine speed (rpm) must be at most ${RPM_UPPER_BOUND} rpm.` }),
+      ),
     throttle: ThrottlePositionSchema,
-    speedKn: z
-      .number({ error: 'The speed over ground (speedKn) must be a number of knots.' })
-      .nonnegative({ error: 'The speed over ground (speedKn) cannot be negative.' })
-      .optional(),
-    rpmSource: RpmSourceSchema.optional(),
-    frequencyHz: z
-      .number({ error: 'The measured frequency (frequencyHz) must be a number of hertz.' })
-      .positive({ error: 'The measured frequency (frequencyHz) must be more than zero.' })
-      .optional(),
+    speedKn: z.optional(
+      z
+        .number({ error: 'The speed over ground (speedKn) must be a number of knots.' })
+        .check(z.nonnegative({ error: 'The speed over ground (speedKn) cannot be negative.' })),
+    ),
+    rpmSource: z.optional(RpmSourceSchema),
+    frequencyHz: z.optional(
+      z
+        .number({ error: 'The measured frequency (frequencyHz) must be a number of hertz.' })
+        .check(z.positive({ error: 'The measured frequency (frequencyHz) must be more than zero.' })),
+    ),
     ...readingExtras,
   })
-  .refine((r) => r.rpmSource !== 'frequency' || r.frequencyHz !== undefined, {
-    error: 'Enter the measured frequency (frequencyHz) when the rpm comes from a frequency.',
-    path: ['frequencyHz'],
-  });
+  .check(
+    z.refine((r) => r.rpmSource !== 'frequency' || r.frequencyHz !== undefined, {
+      error: 'Enter the measured frequency (frequencyHz) when the rpm comes from a frequency.',
+      path: ['frequencyHz'],
+    }),
+  );
 export type Reading = z.infer<typeof ReadingSchema>;
 
 /** The skipper (or workshop) confirms that `phaseId` now starts. */
@@ -86,9 +116,9 @@ export type PhaseAdvance = z.infer<typeof PhaseAdvanceSchema>;
 export const AlertEventSchema = z.object({
   kind: z.literal('alert'),
   ...eventBase,
-  phaseId: phaseIdField.optional(),
-  code: z.string({ error: 'The alert code (code) must be text.' }).trim().min(1).max(64),
-  message: z.string({ error: 'The alert message (message) must be text.' }).trim().min(1).max(500),
+  phaseId: z.optional(phaseIdField),
+  code: z.string({ error: 'The alert code (code) must be text.' }).check(z.trim(), z.minLength(1), z.maxLength(64)),
+  message: z.string({ error: 'The alert message (message) must be text.' }).check(z.trim(), z.minLength(1), z.maxLength(500)),
 });
 export type AlertEvent = z.infer<typeof AlertEventSchema>;
 
@@ -96,7 +126,13 @@ export type AlertEvent = z.infer<typeof AlertEventSchema>;
 export const NoteEventSchema = z.object({
   kind: z.literal('note'),
   ...eventBase,
-  text: z.string({ error: 'Write the note (text).' }).trim().min(1, { error: 'Write the note (text).' }).max(2000, { error: 'The note (text) can have at most 2000 characters.' }),
+  text: z
+    .string({ error: 'Write the note (text).' })
+    .check(
+      z.trim(),
+      z.minLength(1, { error: 'Write the note (text).' }),
+      z.maxLength(2000, { error: 'The note (text) can have at most 2000 characters.' }),
+    ),
 });
 export type NoteEvent = z.infer<typeof NoteEventSchema>;
 

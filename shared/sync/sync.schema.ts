@@ -1,4 +1,5 @@
-import { z } from 'zod';
+import { z } from 'zod/mini';
+import '../zod-english';
 import { RunEventSchema } from '../runs/run-event.schema';
 
 /*
@@ -26,10 +27,14 @@ export const RunPatchItemSchema = z.object({
   type: z.literal('run-patch'),
   id: z.uuid({ error: 'The change id (id) must be a UUID made on the device.' }),
   runId: z.uuid({ error: 'The run (runId) must be a run id.' }),
-  at: z.number({ error: 'The change time (at) must be epoch milliseconds.' }).int().nonnegative(),
-  currentPhaseId: z.string().trim().min(1).max(64).optional(),
-  notes: z.string({ error: 'The run notes (notes) must be text.' }).max(4000, { error: 'The run notes (notes) can have at most 4000 characters.' }).optional(),
-  submit: z.literal(true).optional(),
+  at: z.number({ error: 'The change time (at) must be epoch milliseconds.' }).check(z.int(), z.nonnegative()),
+  currentPhaseId: z.optional(z.string().check(z.trim(), z.minLength(1), z.maxLength(64))),
+  notes: z.optional(
+    z
+      .string({ error: 'The run notes (notes) must be text.' })
+      .check(z.maxLength(4000, { error: 'The run notes (notes) can have at most 4000 characters.' })),
+  ),
+  submit: z.optional(z.literal(true)),
 });
 export type RunPatchItem = z.infer<typeof RunPatchItemSchema>;
 
@@ -40,11 +45,13 @@ export type RunPatchItem = z.infer<typeof RunPatchItemSchema>;
 export const PushBatchSchema = z.object({
   deviceId: z.uuid({ error: 'The device id (deviceId) must be a UUID.' }),
   /** The device's clock when it sent the batch, to spot a device clock far off. */
-  sentAt: z.number({ error: 'The send time (sentAt) must be epoch milliseconds.' }).int().nonnegative(),
+  sentAt: z.number({ error: 'The send time (sentAt) must be epoch milliseconds.' }).check(z.int(), z.nonnegative()),
   items: z
     .array(z.unknown(), { error: 'The items (items) must be a list.' })
-    .min(1, { error: 'Send at least one item (items).' })
-    .max(MAX_PUSH_ITEMS, { error: `Send at most ${MAX_PUSH_ITEMS} items (items) per batch.` }),
+    .check(
+      z.minLength(1, { error: 'Send at least one item (items).' }),
+      z.maxLength(MAX_PUSH_ITEMS, { error: `Send at most ${MAX_PUSH_ITEMS} items (items) per batch.` }),
+    ),
 });
 export type PushBatch = z.infer<typeof PushBatchSchema>;
 
@@ -57,8 +64,8 @@ export type PushItem = z.infer<typeof PushItemSchema>;
 export const PushResultSchema = z.object({
   id: z.string(),
   status: z.enum(['stored', 'duplicate', 'rejected']),
-  reason: z.string().optional(),
-  field: z.string().optional(),
+  reason: z.optional(z.string()),
+  field: z.optional(z.string()),
 });
 export type PushResult = z.infer<typeof PushResultSchema>;
 
@@ -69,8 +76,11 @@ export const PushResponseSchema = z.object({
 export type PushResponse = z.infer<typeof PushResponseSchema>;
 
 export const PullQuerySchema = z.object({
-  cursor: z.coerce.number({ error: 'The cursor (cursor) must be a whole number.' }).int().nonnegative().default(0),
-  limit: z.coerce.number().int().min(1).max(5000, { error: 'Ask for at most 5000 events (limit) at a time.' }).default(2000),
+  cursor: z._default(z.coerce.number({ error: 'The cursor (cursor) must be a whole number.' }).check(z.int(), z.nonnegative()), 0),
+  limit: z._default(
+    z.coerce.number().check(z.int(), z.minimum(1), z.maximum(5000, { error: 'Ask for at most 5000 events (limit) at a time.' })),
+    2000,
+  ),
 });
 
 /** A day: a device clock further off than this is flagged on the run for the workshop. */
