@@ -1,4 +1,4 @@
-import { useCallback, useRef, useState } from 'react';
+import { useCallback, useLayoutEffect, useRef, useState } from 'react';
 
 export interface DeviceWrite<A, R> {
   /** Starts the write; a failure shows in `error` (the promise is not left unhandled). */
@@ -16,8 +16,11 @@ export interface DeviceWrite<A, R> {
  */
 export function useDeviceWrite<A, R>(write: (args: A) => Promise<R>): DeviceWrite<A, R> {
   const [state, setState] = useState<{ running: number; error: Error | null }>({ running: 0, error: null });
+  // The newest write function, for callbacks that keep one identity across renders.
   const latest = useRef(write);
-  latest.current = write;
+  useLayoutEffect(() => {
+    latest.current = write;
+  });
   const mutateAsync = useCallback(async (args: A) => {
     setState((s) => ({ running: s.running + 1, error: null }));
     try {
