@@ -2,8 +2,9 @@ import { Component, useEffect, useState, type ReactNode } from 'react';
 import type { SessionUser } from '../../shared/auth/auth.schema';
 import { describeError } from '../app/shell/error-words';
 import { signInPath } from '../app/shell/sign-in-path';
+import { PageFrame, ProblemPanel } from '../app/shell/page-frame';
 import { Splash } from '../app/shell/splash';
-import { Button } from '../components/ui/button';
+import { buttonClass } from '../components/ui/button';
 import { fetchSessionUser } from '../features/auth/session-user';
 import { usePathname } from '../features/deck/deck-navigation';
 import { DeckHeader } from './deck-header';
@@ -33,16 +34,7 @@ function useDeckSession(): Session {
 
 function Problem({ error }: { error: unknown }) {
   const { title, detail } = describeError(error);
-  return (
-    <div role="alert" className="mx-auto flex max-w-xl flex-col gap-4 px-3 py-10">
-      <h1 className="text-2xl font-bold">{title}</h1>
-      <p>{detail}</p>
-      <div className="flex flex-wrap gap-3">
-        <Button onClick={() => window.location.reload()}>Try again</Button>
-        <a href="/" className="self-center font-semibold">Back to the start</a>
-      </div>
-    </div>
-  );
+  return <ProblemPanel title={title} detail={detail} back={<a href="/" className={buttonClass('secondary')}>Back to the start</a>} />;
 }
 
 /** A page that throws shows what happened instead of a blank screen. */
@@ -81,16 +73,10 @@ export function DeckApp() {
   const page = deckPageFor(pathname);
   if (!page) return <LeaveDeck />;
   return (
-    <div className="flex min-h-dvh flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-40 focus:bg-surface focus:p-3">
-        Skip to content
-      </a>
-      <DeckHeader user={session.user} />
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-3 pb-bottom-bar pt-4 sm:px-5 sm:pb-10 sm:pt-6">
-        <PageBoundary resetKey={pathname}>
-          {page.page === 'home' ? <DeckHome /> : <DeckVesselPage vesselId={page.vesselId} user={session.user} />}
-        </PageBoundary>
-      </main>
-    </div>
+    <PageFrame header={<DeckHeader user={session.user} />}>
+      <PageBoundary resetKey={pathname}>
+        {page.page === 'home' ? <DeckHome /> : <DeckVesselPage vesselId={page.vesselId} user={session.user} />}
+      </PageBoundary>
+    </PageFrame>
   );
 }

@@ -3,6 +3,7 @@ import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../../features/auth/api';
 import { clearUserData } from '../../lib/db';
 import { AppHeader } from './app-header';
+import { PageFrame } from './page-frame';
 import { Splash } from './splash';
 import { type SessionContext } from './session';
 import { signInPath } from './sign-in-path';
@@ -27,14 +28,8 @@ export function AppShell() {
 
   const context: SessionContext = { user: me.data };
   return (
-    <div className="flex min-h-dvh flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-40 focus:bg-surface focus:p-3">
-        Skip to content
-      </a>
-      <AppHeader user={me.data} />
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-3 pb-bottom-bar pt-4 sm:px-5 sm:pb-10 sm:pt-6">
-        <Outlet context={context} />
-      </main>
-    </div>
+    <PageFrame header={<AppHeader user={me.data} />}>
+      <Outlet context={context} />
+    </PageFrame>
   );
 }
