@@ -58,11 +58,10 @@ describe('background WAL checkpoints', () => {
     db.close();
   });
 
-  it('runs a last checkpoint on stop, and writing goes on while it works', async () => {
+  it('runs a last checkpoint on stop', async () => {
     const { db, file } = walDatabase();
     const checkpointer = await startWalCheckpointer(file, createLogger('silent'), 60_000);
     fillRows(db, 2000);
-    checkpointer.nudge();
     fillRows(db, 2000);
     await checkpointer.stop();
     expect(fileHoldsEveryPage(db, file)).toBe(true);

@@ -27,7 +27,6 @@ const checkpoint = () => {
 };
 const timer = setInterval(checkpoint, workerData.intervalMs);
 parentPort.on('message', (message) => {
-  if (message === 'now') checkpoint();
   if (message === 'stop') {
     clearInterval(timer);
     checkpoint();
@@ -39,14 +38,12 @@ parentPort.postMessage('ready');
 `;
 
 export type WalCheckpointer = {
-  /** Asks for a checkpoint now (the timer runs one every interval anyway; with nothing new it costs microseconds). */
-  nudge: () => void;
   /** Runs a last checkpoint, closes the worker's connection and ends the thread. */
   stop: () => Promise<void>;
 };
 
 export async function startWalCheckpointer(databaseFile: string, logger: Logger, intervalMs = 250): Promise<WalCheckpointer> {
-  if (databaseFile === ':memory:') return { nudge: () => {}, stop: async () => {} };
+  if (databaseFile === ':memory:') return { stop: async () => {} };
   const driver = createRequire(import.meta.url).resolve('better-sqlite3');
   const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: { driver, file: path.resolve(databaseFile), intervalMs } });
   worker.unref();
@@ -63,7 +60,6 @@ export async function startWalCheckpointer(databaseFile: string, logger: Logger,
   });
   worker.on('error', (error) => logger.warn({ err: error }, 'checkpoint thread stopped; SQLite\'s own checkpoint still runs'));
   return {
-    nudge: () => worker.postMessage('now'),
     stop: async () => {
       const done = new Promise<void>((resolve) => {
         stopped = resolve;

@@ -1,4 +1,3 @@
-import { useEffect } from 'react';
 import { createBrowserRouter, Outlet, redirect, ScrollRestoration, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
 import type { QueryClient } from '@tanstack/react-query';
 import { authQueries } from '../features/auth/api';
@@ -7,14 +6,9 @@ import { vesselQueries } from '../features/vessels/api';
 import { AppShell } from './shell/app-shell';
 import { RouteError } from './shell/route-error';
 import { safeNextPath, signInPath } from './shell/sign-in-path';
-import { Splash } from './shell/splash';
+import { ReloadPage, Splash } from './shell/splash';
 
 const errorElement = <RouteError />;
-
-function LoadDeckApp() {
-  useEffect(() => window.location.reload(), []);
-  return <Splash />;
-}
 
 function RootLayout() {
   return (
@@ -81,7 +75,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
               errorElement,
             },
             // The deck is its own app (src/deck); the address is already /deck…, so load the page.
-            { path: 'deck/*', element: <LoadDeckApp /> },
+            { path: 'deck/*', element: <ReloadPage /> },
             { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
             { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
             { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },

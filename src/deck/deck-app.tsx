@@ -3,7 +3,7 @@ import type { SessionUser } from '../../shared/auth/auth.schema';
 import { describeError } from '../app/shell/error-words';
 import { signInPath } from '../app/shell/sign-in-path';
 import { PageFrame, ProblemPanel } from '../app/shell/page-frame';
-import { Splash } from '../app/shell/splash';
+import { ReloadPage, Splash } from '../app/shell/splash';
 import { buttonClass } from '../components/ui/button';
 import { fetchSessionUser } from '../features/auth/session-user';
 import { usePathname } from '../features/deck/deck-navigation';
@@ -54,12 +54,6 @@ class PageBoundary extends Component<{ children: ReactNode; resetKey: string }, 
   }
 }
 
-/** An address the deck does not have belongs to the workshop app: load it. */
-function LeaveDeck() {
-  useEffect(() => window.location.reload(), []);
-  return <Splash />;
-}
-
 /**
  * The deck app: what a phone opens at sea, from the home screen, often with no signal. It is
  * loaded instead of the workshop app for /deck addresses (src/main.tsx) and carries only what the
@@ -71,7 +65,8 @@ export function DeckApp() {
   if (session.state === 'checking') return <Splash />;
   if (session.state === 'failed') return <Problem error={session.error} />;
   const page = deckPageFor(pathname);
-  if (!page) return <LeaveDeck />;
+  // An address the deck does not have belongs to the workshop app.
+  if (!page) return <ReloadPage />;
   return (
     <PageFrame header={<DeckHeader user={session.user} />}>
       <PageBoundary resetKey={pathname}>

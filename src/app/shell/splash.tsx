@@ -1,3 +1,4 @@
+import { useEffect } from 'react';
 import { RingMark } from '../../components/ui/icons';
 
 export function Splash() {
@@ -7,4 +8,10 @@ export function Splash() {
       <span>Loading Ringseat…</span>
     </div>
   );
+}
+
+/** Loads the current address again as a whole page: it belongs to the other app (src/main.tsx). */
+export function ReloadPage() {
+  useEffect(() => window.location.reload(), []);
+  return <Splash />;
 }
