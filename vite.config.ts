@@ -24,7 +24,8 @@ const pwa = VitePWA({
     id: '/',
     name: 'Ringseat break-in logbook',
     short_name: 'Ringseat',
-    description: 'Log a new marine engine\u2019s break-in on deck, with no signal; the workshop reviews and signs it off.',
+    description:
+      'Log a new marine engine\u2019s break-in on deck, with no signal; the workshop reviews and signs it off.',
     lang: 'en',
     start_url: '/deck',
     scope: '/',
@@ -37,7 +38,12 @@ const pwa = VitePWA({
     icons: [
       { src: '/icons/ringseat-192.png', sizes: '192x192', type: 'image/png', purpose: 'any' },
       { src: '/icons/ringseat-512.png', sizes: '512x512', type: 'image/png', purpose: 'any' },
-      { src: '/icons/ringseat-maskable-512.png', sizes: '512x512', type: 'image/png', purpose: 'maskable' },
+      {
+        src: '/icons/ringseat-maskable-512.png',
+        sizes: '512x512',
+        type: 'image/png',
+        purpose: 'maskable',
+      },
       { src: '/icons/ringseat.svg', sizes: 'any', type: 'image/svg+xml', purpose: 'any' },
     ],
   },

@@ -50,13 +50,34 @@ function demoRun(phases: ResolvedPhase[]): RunEvent[] {
       const phase = phaseAt(phases, runMs);
       if (phase !== current) {
         current = phase;
-        events.push({ kind: 'phase-advance', id: uuid(++n), at: dayStart + t, engineId: ENGINE_ID, phaseId: phase.id });
+        events.push({
+          kind: 'phase-advance',
+          id: uuid(++n),
+          at: dayStart + t,
+          engineId: ENGINE_ID,
+          phaseId: phase.id,
+        });
       }
-      const rpm = Math.round(phase.band.rpmMin + random() * (phase.band.rpmMax - phase.band.rpmMin) * 1.1);
+      const rpm = Math.round(
+        phase.band.rpmMin + random() * (phase.band.rpmMax - phase.band.rpmMin) * 1.1,
+      );
       const throttle = THROTTLE_POSITIONS[Math.floor(random() * THROTTLE_POSITIONS.length)];
-      events.push({ kind: 'reading', id: uuid(++n), at: dayStart + t, engineId: ENGINE_ID, phaseId: phase.id, rpm, throttle });
+      events.push({
+        kind: 'reading',
+        id: uuid(++n),
+        at: dayStart + t,
+        engineId: ENGINE_ID,
+        phaseId: phase.id,
+        rpm,
+        throttle,
+      });
     }
-    events.push({ kind: 'session-stop', id: uuid(++n), at: dayStart + OUTING_HOURS * HOUR_MS, engineId: ENGINE_ID });
+    events.push({
+      kind: 'session-stop',
+      id: uuid(++n),
+      at: dayStart + OUTING_HOURS * HOUR_MS,
+      engineId: ENGINE_ID,
+    });
   }
   // Sync delivers events in no particular order; shuffle so the sort does real work.
   for (let i = events.length - 1; i > 0; i--) {
@@ -66,10 +87,14 @@ function demoRun(phases: ResolvedPhase[]): RunEvent[] {
   return events;
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil(p * sorted.length) - 1)];
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil(p * sorted.length) - 1)];
 
 function main(): void {
-  const phases = resolveProgramPhases(BUILT_IN_PROGRAMS['four-stroke-outboard'], { ratedRpmMin: 5000, ratedRpmMax: 6000 });
+  const phases = resolveProgramPhases(BUILT_IN_PROGRAMS['four-stroke-outboard'], {
+    ratedRpmMin: 5000,
+    ratedRpmMax: 6000,
+  });
   const events = demoRun(phases);
   const readings = events.filter((e) => e.kind === 'reading').length;
   for (let i = 0; i < WARM_UP_RUNS; i++) accountRun(events, phases);
@@ -84,7 +109,9 @@ function main(): void {
   const median = percentile(times, 0.5);
   const p95 = percentile(times, 0.95);
   const pass = p95 < TARGET_MS;
-  console.log(`accounting: ${readings} readings, ${events.length} events, ${OUTINGS * OUTING_HOURS} h of sessions (run verdict: ${verdict})`);
+  console.log(
+    `accounting: ${readings} readings, ${events.length} events, ${OUTINGS * OUTING_HOURS} h of sessions (run verdict: ${verdict})`,
+  );
   console.log(`runs: ${WARM_UP_RUNS} warm-up, ${MEASURED_RUNS} measured`);
   console.log(`median ${median.toFixed(2)} ms, p95 ${p95.toFixed(2)} ms, target < ${TARGET_MS} ms`);
   console.log(pass ? 'PASS' : 'FAIL');

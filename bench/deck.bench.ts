@@ -17,9 +17,19 @@ import { startRealServer } from '../tests/helpers/real-server';
 const JS_TARGET_KB = 150;
 const RELOAD_TARGET_MS = 1000;
 const RELOADS = 7;
-const FORBIDDEN = [/recharts/, /d3-/, /victory/, /features\/(review|workshop|sign-off|programs|checklists)\//];
+const FORBIDDEN = [
+  /recharts/,
+  /d3-/,
+  /victory/,
+  /features\/(review|workshop|sign-off|programs|checklists)\//,
+];
 /** What only the workshop app needs (DEVELOPERS.md, "The deck is its own small app"), by source path. */
-const WORKSHOP_ONLY = [/node_modules\/react-router/, /node_modules\/@tanstack\//, /node_modules\/zod\/v4\/classic\//, /src\/app\/(router|routes)/];
+const WORKSHOP_ONLY = [
+  /node_modules\/react-router/,
+  /node_modules\/@tanstack\//,
+  /node_modules\/zod\/v4\/classic\//,
+  /src\/app\/(router|routes)/,
+];
 
 function sourceMap(file: string): { sources: string[]; sourcesContent?: string[] } {
   const map = `${file}.map`;
@@ -32,8 +42,17 @@ function chunkMakeup(file: string): string[] {
   const sizes = new Map<string, number>();
   sources.forEach((source, i) => {
     const key = source.includes('node_modules/')
-      ? source.split('node_modules/').pop()!.split('/').slice(0, source.split('node_modules/').pop()!.startsWith('@') ? 2 : 1).join('/')
-      : source.replace(/^(\.\.\/)+/, '').split('/').slice(0, 3).join('/');
+      ? source
+          .split('node_modules/')
+          .pop()!
+          .split('/')
+          .slice(0, source.split('node_modules/').pop()!.startsWith('@') ? 2 : 1)
+          .join('/')
+      : source
+          .replace(/^(\.\.\/)+/, '')
+          .split('/')
+          .slice(0, 3)
+          .join('/');
     sizes.set(key, (sizes.get(key) ?? 0) + (sourcesContent[i]?.length ?? 0));
   });
   return [...sizes].sort((a, b) => b[1] - a[1]).map(([key]) => key);
@@ -47,7 +66,11 @@ async function signIn(page: Page, email: string) {
   await page.waitForURL((url) => url.pathname !== '/sign-in');
 }
 
-const runScreen = (page: Page) => page.getByRole('region', { name: 'Port' }).getByTestId('time-in-band').waitFor({ timeout: 10_000 });
+const runScreen = (page: Page) =>
+  page
+    .getByRole('region', { name: 'Port' })
+    .getByTestId('time-in-band')
+    .waitFor({ timeout: 10_000 });
 
 /** The JS files a fresh load of the deck route asks for, gzipped as a server would send them. */
 async function deckJavaScript(page: Page, deckPath: string) {
@@ -87,24 +110,52 @@ async function main() {
     const tech = await apiSession(server.baseURL, 'ivo@tidewright.example');
     await openRunFor(tech, 'Blue Tern', 'port');
     await openRunFor(tech, 'Blue Tern', 'starboard');
-    const ternId = (await tech('/api/vessels')).body.vessels.find((v: { name: string }) => v.name === 'Blue Tern').id as string;
+    const ternId = (await tech('/api/vessels')).body.vessels.find(
+      (v: { name: string }) => v.name === 'Blue Tern',
+    ).id as string;
     const context = await newContext(browser, server.baseURL, PHONE);
     const page = await context.newPage();
     await signIn(page, 'ivo@tidewright.example');
     await page.goto(`/deck/${ternId}`);
-    await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 30_000 });
+    await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, {
+      timeout: 30_000,
+    });
     await page.getByRole('button', { name: 'Start outing' }).waitFor({ timeout: 30_000 });
 
     const files = await deckJavaScript(page, `/deck/${ternId}`);
     const totalKb = files.reduce((sum, f) => sum + f.gzipBytes, 0) / 1024;
     console.log(`deck route JavaScript (gzip), ${files.length} files:`);
     for (const f of files.sort((a, b) => b.gzipBytes - a.gzipBytes)) {
-      console.log(`  ${(f.gzipBytes / 1024).toFixed(1).padStart(6)} KB  ${f.urlPath}  ${f.makeup.slice(0, 6).join(', ')}`);
+      console.log(
+        `  ${(f.gzipBytes / 1024).toFixed(1).padStart(6)} KB  ${f.urlPath}  ${f.makeup.slice(0, 6).join(', ')}`,
+      );
     }
-    const forbidden = files.flatMap((f) => f.makeup.filter((part) => FORBIDDEN.some((re) => re.test(part))).map((part) => `${f.urlPath}: ${part}`));
-    console.log(`total ${totalKb.toFixed(1)} KB, target ≤ ${JS_TARGET_KB} KB; chart or workshop code: ${forbidden.length ? forbidden.join('; ') : 'none'}`);
-    const workshopOnly = [...new Set(files.flatMap((f) => f.sources.filter((src) => WORKSHOP_ONLY.some((re) => re.test(src))).map((src) => src.replace(/^.*node_modules\//, '').split('/').slice(0, 3).join('/'))))];
-    console.log(`router, server-state cache or classic zod on the deck: ${workshopOnly.length ? workshopOnly.join(', ') : 'none'}`);
+    const forbidden = files.flatMap((f) =>
+      f.makeup
+        .filter((part) => FORBIDDEN.some((re) => re.test(part)))
+        .map((part) => `${f.urlPath}: ${part}`),
+    );
+    console.log(
+      `total ${totalKb.toFixed(1)} KB, target ≤ ${JS_TARGET_KB} KB; chart or workshop code: ${forbidden.length ? forbidden.join('; ') : 'none'}`,
+    );
+    const workshopOnly = [
+      ...new Set(
+        files.flatMap((f) =>
+          f.sources
+            .filter((src) => WORKSHOP_ONLY.some((re) => re.test(src)))
+            .map((src) =>
+              src
+                .replace(/^.*node_modules\//, '')
+                .split('/')
+                .slice(0, 3)
+                .join('/'),
+            ),
+        ),
+      ),
+    ];
+    console.log(
+      `router, server-state cache or classic zod on the deck: ${workshopOnly.length ? workshopOnly.join(', ') : 'none'}`,
+    );
     const sizeOk = totalKb <= JS_TARGET_KB && forbidden.length === 0 && workshopOnly.length === 0;
     console.log(sizeOk ? 'PASS size' : 'FAIL size');
 
@@ -114,8 +165,12 @@ async function main() {
     await context.setOffline(true);
     const times = (await offlineReloads(page)).sort((a, b) => a - b);
     const median = times[Math.floor(times.length / 2)];
-    console.log(`offline reload to the run screen, ${RELOADS} runs: ${times.map((t) => t.toFixed(0)).join(', ')} ms`);
-    console.log(`median ${median.toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms, target median < ${RELOAD_TARGET_MS} ms`);
+    console.log(
+      `offline reload to the run screen, ${RELOADS} runs: ${times.map((t) => t.toFixed(0)).join(', ')} ms`,
+    );
+    console.log(
+      `median ${median.toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms, target median < ${RELOAD_TARGET_MS} ms`,
+    );
     const reloadOk = median < RELOAD_TARGET_MS;
     console.log(reloadOk ? 'PASS offline reload' : 'FAIL offline reload');
     failed = !sizeOk || !reloadOk;

@@ -35,32 +35,116 @@ const random = seededRandom(7);
 const program = BUILT_IN_PROGRAMS['four-stroke-outboard'];
 const rating = { ratedRpmMin: 5000, ratedRpmMax: 6000 };
 const bands = Object.fromEntries(program.phases.map((p) => [p.id, resolvePhaseBand(p, rating)]));
-const STATES = ['planned', 'under-way', 'under-way', 'submitted', 'signed-off', 'signed-off', 'signed-off', 'signed-off', 'returned', 'under-way'];
+const STATES = [
+  'planned',
+  'under-way',
+  'under-way',
+  'submitted',
+  'signed-off',
+  'signed-off',
+  'signed-off',
+  'signed-off',
+  'returned',
+  'under-way',
+];
 
-type Native = { prepare: (sql: string) => { run: (...p: unknown[]) => unknown }; transaction: (fn: () => void) => () => void };
+type Native = {
+  prepare: (sql: string) => { run: (...p: unknown[]) => unknown };
+  transaction: (fn: () => void) => () => void;
+};
 
-function insertWorkshop(db: Native, ids: { workshop: string; manager: string }, passwordHash: string) {
-  db.prepare('INSERT INTO "workshop" ("id", "name", "address", "email", "timezone", "units") VALUES (?, ?, ?, ?, ?, ?)')
-    .run(ids.workshop, 'Bench Boatyard', 'Quay 1', 'desk@bench.example', 'UTC', JSON.stringify({ speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' }));
-  db.prepare('INSERT INTO "user" ("id", "workshopId", "email", "name", "role", "passwordHash") VALUES (?, ?, ?, ?, ?, ?)')
-    .run(ids.manager, ids.workshop, 'bench@bench.example', 'Bench Manager', 'manager', passwordHash);
+function insertWorkshop(
+  db: Native,
+  ids: { workshop: string; manager: string },
+  passwordHash: string,
+) {
+  db.prepare(
+    'INSERT INTO "workshop" ("id", "name", "address", "email", "timezone", "units") VALUES (?, ?, ?, ?, ?, ?)',
+  ).run(
+    ids.workshop,
+    'Bench Boatyard',
+    'Quay 1',
+    'desk@bench.example',
+    'UTC',
+    JSON.stringify({ speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' }),
+  );
+  db.prepare(
+    'INSERT INTO "user" ("id", "workshopId", "email", "name", "role", "passwordHash") VALUES (?, ?, ?, ?, ?, ?)',
+  ).run(ids.manager, ids.workshop, 'bench@bench.example', 'Bench Manager', 'manager', passwordHash);
 }
 
 /** One vessel, engine and run; `readings` readings spread over sessions of five hours. */
-function insertRun(db: Native, ids: { workshop: string; manager: string }, n: number, readings: number, everyMs: number, seq: { value: number }): string {
+function insertRun(
+  db: Native,
+  ids: { workshop: string; manager: string },
+  n: number,
+  readings: number,
+  everyMs: number,
+  seq: { value: number },
+): string {
   const vesselId = randomUUID();
   const engineId = randomUUID();
   const runId = randomUUID();
-  db.prepare('INSERT INTO "vessel" ("id", "workshopId", "name", "type") VALUES (?, ?, ?, ?)').run(vesselId, ids.workshop, `Bench boat ${n}`, 'workboat');
-  db.prepare('INSERT INTO "engine" ("id", "vesselId", "workshopId", "position", "installation", "maker", "model", "serialNumber", "fuel", "cycle", "ratedRpmMin", "ratedRpmMax", "hourMeterAtCommissioning", "commissionedOn") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)')
-    .run(engineId, vesselId, ids.workshop, 'single', 'outboard', 'Benchmark', 'B-100', `BENCH-${n}`, 'petrol', 'four-stroke', 5000, 6000, 0.5, '2026-10-01');
+  db.prepare('INSERT INTO "vessel" ("id", "workshopId", "name", "type") VALUES (?, ?, ?, ?)').run(
+    vesselId,
+    ids.workshop,
+    `Bench boat ${n}`,
+    'workboat',
+  );
+  db.prepare(
+    'INSERT INTO "engine" ("id", "vesselId", "workshopId", "position", "installation", "maker", "model", "serialNumber", "fuel", "cycle", "ratedRpmMin", "ratedRpmMax", "hourMeterAtCommissioning", "commissionedOn") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+  ).run(
+    engineId,
+    vesselId,
+    ids.workshop,
+    'single',
+    'outboard',
+    'Benchmark',
+    'B-100',
+    `BENCH-${n}`,
+    'petrol',
+    'four-stroke',
+    5000,
+    6000,
+    0.5,
+    '2026-10-01',
+  );
   const state = readings > 1000 ? 'submitted' : STATES[n % STATES.length];
   const events = state === 'planned' ? 0 : readings;
-  db.prepare('INSERT INTO "run" ("id", "workshopId", "engineId", "vesselId", "programId", "program", "bands", "state", "assignedById", "lastEventAt", "seq") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)')
-    .run(runId, ids.workshop, engineId, vesselId, randomUUID(), JSON.stringify(program), JSON.stringify(bands), state, ids.manager, events ? T0 + events * everyMs : null, seq.value++);
-  const insert = db.prepare('INSERT INTO "run_event" ("id", "runId", "workshopId", "engineId", "kind", "at", "receivedAt", "authorId", "phaseId", "rpm", "throttle", "body", "seq") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)');
+  db.prepare(
+    'INSERT INTO "run" ("id", "workshopId", "engineId", "vesselId", "programId", "program", "bands", "state", "assignedById", "lastEventAt", "seq") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+  ).run(
+    runId,
+    ids.workshop,
+    engineId,
+    vesselId,
+    randomUUID(),
+    JSON.stringify(program),
+    JSON.stringify(bands),
+    state,
+    ids.manager,
+    events ? T0 + events * everyMs : null,
+    seq.value++,
+  );
+  const insert = db.prepare(
+    'INSERT INTO "run_event" ("id", "runId", "workshopId", "engineId", "kind", "at", "receivedAt", "authorId", "phaseId", "rpm", "throttle", "body", "seq") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+  );
   const add = (event: Record<string, unknown> & { id: string; kind: string; at: number }) =>
-    insert.run(event.id, runId, ids.workshop, engineId, event.kind, event.at, event.at + 60_000, ids.manager, (event.phaseId as string) ?? null, (event.rpm as number) ?? null, (event.throttle as string) ?? null, JSON.stringify(event), seq.value++);
+    insert.run(
+      event.id,
+      runId,
+      ids.workshop,
+      engineId,
+      event.kind,
+      event.at,
+      event.at + 60_000,
+      ids.manager,
+      (event.phaseId as string) ?? null,
+      (event.rpm as number) ?? null,
+      (event.throttle as string) ?? null,
+      JSON.stringify(event),
+      seq.value++,
+    );
   const perSession = Math.ceil((5 * 3_600_000) / everyMs);
   let required = 0;
   for (let i = 0; i < events; i++) {
@@ -69,13 +153,23 @@ function insertRun(db: Native, ids: { workshop: string; manager: string }, n: nu
     required += everyMs;
     const phase = program.phases[required < 600_000 ? 0 : required < 7_200_000 ? 1 : 2];
     const band = bands[phase.id];
-    add({ kind: 'reading', id: randomUUID(), at, engineId, phaseId: phase.id, rpm: Math.round(band.rpmMin + random() * (band.rpmMax - band.rpmMin) * 1.05), throttle: THROTTLE_POSITIONS[1 + Math.floor(random() * 3)] });
-    if (i % perSession === perSession - 1 || i === events - 1) add({ kind: 'session-stop', id: randomUUID(), at: at + everyMs, engineId });
+    add({
+      kind: 'reading',
+      id: randomUUID(),
+      at,
+      engineId,
+      phaseId: phase.id,
+      rpm: Math.round(band.rpmMin + random() * (band.rpmMax - band.rpmMin) * 1.05),
+      throttle: THROTTLE_POSITIONS[1 + Math.floor(random() * 3)],
+    });
+    if (i % perSession === perSession - 1 || i === events - 1)
+      add({ kind: 'session-stop', id: randomUUID(), at: at + everyMs, engineId });
   }
   return runId;
 }
 
-const percentile = (sorted: number[], p: number) => sorted[Math.min(sorted.length - 1, Math.ceil(p * sorted.length) - 1)];
+const percentile = (sorted: number[], p: number) =>
+  sorted[Math.min(sorted.length - 1, Math.ceil(p * sorted.length) - 1)];
 
 async function measure(label: string, url: string, cookie: string): Promise<boolean> {
   const once = async () => {
@@ -92,7 +186,9 @@ async function measure(label: string, url: string, cookie: string): Promise<bool
   times.sort((a, b) => a - b);
   const p95 = percentile(times, 0.95);
   const pass = p95 < TARGET_MS;
-  console.log(`${label}: first request ${cold.toFixed(1)} ms; then median ${percentile(times, 0.5).toFixed(1)} ms, p95 ${p95.toFixed(1)} ms over ${MEASURED} (target p95 < ${TARGET_MS} ms) ${pass ? 'PASS' : 'FAIL'}`);
+  console.log(
+    `${label}: first request ${cold.toFixed(1)} ms; then median ${percentile(times, 0.5).toFixed(1)} ms, p95 ${p95.toFixed(1)} ms over ${MEASURED} (target p95 < ${TARGET_MS} ms) ${pass ? 'PASS' : 'FAIL'}`,
+  );
   return pass;
 }
 
@@ -108,21 +204,32 @@ async function main() {
   const started = performance.now();
   db.transaction(() => {
     insertWorkshop(db, ids, passwordHash);
-    for (let n = 0; n < BOARD_RUNS - 1; n++) insertRun(db, ids, n, READINGS_PER_RUN, 4 * 60_000, seq);
+    for (let n = 0; n < BOARD_RUNS - 1; n++)
+      insertRun(db, ids, n, READINGS_PER_RUN, 4 * 60_000, seq);
     longRun = insertRun(db, ids, BOARD_RUNS, LONG_RUN_READINGS, 5_000, seq);
   })();
   db.prepare('UPDATE "change_counter" SET "value" = ? WHERE "name" = ?').run(seq.value, 'changes');
-  console.log(`data: ${BOARD_RUNS} runs, ${seq.value} events and runs in ${((performance.now() - started) / 1000).toFixed(1)} s (one run with ${LONG_RUN_READINGS} readings)`);
+  console.log(
+    `data: ${BOARD_RUNS} runs, ${seq.value} events and runs in ${((performance.now() - started) / 1000).toFixed(1)} s (one run with ${LONG_RUN_READINGS} readings)`,
+  );
 
   const app = createApp({ dataSource, logger: createLogger('silent'), dataDir: dir });
   const server = app.listen(0, '127.0.0.1');
   await new Promise((resolve) => server.once('listening', resolve));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
-  const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'content-type': 'application/json', origin: base }, body: JSON.stringify({ email: 'bench@bench.example', password: 'ringseat-bench' }) });
+  const signIn = await fetch(`${base}/api/auth/sign-in`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json', origin: base },
+    body: JSON.stringify({ email: 'bench@bench.example', password: 'ringseat-bench' }),
+  });
   const cookie = signIn.headers.get('set-cookie')!.split(';')[0];
   try {
     const board = await measure(`runs board (${BOARD_RUNS} runs)`, `${base}/api/board`, cookie);
-    const review = await measure(`run review (${LONG_RUN_READINGS} readings)`, `${base}/api/runs/${longRun}/review`, cookie);
+    const review = await measure(
+      `run review (${LONG_RUN_READINGS} readings)`,
+      `${base}/api/runs/${longRun}/review`,
+      cookie,
+    );
     console.log(board && review ? 'PASS' : 'FAIL');
     if (!(board && review)) process.exitCode = 1;
   } finally {

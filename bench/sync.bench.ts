@@ -18,7 +18,10 @@ const TARGET_RATIO = 3;
 // The server runs in its own process, as in production. The push time counts everything from
 // the first batch leaving to the last answer arriving, including building and sending the JSON.
 // PROFILE_SERVER=dir writes a CPU profile of the server process into dir.
-const server = await startRealServer({ LOG_LEVEL: 'silent' }, process.env.PROFILE_SERVER ? ['--cpu-prof', `--cpu-prof-dir=${process.env.PROFILE_SERVER}`] : []);
+const server = await startRealServer(
+  { LOG_LEVEL: 'silent' },
+  process.env.PROFILE_SERVER ? ['--cpu-prof', `--cpu-prof-dir=${process.env.PROFILE_SERVER}`] : [],
+);
 const base = server.baseURL;
 const databaseFile = path.join(server.dir, 'ringseat.sqlite');
 const reader = new Database(databaseFile);
@@ -45,17 +48,35 @@ const vessels = (await (await call('/api/vessels', tech)).json()).vessels;
 const programs = (await (await call('/api/programs', tech)).json()).programs;
 
 async function newRun(position: 'port' | 'starboard' | 'single', vesselName: string) {
-  const engine = vessels.find((v: { name: string }) => v.name === vesselName).engines.find((e: { position: string }) => e.position === position);
-  const program = programs.find((p: { builtInKey: string }) => p.builtInKey === 'four-stroke-outboard');
-  return (await (await call('/api/runs', tech, { engineId: engine.id, programId: program.id })).json()).run;
+  const engine = vessels
+    .find((v: { name: string }) => v.name === vesselName)
+    .engines.find((e: { position: string }) => e.position === position);
+  const program = programs.find(
+    (p: { builtInKey: string }) => p.builtInKey === 'four-stroke-outboard',
+  );
+  return (
+    await (await call('/api/runs', tech, { engineId: engine.id, programId: program.id })).json()
+  ).run;
 }
 
-function readings(run: { id: string; engine: { id: string }; program: { phases: Array<{ id: string }> } }) {
+function readings(run: {
+  id: string;
+  engine: { id: string };
+  program: { phases: Array<{ id: string }> };
+}) {
   const t0 = Date.parse('2026-12-01T08:00:00Z');
   return Array.from({ length: READINGS }, (_, i) => ({
     type: 'event' as const,
     runId: run.id,
-    event: { kind: 'reading' as const, id: randomUUID(), at: t0 + i * 5000, engineId: run.engine.id, phaseId: run.program.phases[1].id, rpm: 2600 + (i % 40) * 10, throttle: 'half' as const },
+    event: {
+      kind: 'reading' as const,
+      id: randomUUID(),
+      at: t0 + i * 5000,
+      engineId: run.engine.id,
+      phaseId: run.program.phases[1].id,
+      rpm: 2600 + (i % 40) * 10,
+      throttle: 'half' as const,
+    },
   }));
 }
 
@@ -63,7 +84,11 @@ async function timePush(items: ReturnType<typeof readings>) {
   const deviceId = randomUUID();
   const started = performance.now();
   for (let from = 0; from < items.length; from += MAX_PUSH_ITEMS) {
-    await call('/api/sync/push', skipper, { deviceId, sentAt: Date.now(), items: items.slice(from, from + MAX_PUSH_ITEMS) });
+    await call('/api/sync/push', skipper, {
+      deviceId,
+      sentAt: Date.now(),
+      items: items.slice(from, from + MAX_PUSH_ITEMS),
+    });
   }
   return performance.now() - started;
 }
@@ -80,11 +105,31 @@ async function timeRaw(items: ReturnType<typeof readings>, workshopId: string) {
   const db = new Database(file);
   db.pragma('journal_mode = WAL');
   db.pragma('synchronous = NORMAL');
-  const { maxSeq } = db.prepare('SELECT COALESCE(MAX(seq), 0) AS maxSeq FROM run_event').get() as { maxSeq: number };
-  const insert = db.prepare('INSERT INTO run_event (id, runId, workshopId, engineId, kind, at, receivedAt, authorId, phaseId, rpm, throttle, body, seq) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)');
+  const { maxSeq } = db.prepare('SELECT COALESCE(MAX(seq), 0) AS maxSeq FROM run_event').get() as {
+    maxSeq: number;
+  };
+  const insert = db.prepare(
+    'INSERT INTO run_event (id, runId, workshopId, engineId, kind, at, receivedAt, authorId, phaseId, rpm, throttle, body, seq) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
+  );
   const started = performance.now();
   db.transaction(() => {
-    items.forEach(({ runId, event }, i) => insert.run(event.id, runId, workshopId, event.engineId, event.kind, event.at, Date.now(), 'bench', event.phaseId, event.rpm, event.throttle, JSON.stringify(event), maxSeq + i + 1));
+    items.forEach(({ runId, event }, i) =>
+      insert.run(
+        event.id,
+        runId,
+        workshopId,
+        event.engineId,
+        event.kind,
+        event.at,
+        Date.now(),
+        'bench',
+        event.phaseId,
+        event.rpm,
+        event.throttle,
+        JSON.stringify(event),
+        maxSeq + i + 1,
+      ),
+    );
   })();
   const elapsed = performance.now() - started;
   db.close();
@@ -95,33 +140,51 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.len
 const ratios: number[] = [];
 const pushes: number[] = [];
 const raws: number[] = [];
-const runSlots: Array<[('port' | 'starboard' | 'single'), string]> = [['single', 'Gannet'], ['port', 'Blue Tern'], ['starboard', 'Blue Tern']];
+const runSlots: Array<['port' | 'starboard' | 'single', string]> = [
+  ['single', 'Gannet'],
+  ['port', 'Blue Tern'],
+  ['starboard', 'Blue Tern'],
+];
 for (let round = 0; round < WARM_UP + ROUNDS; round++) {
   const [position, vessel] = runSlots[round % runSlots.length];
   if (round >= runSlots.length) {
     const writer = new Database(databaseFile);
-    writer.prepare('UPDATE run SET state = ? WHERE engineId IN (SELECT id FROM engine WHERE position = ?)').run('signed-off', position);
+    writer
+      .prepare(
+        'UPDATE run SET state = ? WHERE engineId IN (SELECT id FROM engine WHERE position = ?)',
+      )
+      .run('signed-off', position);
     writer.close();
   }
   const run = await newRun(position, vessel);
   benchRunIds.push(run.id);
   const items = readings(run);
-  const { workshopId } = reader.prepare('SELECT workshopId FROM run WHERE id = ?').get(run.id) as { workshopId: string };
+  const { workshopId } = reader.prepare('SELECT workshopId FROM run WHERE id = ?').get(run.id) as {
+    workshopId: string;
+  };
   const raw = await timeRaw(items, workshopId);
   const push = await timePush(items);
   const label = round < WARM_UP ? 'warm-up (not counted)' : `round ${round + 1 - WARM_UP}`;
-  console.log(`${label}: push ${push.toFixed(0)} ms (${Math.ceil(READINGS / MAX_PUSH_ITEMS)} batches of ${MAX_PUSH_ITEMS}), raw insert ${raw.toFixed(0)} ms, ratio ${(push / raw).toFixed(2)}`);
+  console.log(
+    `${label}: push ${push.toFixed(0)} ms (${Math.ceil(READINGS / MAX_PUSH_ITEMS)} batches of ${MAX_PUSH_ITEMS}), raw insert ${raw.toFixed(0)} ms, ratio ${(push / raw).toFixed(2)}`,
+  );
   if (round < WARM_UP) continue;
   raws.push(raw);
   pushes.push(push);
   ratios.push(push / raw);
 }
-const { n: stored } = reader.prepare(`SELECT COUNT(*) AS n FROM run_event WHERE runId IN (${benchRunIds.map(() => '?').join(', ')})`).get(...benchRunIds) as { n: number };
+const { n: stored } = reader
+  .prepare(
+    `SELECT COUNT(*) AS n FROM run_event WHERE runId IN (${benchRunIds.map(() => '?').join(', ')})`,
+  )
+  .get(...benchRunIds) as { n: number };
 reader.close();
 await server.stop();
 
 const ratio = median(ratios);
-console.log(`sync push: ${READINGS} readings, median push ${median(pushes).toFixed(0)} ms, median raw ${median(raws).toFixed(0)} ms, median ratio ${ratio.toFixed(2)} (target ≤ ${TARGET_RATIO}); rows stored ${stored}`);
+console.log(
+  `sync push: ${READINGS} readings, median push ${median(pushes).toFixed(0)} ms, median raw ${median(raws).toFixed(0)} ms, median ratio ${ratio.toFixed(2)} (target ≤ ${TARGET_RATIO}); rows stored ${stored}`,
+);
 if (stored !== READINGS * (WARM_UP + ROUNDS)) {
   console.log(`FAIL: expected ${READINGS * (WARM_UP + ROUNDS)} rows`);
   process.exit(1);

@@ -14,7 +14,10 @@ export function ensureChromium(log: (line: string) => void = console.log): void 
   if (fs.existsSync(CHROMIUM_PATH)) return;
   const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
   if (!isRoot || process.env.RINGSEAT_CHROMIUM) throw new Error(chromiumMissingMessage());
-  log('Chromium is missing: installing Debian\'s chromium package with apt-get (about a minute)…');
-  execSync('apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium > /dev/null', { stdio: 'inherit', shell: '/bin/bash' });
+  log("Chromium is missing: installing Debian's chromium package with apt-get (about a minute)…");
+  execSync(
+    'apt-get update -qq && DEBIAN_FRONTEND=noninteractive apt-get install -y -qq chromium > /dev/null',
+    { stdio: 'inherit', shell: '/bin/bash' },
+  );
   if (!fs.existsSync(CHROMIUM_PATH)) throw new Error(chromiumMissingMessage());
 }

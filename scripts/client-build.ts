@@ -3,7 +3,15 @@ import fs from 'node:fs';
 import path from 'node:path';
 
 /** Everything the client bundle is made from; a change to any of these means a new build. */
-const CLIENT_INPUTS = ['src', 'shared', 'public', 'index.html', 'vite.config.ts', 'tailwind.config.ts', 'package-lock.json'];
+const CLIENT_INPUTS = [
+  'src',
+  'shared',
+  'public',
+  'index.html',
+  'vite.config.ts',
+  'tailwind.config.ts',
+  'package-lock.json',
+];
 export const CLIENT_DIR = path.join('dist', 'client');
 const STAMP = path.join(CLIENT_DIR, '.built-at');
 
@@ -12,7 +20,8 @@ function newestMtime(entry: string): number {
   const stat = fs.statSync(entry);
   if (!stat.isDirectory()) return stat.mtimeMs;
   let newest = stat.mtimeMs;
-  for (const child of fs.readdirSync(entry)) newest = Math.max(newest, newestMtime(path.join(entry, child)));
+  for (const child of fs.readdirSync(entry))
+    newest = Math.max(newest, newestMtime(path.join(entry, child)));
   return newest;
 }
 
@@ -26,11 +35,15 @@ export function clientBuildIsCurrent(): boolean {
 export function ensureClientBuilt(log: (line: string) => void = console.log): void {
   if (clientBuildIsCurrent()) return;
   log('Building the client (vite build)…');
-  const result = spawnSync(process.execPath, [path.join('node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'], {
-    stdio: 'inherit',
-    // Test runners set NODE_ENV=test, which would make Vite bundle React's development build.
-    env: { ...process.env, NODE_ENV: 'production' },
-  });
+  const result = spawnSync(
+    process.execPath,
+    [path.join('node_modules', 'vite', 'bin', 'vite.js'), 'build', '--logLevel', 'warn'],
+    {
+      stdio: 'inherit',
+      // Test runners set NODE_ENV=test, which would make Vite bundle React's development build.
+      env: { ...process.env, NODE_ENV: 'production' },
+    },
+  );
   if (result.status !== 0) throw new Error('vite build failed');
   fs.writeFileSync(STAMP, new Date().toISOString());
 }

@@ -19,13 +19,27 @@ fs.mkdirSync(path.dirname(report), { recursive: true });
 fs.rmSync(report, { force: true });
 const run = spawnSync(
   process.execPath,
-  [path.join('node_modules', 'vitest', 'vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...process.argv.slice(2)],
+  [
+    path.join('node_modules', 'vitest', 'vitest.mjs'),
+    'run',
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=${report}`,
+    ...process.argv.slice(2),
+  ],
   { stdio: 'inherit' },
 );
 
 if (fs.existsSync(report)) {
-  const result = JSON.parse(fs.readFileSync(report, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
+  const result = JSON.parse(fs.readFileSync(report, 'utf8')) as {
+    numPassedTests: number;
+    numFailedTests: number;
+    numPendingTests: number;
+    numTodoTests: number;
+  };
   const skipped = result.numPendingTests + result.numTodoTests;
-  console.log(`\nTests: ${result.numPassedTests} passed, ${result.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`);
+  console.log(
+    `\nTests: ${result.numPassedTests} passed, ${result.numFailedTests} failed${skipped ? `, ${skipped} skipped` : ''}`,
+  );
 }
 process.exit(run.status ?? 1);

@@ -69,21 +69,28 @@ export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(helmet({
-    strictTransportSecurity: secure,
-    contentSecurityPolicy: {
-      directives: {
-        'img-src': ["'self'", 'data:', 'blob:'],
-        // On plain http (a laptop on the workshop LAN) upgrading would break every request.
-        'upgrade-insecure-requests': secure ? [] : null,
+  app.use(
+    helmet({
+      strictTransportSecurity: secure,
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          // On plain http (a laptop on the workshop LAN) upgrading would break every request.
+          'upgrade-insecure-requests': secure ? [] : null,
+        },
       },
-    },
-  }));
-  app.use(pinoHttp({
-    logger: deps.logger,
-    autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-    serializers: { req: (req) => ({ method: req.method, url: req.url }), res: (res) => ({ status: res.statusCode }) },
-  }));
+    }),
+  );
+  app.use(
+    pinoHttp({
+      logger: deps.logger,
+      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      serializers: {
+        req: (req) => ({ method: req.method, url: req.url }),
+        res: (res) => ({ status: res.statusCode }),
+      },
+    }),
+  );
 
   const api = express.Router();
   // Sync batches are larger than anything else: that route parses its own body with its own limit.
@@ -92,7 +99,10 @@ export function createApp(deps: AppDeps): Express {
   api.use(originCheck(deps.publicOrigin));
   api.use(loadSession(lucia));
   api.use(healthRouter(deps.dataSource));
-  api.use('/auth', authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }));
+  api.use(
+    '/auth',
+    authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }),
+  );
   const outbox = new Outbox(deps.mailer ?? null, deps.logger);
   api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin, outbox));
   const vessels = new VesselsService(deps.dataSource, clock);
@@ -105,18 +115,28 @@ export function createApp(deps: AppDeps): Express {
   api.use(workshopsRouter(deps.dataSource));
   api.use(programsRouter(new ProgramsService(deps.dataSource, clock)));
   api.use(runsRouter(new RunsService(deps.dataSource)));
-  api.use(reviewRoutes({ dataSource: deps.dataSource, clock, outbox, dataDir: deps.dataDir ?? loadConfig().dataDir }));
+  api.use(
+    reviewRoutes({
+      dataSource: deps.dataSource,
+      clock,
+      outbox,
+      dataDir: deps.dataDir ?? loadConfig().dataDir,
+    }),
+  );
   api.use(apiNotFound);
   app.use('/api', api);
   if (deps.mailbox) app.use('/dev/mail', devMailRouter(deps.mailbox, loadSession(lucia)));
 
-  if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html'))) serveClient(app, deps.clientDir);
+  if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html')))
+    serveClient(app, deps.clientDir);
   app.use(errorHandler(deps.logger));
   return app;
 }
 
 function serveClient(app: Express, clientDir: string) {
-  app.use(express.static(clientDir, { index: false, maxAge: '1h', setHeaders: noCacheForEntryFiles }));
+  app.use(
+    express.static(clientDir, { index: false, maxAge: '1h', setHeaders: noCacheForEntryFiles }),
+  );
   // Every other path is a client route: the app shell decides what to show.
   app.get('/{*splat}', (_req, res) => {
     res.setHeader('Cache-Control', 'no-cache');
@@ -127,7 +147,12 @@ function serveClient(app: Express, clientDir: string) {
 /** Hashed assets may be cached; the shell and the service worker must always be revalidated. */
 function noCacheForEntryFiles(res: express.Response, filePath: string) {
   const name = path.basename(filePath);
-  if (name === 'index.html' || name === 'sw.js' || name.endsWith('.webmanifest') || name === 'registerSW.js') {
+  if (
+    name === 'index.html' ||
+    name === 'sw.js' ||
+    name.endsWith('.webmanifest') ||
+    name === 'registerSW.js'
+  ) {
     res.setHeader('Cache-Control', 'no-cache');
   } else if (filePath.includes(`${path.sep}assets${path.sep}`)) {
     res.setHeader('Cache-Control', 'public, max-age=31536000, immutable');

@@ -13,7 +13,11 @@ import { MIGRATIONS } from './migrations/index.js';
  * of 2,000 readings writes about 700 pages and at 1,000 every other batch paid for a checkpoint
  * before its answer.
  */
-const CONNECTION_PRAGMAS = ['busy_timeout = 5000', 'synchronous = NORMAL', 'wal_autocheckpoint = 4000'] as const;
+const CONNECTION_PRAGMAS = [
+  'busy_timeout = 5000',
+  'synchronous = NORMAL',
+  'wal_autocheckpoint = 4000',
+] as const;
 
 /**
  * One SQLite file through better-sqlite3 (TypeORM 1.x has no driver for the `sqlite3` package).
@@ -21,7 +25,8 @@ const CONNECTION_PRAGMAS = ['busy_timeout = 5000', 'synchronous = NORMAL', 'wal_
  * The schema only ever changes through migrations: `synchronize` stays off.
  */
 export function createDataSource(databasePath: string): DataSource {
-  if (databasePath !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(databasePath)), { recursive: true });
+  if (databasePath !== ':memory:')
+    fs.mkdirSync(path.dirname(path.resolve(databasePath)), { recursive: true });
   return new DataSource({
     type: 'better-sqlite3',
     database: databasePath,

@@ -19,4 +19,25 @@ import { Vessel } from './features/vessels/vessel.entity.js';
 import { Workshop } from './features/workshops/workshop.entity.js';
 
 /** Every entity of the schema; the data source and the migration generator both use this list. */
-export const ENTITIES = [Workshop, User, Session, Invite, Vessel, VesselSkipper, Engine, Program, Run, RunEventRow, ChangeCounter, RunPatchRow, CommissioningChecklist, Attachment, AuditEntry, RunReview, Certificate, RunSummary, RunSummaryMark, ServiceReminder];
+export const ENTITIES = [
+  Workshop,
+  User,
+  Session,
+  Invite,
+  Vessel,
+  VesselSkipper,
+  Engine,
+  Program,
+  Run,
+  RunEventRow,
+  ChangeCounter,
+  RunPatchRow,
+  CommissioningChecklist,
+  Attachment,
+  AuditEntry,
+  RunReview,
+  Certificate,
+  RunSummary,
+  RunSummaryMark,
+  ServiceReminder,
+];

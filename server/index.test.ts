@@ -13,11 +13,15 @@ describe('the server process', () => {
     const res = await fetch(`${server.baseURL}/api/health`);
     expect(res.status).toBe(200);
     const body = await res.json();
-    expect(body).toMatchObject({ status: 'ok', database: 'reachable', migrations: { pending: false } });
+    expect(body).toMatchObject({
+      status: 'ok',
+      database: 'reachable',
+      migrations: { pending: false },
+    });
     expect(body.migrations.applied).toBeGreaterThanOrEqual(1);
   });
 
-  it('signs in a demo user and lists that user\'s vessels with their engines', async () => {
+  it("signs in a demo user and lists that user's vessels with their engines", async () => {
     const signIn = await fetch(`${server.baseURL}/api/auth/sign-in`, {
       method: 'POST',
       headers: { 'content-type': 'application/json', origin: server.baseURL },
@@ -25,9 +29,15 @@ describe('the server process', () => {
     });
     expect(signIn.status).toBe(200);
     const cookie = signIn.headers.get('set-cookie')!.split(';')[0];
-    const vessels = await (await fetch(`${server.baseURL}/api/vessels`, { headers: { cookie } })).json();
+    const vessels = await (
+      await fetch(`${server.baseURL}/api/vessels`, { headers: { cookie } })
+    ).json();
     expect(vessels.vessels).toHaveLength(1);
-    expect(vessels.vessels[0].engines[0]).toMatchObject({ serialNumber: 'B321-D-77841', poles: 12, pulleyRatio: 2.5 });
+    expect(vessels.vessels[0].engines[0]).toMatchObject({
+      serialNumber: 'B321-D-77841',
+      poles: 12,
+      pulleyRatio: 2.5,
+    });
   });
 
   it('answers unknown API routes with a JSON 404', async () => {

@@ -27,18 +27,35 @@ async function main() {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
   // Demo certificates are seeded as records; their PDFs are written once the data folder is known.
-  await storeMissingCertificates(dataSource, new CertificateStore(config.dataDir), systemClock.now());
+  await storeMissingCertificates(
+    dataSource,
+    new CertificateStore(config.dataDir),
+    systemClock.now(),
+  );
   const mail = await startMail({ production: config.production, dataDir: config.dataDir, logger });
-  const app = createApp({ dataSource, logger, clientDir: path.join(root, 'dist', 'client'), publicOrigin: config.publicOrigin, dataDir: config.dataDir, mailer: mail.mailer, mailbox: mail.mailbox });
+  const app = createApp({
+    dataSource,
+    logger,
+    clientDir: path.join(root, 'dist', 'client'),
+    publicOrigin: config.publicOrigin,
+    dataDir: config.dataDir,
+    mailer: mail.mailer,
+    mailbox: mail.mailbox,
+  });
   const reminderMinutes = Number(process.env.RINGSEAT_REMINDER_MINUTES);
   const reminders = new ReminderJob({
-    dataSource, logger, clock: systemClock, outbox: new Outbox(mail.mailer, logger),
+    dataSource,
+    logger,
+    clock: systemClock,
+    outbox: new Outbox(mail.mailer, logger),
     serviceDue: new ServiceDueService(dataSource, new RunSummaries(dataSource), systemClock),
     intervalMs: reminderMinutes > 0 ? reminderMinutes * 60_000 : DEFAULT_REMINDER_INTERVAL_MS,
   });
   reminders.start();
   const server = app.listen(config.port, config.host, () => {
-    logger.info(`Ringseat is serving on http://localhost:${config.port} (database ${config.databasePath})`);
+    logger.info(
+      `Ringseat is serving on http://localhost:${config.port} (database ${config.databasePath})`,
+    );
   });
 
   const shutdown = (signal: string) => {

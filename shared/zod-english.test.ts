@@ -23,9 +23,12 @@ function runtimeImports(file: string, seen = new Set<string>()): Set<string> {
   if (seen.has(file)) return seen;
   seen.add(file);
   const source = readFileSync(file, 'utf8');
-  for (const match of source.matchAll(/^\s*(?:import|export)\s+(?!type\b)(?:[^'";]*?\sfrom\s+)?['"]([^'"]+)['"]/gm)) {
+  for (const match of source.matchAll(
+    /^\s*(?:import|export)\s+(?!type\b)(?:[^'";]*?\sfrom\s+)?['"]([^'"]+)['"]/gm,
+  )) {
     const specifier = match[1];
-    if (specifier.startsWith('.')) runtimeImports(resolve(dirname(file), specifier.replace(/\.js$/, '') + '.ts'), seen);
+    if (specifier.startsWith('.'))
+      runtimeImports(resolve(dirname(file), specifier.replace(/\.js$/, '') + '.ts'), seen);
     else seen.add(specifier);
   }
   return seen;
@@ -41,16 +44,23 @@ describe('deck-path schemas on zod/mini', () => {
     for (const file of DECK_PATH_SCHEMAS) {
       const loaded = [...runtimeImports(resolve(root, file))];
       expect(loaded, file).toContain('zod/mini');
-      expect(loaded.filter((m) => m === 'zod' || m.startsWith('zod/v4') || m === 'zod/v3' || m === 'zod/v4-mini'), file).toEqual([]);
+      expect(
+        loaded.filter(
+          (m) => m === 'zod' || m.startsWith('zod/v4') || m === 'zod/v3' || m === 'zod/v4-mini',
+        ),
+        file,
+      ).toEqual([]);
     }
   });
 
-  it("give a check without its own message the same English words as classic zod, when nothing else set them", async () => {
+  it('give a check without its own message the same English words as classic zod, when nothing else set them', async () => {
     config({ localeError: undefined });
     expect(z.string().safeParse(1).error?.issues[0].message).toBe('Invalid input');
     vi.resetModules();
     await import('./zod-english');
-    expect(z.string().safeParse(1).error?.issues[0].message).toBe('Invalid input: expected string, received number');
+    expect(z.string().safeParse(1).error?.issues[0].message).toBe(
+      'Invalid input: expected string, received number',
+    );
   });
 
   it('leave a locale the app chose alone', async () => {

@@ -17,8 +17,10 @@ if (import.meta.env.PROD) {
   registerSW({
     immediate: true,
     onNeedReload: () => {
-      if (!isDeckPath(window.location.pathname) || document.visibilityState === 'hidden') return window.location.reload();
-      const reloadWhenHidden = () => document.visibilityState === 'hidden' && window.location.reload();
+      if (!isDeckPath(window.location.pathname) || document.visibilityState === 'hidden')
+        return window.location.reload();
+      const reloadWhenHidden = () =>
+        document.visibilityState === 'hidden' && window.location.reload();
       document.addEventListener('visibilitychange', reloadWhenHidden);
     },
   });
@@ -32,5 +34,6 @@ if (!container) throw new Error('Ringseat: the page has no #root element.');
  * which therefore loads only what the deck needs; every other address gets the workshop app.
  * Moving between them is a page load (both are precached, so it works offline too).
  */
-if (isDeckPath(window.location.pathname)) void import('./deck/deck-main').then((m) => m.renderDeckApp(container));
+if (isDeckPath(window.location.pathname))
+  void import('./deck/deck-main').then((m) => m.renderDeckApp(container));
 else void import('./app/app-main').then((m) => m.renderWorkshopApp(container));

@@ -6,5 +6,9 @@ import { prepareData } from '../lib/bootstrap.js';
 const config = loadConfig();
 const dataSource = await openDatabase(config.databasePath);
 const { seeded: added } = await prepareData(dataSource, { seed: 'demo' });
-console.log(added ? `${config.databasePath}: demo workshop added.` : `${config.databasePath}: already holds data; nothing added (demo data goes only into a new database).`);
+console.log(
+  added
+    ? `${config.databasePath}: demo workshop added.`
+    : `${config.databasePath}: already holds data; nothing added (demo data goes only into a new database).`,
+);
 await dataSource.destroy();

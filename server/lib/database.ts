@@ -12,7 +12,9 @@ export async function openDatabase(databasePath: string): Promise<DataSource> {
 export type MigrationLevel = { applied: number; latest: string | null; pending: boolean };
 
 export async function migrationLevel(dataSource: DataSource): Promise<MigrationLevel> {
-  const rows: Array<{ name: string }> = await dataSource.query('SELECT name FROM "migrations" ORDER BY id');
+  const rows: Array<{ name: string }> = await dataSource.query(
+    'SELECT name FROM "migrations" ORDER BY id',
+  );
   return {
     applied: rows.length,
     latest: rows.at(-1)?.name ?? null,

@@ -3,5 +3,9 @@ import { pino, type Logger } from 'pino';
 export type { Logger };
 
 export function createLogger(level: string): Logger {
-  return pino({ level, base: undefined, redact: ['req.headers.cookie', 'res.headers["set-cookie"]'] });
+  return pino({
+    level,
+    base: undefined,
+    redact: ['req.headers.cookie', 'res.headers["set-cookie"]'],
+  });
 }

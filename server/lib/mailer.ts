@@ -30,7 +30,9 @@ export interface SmtpSettings {
 const MailEnvSchema = z.object({
   SMTP_HOST: z.string().trim().min(1).optional(),
   SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
-  SMTP_SECURE: z.enum(['true', 'false'], { error: 'SMTP_SECURE must be true or false.' }).optional(),
+  SMTP_SECURE: z
+    .enum(['true', 'false'], { error: 'SMTP_SECURE must be true or false.' })
+    .optional(),
   SMTP_USER: z.string().optional(),
   SMTP_PASS: z.string().optional(),
   MAIL_FROM: z.string().trim().min(3).default('Ringseat <no-reply@ringseat.invalid>'),
@@ -40,15 +42,31 @@ const MailEnvSchema = z.object({
  * Mail settings from the environment. Without SMTP_HOST there is no outside server: the process
  * starts its own local catcher (development and tests) or sends nothing (production).
  */
-export function loadMailSettings(env: NodeJS.ProcessEnv = process.env): { smtp: SmtpSettings | null; from: string } {
+export function loadMailSettings(env: NodeJS.ProcessEnv = process.env): {
+  smtp: SmtpSettings | null;
+  from: string;
+} {
   const parsed = MailEnvSchema.safeParse(env);
-  if (!parsed.success) throw new Error(`Invalid mail settings:\n${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n')}`);
+  if (!parsed.success)
+    throw new Error(
+      `Invalid mail settings:\n${parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n')}`,
+    );
   const e = parsed.data;
   if (!e.SMTP_HOST) return { smtp: null, from: e.MAIL_FROM };
   const secure = e.SMTP_SECURE === 'true';
   // 465 is SMTP over TLS, 587 submission with STARTTLS (RFC 8314).
   const port = e.SMTP_PORT ?? (secure ? 465 : 587);
-  return { smtp: { host: e.SMTP_HOST, port, secure, user: e.SMTP_USER || undefined, pass: e.SMTP_PASS || undefined, from: e.MAIL_FROM }, from: e.MAIL_FROM };
+  return {
+    smtp: {
+      host: e.SMTP_HOST,
+      port,
+      secure,
+      user: e.SMTP_USER || undefined,
+      pass: e.SMTP_PASS || undefined,
+      from: e.MAIL_FROM,
+    },
+    from: e.MAIL_FROM,
+  };
 }
 
 /** Sends through any SMTP server: the workshop's provider, or the local catcher. */

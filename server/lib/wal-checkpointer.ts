@@ -42,10 +42,17 @@ export type WalCheckpointer = {
   stop: () => Promise<void>;
 };
 
-export async function startWalCheckpointer(databaseFile: string, logger: Logger, intervalMs = 250): Promise<WalCheckpointer> {
+export async function startWalCheckpointer(
+  databaseFile: string,
+  logger: Logger,
+  intervalMs = 250,
+): Promise<WalCheckpointer> {
   if (databaseFile === ':memory:') return { stop: async () => {} };
   const driver = createRequire(import.meta.url).resolve('better-sqlite3');
-  const worker = new Worker(WORKER_SOURCE, { eval: true, workerData: { driver, file: path.resolve(databaseFile), intervalMs } });
+  const worker = new Worker(WORKER_SOURCE, {
+    eval: true,
+    workerData: { driver, file: path.resolve(databaseFile), intervalMs },
+  });
   worker.unref();
   let stopped: (() => void) | null = null;
   await new Promise<void>((resolve, reject) => {
@@ -54,11 +61,16 @@ export async function startWalCheckpointer(databaseFile: string, logger: Logger,
       if (message === 'ready') resolve();
       else if (message === 'stopped') stopped?.();
       else if (typeof message === 'object' && message !== null && 'error' in message) {
-        logger.warn({ error: (message as { error: string }).error }, 'background checkpoint failed; SQLite\'s own checkpoint still runs');
+        logger.warn(
+          { error: (message as { error: string }).error },
+          "background checkpoint failed; SQLite's own checkpoint still runs",
+        );
       }
     });
   });
-  worker.on('error', (error) => logger.warn({ err: error }, 'checkpoint thread stopped; SQLite\'s own checkpoint still runs'));
+  worker.on('error', (error) =>
+    logger.warn({ err: error }, "checkpoint thread stopped; SQLite's own checkpoint still runs"),
+  );
   return {
     stop: async () => {
       const done = new Promise<void>((resolve) => {

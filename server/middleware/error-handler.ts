@@ -19,15 +19,34 @@ export function problemFrom(error: HttpError, instance?: string): Problem {
 }
 
 /** Errors raised by body-parser carry `type`; map the ones a client can cause to plain 4xx answers. */
-function fromBodyParser(error: { type?: string; status?: number; limit?: number }): HttpError | null {
+function fromBodyParser(error: {
+  type?: string;
+  status?: number;
+  limit?: number;
+}): HttpError | null {
   if (error.type === 'entity.too.large') {
-    return new HttpError(413, 'body-too-large', 'Request body too large', `The request body is larger than the limit of ${error.limit} bytes.`);
+    return new HttpError(
+      413,
+      'body-too-large',
+      'Request body too large',
+      `The request body is larger than the limit of ${error.limit} bytes.`,
+    );
   }
   if (error.type === 'entity.parse.failed') {
-    return new HttpError(400, 'malformed-json', 'Malformed JSON', 'The request body is not valid JSON.');
+    return new HttpError(
+      400,
+      'malformed-json',
+      'Malformed JSON',
+      'The request body is not valid JSON.',
+    );
   }
   if (error.type && error.status && error.status >= 400 && error.status < 500) {
-    return new HttpError(error.status, 'bad-request', 'Bad request', 'The request body could not be read.');
+    return new HttpError(
+      error.status,
+      'bad-request',
+      'Bad request',
+      'The request body could not be read.',
+    );
   }
   return null;
 }
@@ -41,10 +60,20 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     }
     logger.error({ err: error, url: req.originalUrl }, 'unhandled error');
     // Never a stack trace or internal message to the client.
-    send(res, { type: '/problems/internal', title: 'Something went wrong on the server', status: 500, detail: 'The error has been logged. Try again; if it persists, tell your workshop.' });
+    send(res, {
+      type: '/problems/internal',
+      title: 'Something went wrong on the server',
+      status: 500,
+      detail: 'The error has been logged. Try again; if it persists, tell your workshop.',
+    });
   };
 }
 
 export const apiNotFound: RequestHandler = (req, res) => {
-  send(res, { type: '/problems/no-such-route', title: 'No such API route', status: 404, detail: `${req.method} ${req.originalUrl} is not part of the Ringseat API.` });
+  send(res, {
+    type: '/problems/no-such-route',
+    title: 'No such API route',
+    status: 404,
+    detail: `${req.method} ${req.originalUrl} is not part of the Ringseat API.`,
+  });
 };

@@ -11,7 +11,9 @@ export function requireRole(...roles: Role[]): RequestHandler {
     const user = res.locals.user;
     if (!user) throw new UnauthenticatedError();
     if (roles.length > 0 && !roles.includes(user.role)) {
-      throw new ForbiddenError(`This needs the ${roles.join(' or ')} role; you are signed in as ${user.role}.`);
+      throw new ForbiddenError(
+        `This needs the ${roles.join(' or ')} role; you are signed in as ${user.role}.`,
+      );
     }
     next();
   };

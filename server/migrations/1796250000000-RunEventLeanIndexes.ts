@@ -12,6 +12,8 @@ export class RunEventLeanIndexes1796250000000 implements MigrationInterface {
   }
 
   public async down(queryRunner: QueryRunner): Promise<void> {
-    await queryRunner.query(`CREATE INDEX "IDX_901378c93e622f2fe27eac5f74" ON "run_event" ("workshopId") `);
+    await queryRunner.query(
+      `CREATE INDEX "IDX_901378c93e622f2fe27eac5f74" ON "run_event" ("workshopId") `,
+    );
   }
 }

@@ -7,4 +7,12 @@ import { ReviewSignOff1796163848909 } from './1796163848909-ReviewSignOff.js';
 import { RunEventLeanIndexes1796250000000 } from './1796250000000-RunEventLeanIndexes.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
-export const MIGRATIONS: Function[] = [Foundation1796161893549, Programs1796162374272, RunEvents1796163247780, RunPatches1796163491458, WorkshopFleet1796163738205, ReviewSignOff1796163848909, RunEventLeanIndexes1796250000000];
+export const MIGRATIONS: Function[] = [
+  Foundation1796161893549,
+  Programs1796162374272,
+  RunEvents1796163247780,
+  RunPatches1796163491458,
+  WorkshopFleet1796163738205,
+  ReviewSignOff1796163848909,
+  RunEventLeanIndexes1796250000000,
+];

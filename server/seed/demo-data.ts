@@ -171,7 +171,10 @@ export const DEMO_VESSELS: Array<{
     lengthM: 7.4,
     homePort: 'Kestrel Harbour',
     skipper: 'skipperA',
-    engines: [cormorantOutboard('port', 'NV115-26-00871'), cormorantOutboard('starboard', 'NV115-26-00874')],
+    engines: [
+      cormorantOutboard('port', 'NV115-26-00871'),
+      cormorantOutboard('starboard', 'NV115-26-00874'),
+    ],
   },
   {
     key: 'skua',

@@ -23,34 +23,86 @@ export function storedEvents(
   skipperClockAheadMs: number,
 ): StoredEvent[] {
   return simulated.map(({ event, by, outingEnd }) => {
-    const deviceEvent = by === 'skipper' && skipperClockAheadMs !== 0 ? { ...event, at: event.at + skipperClockAheadMs } : event;
-    return { runId: run.id, workshopId: run.workshopId, event: deviceEvent, receivedAt: outingEnd + SYNC_DELAY_MS[by], authorId: authors[by] };
+    const deviceEvent =
+      by === 'skipper' && skipperClockAheadMs !== 0
+        ? { ...event, at: event.at + skipperClockAheadMs }
+        : event;
+    return {
+      runId: run.id,
+      workshopId: run.workshopId,
+      event: deviceEvent,
+      receivedAt: outingEnd + SYNC_DELAY_MS[by],
+      authorId: authors[by],
+    };
   });
 }
 
-const COLUMNS = ['id', 'runId', 'workshopId', 'engineId', 'kind', 'at', 'receivedAt', 'authorId', 'phaseId', 'rpm', 'throttle', 'body', 'seq'];
+const COLUMNS = [
+  'id',
+  'runId',
+  'workshopId',
+  'engineId',
+  'kind',
+  'at',
+  'receivedAt',
+  'authorId',
+  'phaseId',
+  'rpm',
+  'throttle',
+  'body',
+  'seq',
+];
 const ROWS_PER_INSERT = 200;
 
 /** Inserts the events in arrival order, numbered as sync would have numbered them. */
 export async function insertEvents(manager: EntityManager, events: StoredEvent[]): Promise<void> {
   if (events.length === 0) return;
-  const ordered = [...events].sort((a, b) => a.receivedAt - b.receivedAt || a.event.at - b.event.at);
+  const ordered = [...events].sort(
+    (a, b) => a.receivedAt - b.receivedAt || a.event.at - b.event.at,
+  );
   let seq = await reserveChangeSeq(manager, ordered.length);
   for (let from = 0; from < ordered.length; from += ROWS_PER_INSERT) {
     const chunk = ordered.slice(from, from + ROWS_PER_INSERT);
     const params: unknown[] = [];
     for (const { runId, workshopId, event: e, receivedAt, authorId } of chunk) {
-      params.push(e.id, runId, workshopId, e.engineId, e.kind, e.at, receivedAt, authorId,
-        'phaseId' in e ? (e.phaseId ?? null) : null, e.kind === 'reading' ? e.rpm : null, e.kind === 'reading' ? e.throttle : null, JSON.stringify(e), seq++);
+      params.push(
+        e.id,
+        runId,
+        workshopId,
+        e.engineId,
+        e.kind,
+        e.at,
+        receivedAt,
+        authorId,
+        'phaseId' in e ? (e.phaseId ?? null) : null,
+        e.kind === 'reading' ? e.rpm : null,
+        e.kind === 'reading' ? e.throttle : null,
+        JSON.stringify(e),
+        seq++,
+      );
     }
     const rows = chunk.map(() => `(${COLUMNS.map(() => '?').join(', ')})`).join(', ');
-    await manager.query(`INSERT INTO "run_event" (${COLUMNS.map((c) => `"${c}"`).join(', ')}) VALUES ${rows}`, params);
+    await manager.query(
+      `INSERT INTO "run_event" (${COLUMNS.map((c) => `"${c}"`).join(', ')}) VALUES ${rows}`,
+      params,
+    );
   }
 }
 
 /** The device's "send to the workshop" change, kept as sync keeps it. */
-export async function insertSubmission(manager: EntityManager, input: { runId: string; authorId: string; at: number; receivedAt: number }): Promise<void> {
-  await manager.query('INSERT INTO "run_patch" ("id", "runId", "authorId", "at", "receivedAt", "body") VALUES (?, ?, ?, ?, ?, ?)', [
-    randomUUID(), input.runId, input.authorId, input.at, input.receivedAt, JSON.stringify({ type: 'run-patch', submit: true }),
-  ]);
+export async function insertSubmission(
+  manager: EntityManager,
+  input: { runId: string; authorId: string; at: number; receivedAt: number },
+): Promise<void> {
+  await manager.query(
+    'INSERT INTO "run_patch" ("id", "runId", "authorId", "at", "receivedAt", "body") VALUES (?, ?, ?, ?, ?, ?)',
+    [
+      randomUUID(),
+      input.runId,
+      input.authorId,
+      input.at,
+      input.receivedAt,
+      JSON.stringify({ type: 'run-patch', submit: true }),
+    ],
+  );
 }

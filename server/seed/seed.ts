@@ -22,25 +22,56 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await dataSource.transaction(async (manager) => {
     const workshopId = randomUUID();
-    await manager.getRepository(Workshop).insert({ id: workshopId, ...DEMO_WORKSHOP, units: { ...DEMO_WORKSHOP.units } });
+    await manager
+      .getRepository(Workshop)
+      .insert({ id: workshopId, ...DEMO_WORKSHOP, units: { ...DEMO_WORKSHOP.units } });
     const userIds = new Map<string, string>();
     for (const user of DEMO_USERS) {
       const id = randomUUID();
       userIds.set(user.key, id);
-      await manager.getRepository(User).insert({ id, workshopId, email: user.email, name: user.name, role: user.role, passwordHash, archivedAt: null });
+      await manager.getRepository(User).insert({
+        id,
+        workshopId,
+        email: user.email,
+        name: user.name,
+        role: user.role,
+        passwordHash,
+        archivedAt: null,
+      });
     }
     const engineIds = new Map<string, string>();
-    for (const vessel of DEMO_VESSELS) await seedVessel(manager, workshopId, vessel, vessel.skipper ? userIds.get(vessel.skipper)! : null, engineIds);
+    for (const vessel of DEMO_VESSELS)
+      await seedVessel(
+        manager,
+        workshopId,
+        vessel,
+        vessel.skipper ? userIds.get(vessel.skipper)! : null,
+        engineIds,
+      );
     await seedDemoRuns(manager, { workshopId, userIds, engineIds });
   });
   return true;
 }
 
-async function seedVessel(manager: EntityManager, workshopId: string, vessel: (typeof DEMO_VESSELS)[number], skipperId: string | null, engineIds: Map<string, string>) {
+async function seedVessel(
+  manager: EntityManager,
+  workshopId: string,
+  vessel: (typeof DEMO_VESSELS)[number],
+  skipperId: string | null,
+  engineIds: Map<string, string>,
+) {
   const vesselId = randomUUID();
   // Demo data goes through the same schemas as user input, so it can never hold what a form would refuse.
-  const checked = VesselInputSchema.parse({ name: vessel.name, hin: vessel.hin, type: vessel.type, lengthM: vessel.lengthM, homePort: vessel.homePort });
-  await manager.getRepository(Vessel).insert({ id: vesselId, workshopId, ...checked, archivedAt: null });
+  const checked = VesselInputSchema.parse({
+    name: vessel.name,
+    hin: vessel.hin,
+    type: vessel.type,
+    lengthM: vessel.lengthM,
+    homePort: vessel.homePort,
+  });
+  await manager
+    .getRepository(Vessel)
+    .insert({ id: vesselId, workshopId, ...checked, archivedAt: null });
   if (skipperId) await manager.getRepository(VesselSkipper).insert({ vesselId, userId: skipperId });
   for (const { key, ...engine } of vessel.engines) {
     const input = EngineInputSchema.parse({ ...engine, vesselId });

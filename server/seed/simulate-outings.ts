@@ -49,7 +49,12 @@ const throttleFor = (rpm: number, ratedMax: number): ThrottlePosition =>
   rpm < 0.3 * ratedMax ? 'quarter' : rpm < 0.52 * ratedMax ? 'half' : 'three-quarter';
 
 /** A speed inside the band, at least 300 rpm from the last one, so the speed keeps changing. */
-function nextRpm(phase: ResolvedPhase, last: number, random: () => number, idleRpm: number): number {
+function nextRpm(
+  phase: ResolvedPhase,
+  last: number,
+  random: () => number,
+  idleRpm: number,
+): number {
   if (phase.throttleCeiling === 'idle') return Math.round(idleRpm + random() * 250);
   const low = Math.max(phase.band.rpmMin + 40, idleRpm + 600);
   const high = phase.band.rpmMax - 40;
@@ -69,8 +74,23 @@ interface Context {
   hourMeterStart: number;
 }
 
-function reading(ctx: Context, at: number, phase: ResolvedPhase, rpm: number, throttle: ThrottlePosition): Reading {
-  return { kind: 'reading', id: randomUUID(), at, engineId: ctx.engineId, phaseId: phase.id, rpm, throttle, rpmSource: 'tachometer' };
+function reading(
+  ctx: Context,
+  at: number,
+  phase: ResolvedPhase,
+  rpm: number,
+  throttle: ThrottlePosition,
+): Reading {
+  return {
+    kind: 'reading',
+    id: randomUUID(),
+    at,
+    engineId: ctx.engineId,
+    phaseId: phase.id,
+    rpm,
+    throttle,
+    rpmSource: 'tachometer',
+  };
 }
 
 /** Simulates one outing from `state`, pushing events; phases advance as each one's time in band is done. */
@@ -91,13 +111,29 @@ function simulateOuting(ctx: Context, state: State, outing: Outing, out: RunEven
       heldDone = true;
       event = reading(ctx, t, phase, Math.round(ctx.ratedMax * 0.985), 'full');
       step = held.minutes * MINUTE;
-    } else if (bursts.length > 0 && t >= bursts[0] && phase.rules.fullThrottleMaxSeconds !== undefined) {
+    } else if (
+      bursts.length > 0 &&
+      t >= bursts[0] &&
+      phase.rules.fullThrottleMaxSeconds !== undefined
+    ) {
       bursts.shift();
-      event = reading(ctx, t, phase, Math.round(ctx.ratedMax * (0.93 + ctx.random() * 0.04)), 'full');
+      event = reading(
+        ctx,
+        t,
+        phase,
+        Math.round(ctx.ratedMax * (0.93 + ctx.random() * 0.04)),
+        'full',
+      );
       step = 40_000; // well inside the one-minute limit of the demo's programs
     } else {
       state.rpm = nextRpm(phase, state.rpm, ctx.random, ctx.idleRpm);
-      event = reading(ctx, t, phase, state.rpm, phase.throttleCeiling === 'idle' ? 'idle' : throttleFor(state.rpm, ctx.ratedMax));
+      event = reading(
+        ctx,
+        t,
+        phase,
+        state.rpm,
+        phase.throttleCeiling === 'idle' ? 'idle' : throttleFor(state.rpm, ctx.ratedMax),
+      );
       const left = phase.requiredMs - state.inBandMs[state.phase];
       if (left > 0 && left + MINUTE < step) step = left + MINUTE;
     }
@@ -110,17 +146,32 @@ function simulateOuting(ctx: Context, state: State, outing: Outing, out: RunEven
     t += step;
     if (state.inBandMs[state.phase] >= phase.requiredMs && state.phase < ctx.phases.length - 1) {
       state.phase++;
-      out.push({ kind: 'phase-advance', id: randomUUID(), at: t, engineId: ctx.engineId, phaseId: ctx.phases[state.phase].id });
+      out.push({
+        kind: 'phase-advance',
+        id: randomUUID(),
+        at: t,
+        engineId: ctx.engineId,
+        phaseId: ctx.phases[state.phase].id,
+      });
     }
   }
-  if (last && outing.readHourMeter) last.hourMeter = Math.round((ctx.hourMeterStart + state.runMs / 3_600_000) * 10) / 10;
-  if (outing.note) out.push({ kind: 'note', id: randomUUID(), at: t, engineId: ctx.engineId, text: outing.note });
+  if (last && outing.readHourMeter)
+    last.hourMeter = Math.round((ctx.hourMeterStart + state.runMs / 3_600_000) * 10) / 10;
+  if (outing.note)
+    out.push({ kind: 'note', id: randomUUID(), at: t, engineId: ctx.engineId, text: outing.note });
   out.push({ kind: 'session-stop', id: randomUUID(), at: t, engineId: ctx.engineId });
 }
 
 /** Every event of a run's outings, in the order they happened. */
 export function simulateOutings(
-  input: { phases: ResolvedPhase[]; engineId: string; ratedMax: number; idleRpm: number; hourMeterStart: number; seed: number },
+  input: {
+    phases: ResolvedPhase[];
+    engineId: string;
+    ratedMax: number;
+    idleRpm: number;
+    hourMeterStart: number;
+    seed: number;
+  },
   outings: Outing[],
 ): SimulatedEvent[] {
   const ctx: Context = { ...input, random: seededRandom(input.seed) };
@@ -139,14 +190,22 @@ export function simulateOutings(
  * The second engine of a twin installation, run together with the first: the same moments and
  * levers, each speed a few rpm apart (no two tachometers agree exactly), kept inside the band.
  */
-export function twinOf(events: SimulatedEvent[], engineId: string, phases: ResolvedPhase[], seed: number): SimulatedEvent[] {
+export function twinOf(
+  events: SimulatedEvent[],
+  engineId: string,
+  phases: ResolvedPhase[],
+  seed: number,
+): SimulatedEvent[] {
   const random = seededRandom(seed);
   const bands = new Map(phases.map((p) => [p.id, p.band]));
   return events.map(({ event, ...rest }) => {
     const copy = { ...event, id: randomUUID(), engineId } as RunEvent;
     if (copy.kind === 'reading' && copy.throttle !== 'full') {
       const band = bands.get(copy.phaseId)!;
-      copy.rpm = Math.min(band.rpmMax - 10, Math.max(band.rpmMin + 10, copy.rpm + Math.round((random() - 0.5) * 60)));
+      copy.rpm = Math.min(
+        band.rpmMax - 10,
+        Math.max(band.rpmMin + 10, copy.rpm + Math.round((random() - 0.5) * 60)),
+      );
     }
     return { event: copy, ...rest };
   });

@@ -27,7 +27,9 @@ export const MAX_ATTACHMENTS_PER_RECORD = 30;
 
 const RecordFields = {
   recordType: AttachmentRecordTypeSchema,
-  recordId: z.uuid({ error: 'The record (recordId) must be the id of an engine, checklist or run.' }),
+  recordId: z.uuid({
+    error: 'The record (recordId) must be the id of an engine, checklist or run.',
+  }),
 };
 
 /** The text fields of the multipart upload (the file travels in the `file` field). */
@@ -35,7 +37,11 @@ export const AttachmentUploadFieldsSchema = z.object({
   /** Made on the device; sending the same id again returns the stored attachment instead of a copy. */
   id: z.uuid({ error: 'The attachment id (id) must be a UUID.' }).optional(),
   ...RecordFields,
-  caption: z.string({ error: 'The caption must be text.' }).trim().max(200, { error: 'The caption can have at most 200 characters.' }).default(''),
+  caption: z
+    .string({ error: 'The caption must be text.' })
+    .trim()
+    .max(200, { error: 'The caption can have at most 200 characters.' })
+    .default(''),
 });
 export type AttachmentUploadFields = z.infer<typeof AttachmentUploadFieldsSchema>;
 

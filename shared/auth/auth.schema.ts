@@ -22,13 +22,23 @@ export const PasswordSchema = z
 export const SignInInputSchema = z.object({
   email: EmailSchema,
   // Sign-in accepts any non-empty password: length rules apply when one is set, not when checked.
-  password: z.string({ error: 'Enter your password.' }).min(1, { error: 'Enter your password.' }).max(200),
+  password: z
+    .string({ error: 'Enter your password.' })
+    .min(1, { error: 'Enter your password.' })
+    .max(200),
 });
 export type SignInInput = z.infer<typeof SignInInputSchema>;
 
 export const AcceptInviteInputSchema = z.object({
-  token: z.string({ error: 'The invite link is incomplete.' }).min(20, { error: 'The invite link is incomplete.' }).max(200),
-  name: z.string({ error: 'Enter your name.' }).trim().min(1, { error: 'Enter your name.' }).max(120),
+  token: z
+    .string({ error: 'The invite link is incomplete.' })
+    .min(20, { error: 'The invite link is incomplete.' })
+    .max(200),
+  name: z
+    .string({ error: 'Enter your name.' })
+    .trim()
+    .min(1, { error: 'Enter your name.' })
+    .max(120),
   password: PasswordSchema,
 });
 export type AcceptInviteInput = z.infer<typeof AcceptInviteInputSchema>;
@@ -37,7 +47,10 @@ export const InviteInputSchema = z.object({
   email: EmailSchema,
   role: RoleSchema,
   /** Vessels the invited skipper is linked to on acceptance. */
-  vesselIds: z.array(z.uuid({ error: 'Each vessel must be chosen from the list.' })).max(50).default([]),
+  vesselIds: z
+    .array(z.uuid({ error: 'Each vessel must be chosen from the list.' }))
+    .max(50)
+    .default([]),
 });
 export type InviteInput = z.infer<typeof InviteInputSchema>;
 

@@ -14,7 +14,9 @@ export const ChargingCheckInputSchema = z.object({
     .number({ error: 'Enter the measured charging voltage (measuredV).' })
     .positive({ error: 'The measured charging voltage (measuredV) must be more than zero.' }),
   /** When unknown, the 25 °C reference is used and the result says so. */
-  batteryTemperatureC: z.number({ error: 'The battery temperature (batteryTemperatureC) must be a number.' }).optional(),
+  batteryTemperatureC: z
+    .number({ error: 'The battery temperature (batteryTemperatureC) must be a number.' })
+    .optional(),
   /** True when the voltage held for minutes at cruising rpm, not a passing spike. */
   sustained: z.boolean().default(false),
 });
@@ -40,7 +42,8 @@ export interface ChargingCheck {
 
 const volts = (v: number) => `${v.toFixed(2)} V`;
 
-const isRegulatorFault = (input: ChargingCheckInput) => input.sustained === true && input.measuredV > REGULATOR_FAULT_V;
+const isRegulatorFault = (input: ChargingCheckInput) =>
+  input.sustained === true && input.measuredV > REGULATOR_FAULT_V;
 
 function notesFor(input: ChargingCheckInput, temperatureC: number): ChargingCheck['notes'] {
   const notes: ChargingCheck['notes'] = [];
@@ -70,9 +73,14 @@ export function checkChargingVoltage(input: ChargingCheckInput): ChargingCheck {
   const limits = CHEMISTRY_LIMITS[input.chemistry];
   const temperatureC = input.batteryTemperatureC ?? REFERENCE_TEMPERATURE_C;
   const limitV = compensateVoltage(limits.absorptionV.max, input.chemistry, temperatureC);
-  const floorV = compensateVoltage((limits.floatV ?? limits.absorptionV).min, input.chemistry, temperatureC);
+  const floorV = compensateVoltage(
+    (limits.floatV ?? limits.absorptionV).min,
+    input.chemistry,
+    temperatureC,
+  );
   const regulatorFault = isRegulatorFault(input);
-  const status = regulatorFault || input.measuredV > limitV ? 'high' : input.measuredV < floorV ? 'low' : 'ok';
+  const status =
+    regulatorFault || input.measuredV > limitV ? 'high' : input.measuredV < floorV ? 'low' : 'ok';
   return {
     status,
     limitV,

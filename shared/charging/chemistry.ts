@@ -30,11 +30,26 @@ export const CHEMISTRY_LIMITS: Record<BatteryChemistry, ChemistryLimits> = {
     compensationMvPerDegCPerCell: -5,
   },
   // Battery University BU-403
-  agm: { label: 'AGM', absorptionV: { min: 14.4, max: 14.7 }, floatV: { min: 13.5, max: 13.8 }, compensationMvPerDegCPerCell: -3 },
+  agm: {
+    label: 'AGM',
+    absorptionV: { min: 14.4, max: 14.7 },
+    floatV: { min: 13.5, max: 13.8 },
+    compensationMvPerDegCPerCell: -3,
+  },
   // common practice
-  gel: { label: 'gel', absorptionV: { min: 14.1, max: 14.4 }, floatV: { min: 13.5, max: 13.8 }, compensationMvPerDegCPerCell: -3 },
+  gel: {
+    label: 'gel',
+    absorptionV: { min: 14.1, max: 14.4 },
+    floatV: { min: 13.5, max: 13.8 },
+    compensationMvPerDegCPerCell: -3,
+  },
   // common practice: 14.2–14.6 V (3.65 V per cell max); float 13.4–13.6 V or none; no compensation
-  lifepo4: { label: 'lithium iron phosphate', absorptionV: { min: 14.2, max: 14.6 }, floatV: { min: 13.4, max: 13.6 }, compensationMvPerDegCPerCell: null },
+  lifepo4: {
+    label: 'lithium iron phosphate',
+    absorptionV: { min: 14.2, max: 14.6 },
+    floatV: { min: 13.4, max: 13.6 },
+    compensationMvPerDegCPerCell: null,
+  },
 };
 
 /** Sustained above about 15.0 V on a 12 V system means a regulator fault (common practice). */
@@ -47,12 +62,18 @@ export const LIFEPO4_MIN_CHARGE_TEMPERATURE_C = 0;
  * Voltage shift for the battery temperature: mV/°C/cell × cells × (T − 25 °C).
  * Cold batteries need more voltage to absorb, warm ones less.
  */
-export function temperatureShiftV(chemistry: BatteryChemistry, batteryTemperatureC: number): number {
+export function temperatureShiftV(
+  chemistry: BatteryChemistry,
+  batteryTemperatureC: number,
+): number {
   const perCell = CHEMISTRY_LIMITS[chemistry].compensationMvPerDegCPerCell;
   if (perCell === null) return 0;
   return (perCell * LEAD_ACID_CELLS * (batteryTemperatureC - REFERENCE_TEMPERATURE_C)) / 1000;
 }
 
 /** A 25 °C voltage moved to the battery's temperature. */
-export const compensateVoltage = (voltsAt25C: number, chemistry: BatteryChemistry, batteryTemperatureC: number): number =>
-  voltsAt25C + temperatureShiftV(chemistry, batteryTemperatureC);
+export const compensateVoltage = (
+  voltsAt25C: number,
+  chemistry: BatteryChemistry,
+  batteryTemperatureC: number,
+): number => voltsAt25C + temperatureShiftV(chemistry, batteryTemperatureC);

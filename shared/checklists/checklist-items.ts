@@ -51,7 +51,8 @@ export const MEASURED_ITEMS: Record<MeasuredItemId, ChecklistItemDefinition> = {
     id: 'idleInGear',
     group: 'measured',
     label: 'Idle RPM in gear',
-    guidance: "Engine warm, in forward gear, boat secured or clear water: compare the idle speed with the maker's figure.",
+    guidance:
+      "Engine warm, in forward gear, boat secured or clear water: compare the idle speed with the maker's figure.",
   },
   fullThrottle: {
     id: 'fullThrottle',
@@ -68,19 +69,22 @@ export const CHECK_ITEMS: Record<CheckItemId, ChecklistItemDefinition> = {
     id: 'steering',
     group: 'rigging',
     label: 'Steering',
-    guidance: 'Lock to lock with the engine stopped: smooth, no binding or slack, every fastener and retaining clip in place.',
+    guidance:
+      'Lock to lock with the engine stopped: smooth, no binding or slack, every fastener and retaining clip in place.',
   },
   throttleCable: {
     id: 'throttleCable',
     group: 'rigging',
     label: 'Throttle cable adjustment',
-    guidance: 'The lever at idle leaves the engine on its idle stop; the lever fully forward reaches the full-throttle stop.',
+    guidance:
+      'The lever at idle leaves the engine on its idle stop; the lever fully forward reaches the full-throttle stop.',
   },
   shiftCable: {
     id: 'shiftCable',
     group: 'rigging',
     label: 'Shift cable adjustment',
-    guidance: 'The control detents match forward, neutral and reverse at the gearcase, and each gear engages fully.',
+    guidance:
+      'The control detents match forward, neutral and reverse at the gearcase, and each gear engages fully.',
   },
   neutralStart: {
     id: 'neutralStart',
@@ -92,25 +96,29 @@ export const CHECK_ITEMS: Record<CheckItemId, ChecklistItemDefinition> = {
     id: 'killSwitch',
     group: 'safety',
     label: 'Kill switch and lanyard',
-    guidance: 'At idle in neutral, pulling the lanyard stops the engine; the lanyard and its clip are aboard and reach the helm.',
+    guidance:
+      'At idle in neutral, pulling the lanyard stops the engine; the lanyard and its clip are aboard and reach the helm.',
   },
   coolingTellTale: {
     id: 'coolingTellTale',
     group: 'safety',
     label: 'Cooling-water tell-tale',
-    guidance: 'A steady stream from the tell-tale (or raw water at the exhaust) within seconds of starting; temperature normal.',
+    guidance:
+      'A steady stream from the tell-tale (or raw water at the exhaust) within seconds of starting; temperature normal.',
   },
   leaks: {
     id: 'leaks',
     group: 'safety',
     label: 'No fuel, oil or water leaks',
-    guidance: 'Running and stopped: no leak or fuel smell at fuel lines, filters, hoses, gaskets and hull fittings.',
+    guidance:
+      'Running and stopped: no leak or fuel smell at fuel lines, filters, hoses, gaskets and hull fittings.',
   },
   propellerNut: {
     id: 'propellerNut',
     group: 'rigging',
     label: 'Propeller and nut',
-    guidance: "Right propeller for the engine, hub undamaged, nut at the maker's torque with its cotter pin or tab washer in place.",
+    guidance:
+      "Right propeller for the engine, hub undamaged, nut at the maker's torque with its cotter pin or tab washer in place.",
   },
 };
 
@@ -120,4 +128,5 @@ export const ALL_ITEMS: ChecklistItemDefinition[] = [
 ];
 
 export const itemLabel = (id: ChecklistItemId): string =>
-  (MEASURED_ITEMS as Record<string, ChecklistItemDefinition>)[id]?.label ?? CHECK_ITEMS[id as CheckItemId].label;
+  (MEASURED_ITEMS as Record<string, ChecklistItemDefinition>)[id]?.label ??
+  CHECK_ITEMS[id as CheckItemId].label;

@@ -20,8 +20,14 @@ const wholeRpm = (label: string, min = 100) =>
     .nullable()
     .default(null);
 
-const NoteSchema = z.string({ error: 'The note must be text.' }).trim().max(500, { error: 'A note can have at most 500 characters.' }).default('');
-const NotApplicableSchema = z.boolean({ error: 'Not applicable must be yes or no.' }).default(false);
+const NoteSchema = z
+  .string({ error: 'The note must be text.' })
+  .trim()
+  .max(500, { error: 'A note can have at most 500 characters.' })
+  .default('');
+const NotApplicableSchema = z
+  .boolean({ error: 'Not applicable must be yes or no.' })
+  .default(false);
 
 export const TachometerEntrySchema = z.object({
   /** AC frequency at the coil or alternator terminal, Hz. */
@@ -69,7 +75,9 @@ export const FullThrottleEntrySchema = z.object({
 });
 
 export const CHECK_RESULTS = ['pass', 'fail', 'not-applicable'] as const;
-export const CheckResultSchema = z.enum(CHECK_RESULTS, { error: 'Choose pass, fail or not applicable.' });
+export const CheckResultSchema = z.enum(CHECK_RESULTS, {
+  error: 'Choose pass, fail or not applicable.',
+});
 export type CheckResult = z.infer<typeof CheckResultSchema>;
 
 export const CheckEntrySchema = z.object({
@@ -77,10 +85,9 @@ export const CheckEntrySchema = z.object({
   note: NoteSchema,
 });
 
-const checkShape = Object.fromEntries(CHECK_ITEM_IDS.map((id) => [id, CheckEntrySchema.prefault({})])) as Record<
-  CheckItemId,
-  z.ZodPrefault<typeof CheckEntrySchema>
->;
+const checkShape = Object.fromEntries(
+  CHECK_ITEM_IDS.map((id) => [id, CheckEntrySchema.prefault({})]),
+) as Record<CheckItemId, z.ZodPrefault<typeof CheckEntrySchema>>;
 
 /** The whole checklist as the form holds it and the API stores it; every part may still be empty. */
 export const ChecklistInputSchema = z.object({
@@ -89,7 +96,11 @@ export const ChecklistInputSchema = z.object({
   idleInGear: IdleEntrySchema.prefault({}),
   fullThrottle: FullThrottleEntrySchema.prefault({}),
   checks: z.object(checkShape).prefault({}),
-  notes: z.string({ error: 'Notes must be text.' }).trim().max(2000, { error: 'Notes can have at most 2000 characters.' }).default(''),
+  notes: z
+    .string({ error: 'Notes must be text.' })
+    .trim()
+    .max(2000, { error: 'Notes can have at most 2000 characters.' })
+    .default(''),
 });
 export type ChecklistInput = z.infer<typeof ChecklistInputSchema>;
 export type ChecklistFormInput = z.input<typeof ChecklistInputSchema>;

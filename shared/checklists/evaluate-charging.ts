@@ -9,7 +9,8 @@ export function evaluateCharging(entry: ChargingEntry): ItemJudgement {
   if (skipped) return skipped;
   if (entry.chemistry === null) return open('Choose the battery chemistry.');
   if (entry.measuredV === null) return open('Enter the voltage measured at the battery terminals.');
-  if (entry.atRpm === null) return open('Enter the engine RPM at which the voltage was measured (cruising RPM).');
+  if (entry.atRpm === null)
+    return open('Enter the engine RPM at which the voltage was measured (cruising RPM).');
 
   const check = checkChargingVoltage({
     chemistry: entry.chemistry,
@@ -24,9 +25,13 @@ export function evaluateCharging(entry: ChargingEntry): ItemJudgement {
   ];
   const reasons: string[] = [];
   if (check.status === 'high' && !check.regulatorFault) {
-    reasons.push(`${voltText(check.measuredV)} is above ${voltText(check.limitV)}, the most for ${battery}: the battery is being overcharged.`);
+    reasons.push(
+      `${voltText(check.measuredV)} is above ${voltText(check.limitV)}, the most for ${battery}: the battery is being overcharged.`,
+    );
   } else if (check.status === 'low') {
-    reasons.push(`${voltText(check.measuredV)} is below ${voltText(check.floorV)}, the least that charges ${battery}: the battery is not being charged.`);
+    reasons.push(
+      `${voltText(check.measuredV)} is below ${voltText(check.floorV)}, the least that charges ${battery}: the battery is not being charged.`,
+    );
   } else if (check.status === 'ok') {
     reasons.push(`${voltText(check.measuredV)} is within the range for ${battery}.`);
   }

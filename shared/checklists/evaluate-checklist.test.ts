@@ -7,11 +7,18 @@ import type { ChecklistEngine } from './evaluation';
 // Rated range 5000–6000 rpm as makers print it for four-stroke outboards (common practice);
 // 12-pole charging coil (common practice: rpm = 10 × Hz).
 const engine: ChecklistEngine = {
-  installation: 'outboard', ratedRpmMin: 5000, ratedRpmMax: 6000, gearRatio: 2, propPitchIn: 21,
-  tachSource: 'charging-coil', poles: 12, pulleyRatio: null,
+  installation: 'outboard',
+  ratedRpmMin: 5000,
+  ratedRpmMax: 6000,
+  gearRatio: 2,
+  propPitchIn: 21,
+  tachSource: 'charging-coil',
+  poles: 12,
+  pulleyRatio: null,
 };
 
-const allChecks = (result: 'pass' | 'fail') => Object.fromEntries(CHECK_ITEM_IDS.map((id) => [id, { result }]));
+const allChecks = (result: 'pass' | 'fail') =>
+  Object.fromEntries(CHECK_ITEM_IDS.map((id) => [id, { result }]));
 
 const finished: ChecklistFormInput = {
   tachometer: { measuredHz: 300, tachReadingRpm: 3000 }, // 300 Hz × 10 = 3000 rpm (common practice)
@@ -25,7 +32,14 @@ describe('the whole commissioning checklist', () => {
   it('has every item open when nothing is filled in', () => {
     const { items, summary } = evaluateChecklist(emptyChecklist(), engine);
     expect(items.map((i) => i.id)).toEqual(ALL_ITEMS.map((i) => i.id));
-    expect(summary).toEqual({ total: 12, passed: 0, failed: 0, open: 12, notApplicable: 0, readyToComplete: false });
+    expect(summary).toEqual({
+      total: 12,
+      passed: 0,
+      failed: 0,
+      open: 12,
+      notApplicable: 0,
+      readyToComplete: false,
+    });
   });
 
   it('is ready to complete when every item passes', () => {
@@ -34,21 +48,43 @@ describe('the whole commissioning checklist', () => {
   });
 
   it('counts a not-applicable item with its reason as done', () => {
-    const input = ChecklistInputSchema.parse({ ...finished, checks: { ...allChecks('pass'), neutralStart: { result: 'not-applicable', note: 'Tiller model with no start-in-gear lockout' } } });
-    expect(evaluateChecklist(input, engine).summary).toMatchObject({ passed: 11, notApplicable: 1, readyToComplete: true });
+    const input = ChecklistInputSchema.parse({
+      ...finished,
+      checks: {
+        ...allChecks('pass'),
+        neutralStart: {
+          result: 'not-applicable',
+          note: 'Tiller model with no start-in-gear lockout',
+        },
+      },
+    });
+    expect(evaluateChecklist(input, engine).summary).toMatchObject({
+      passed: 11,
+      notApplicable: 1,
+      readyToComplete: true,
+    });
   });
 
   it('names each item that stops completion', () => {
-    const input = ChecklistInputSchema.parse({ ...finished, fullThrottle: { rpm: 6400 }, checks: { ...allChecks('pass'), killSwitch: { result: 'fail', note: 'Clip missing' } } });
+    const input = ChecklistInputSchema.parse({
+      ...finished,
+      fullThrottle: { rpm: 6400 },
+      checks: { ...allChecks('pass'), killSwitch: { result: 'fail', note: 'Clip missing' } },
+    });
     const evaluation = evaluateChecklist(input, engine);
     expect(evaluation.summary.readyToComplete).toBe(false);
     const problems = completionProblems(evaluation);
     expect(problems.map((p) => p.field)).toEqual(['fullThrottle', 'checks.killSwitch']);
-    expect(problems[1].message).toBe('Kill switch and lanyard: failed. Marked as failed: put it right and check again before handover.');
+    expect(problems[1].message).toBe(
+      'Kill switch and lanyard: failed. Marked as failed: put it right and check again before handover.',
+    );
   });
 
   it('keeps what a part-done checklist holds through the schema', () => {
-    const parsed = ChecklistInputSchema.parse({ charging: { chemistry: 'gel' }, checks: { steering: { result: 'pass' } } });
+    const parsed = ChecklistInputSchema.parse({
+      charging: { chemistry: 'gel' },
+      checks: { steering: { result: 'pass' } },
+    });
     expect(parsed.charging.chemistry).toBe('gel');
     expect(parsed.checks.steering.result).toBe('pass');
     expect(parsed.checks.leaks.result).toBeNull();
@@ -56,7 +92,10 @@ describe('the whole commissioning checklist', () => {
   });
 
   it('names the field of a bad value', () => {
-    const result = ChecklistInputSchema.safeParse({ charging: { measuredV: 48 }, checks: { steering: { result: 'maybe' } } });
+    const result = ChecklistInputSchema.safeParse({
+      charging: { measuredV: 48 },
+      checks: { steering: { result: 'maybe' } },
+    });
     const issues = result.error?.issues.map((i) => [i.path.join('.'), i.message]);
     expect(issues).toEqual([
       ['charging.measuredV', 'Charging voltage must be at most 20 V.'],

@@ -1,4 +1,10 @@
-import { ALL_ITEMS, CHECK_ITEM_IDS, CHECK_ITEMS, MEASURED_ITEMS, type CheckItemId } from './checklist-items';
+import {
+  ALL_ITEMS,
+  CHECK_ITEM_IDS,
+  CHECK_ITEMS,
+  MEASURED_ITEMS,
+  type CheckItemId,
+} from './checklist-items';
 import type { CheckEntry, ChecklistInput } from './checklist.schema';
 import { evaluateCharging } from './evaluate-charging';
 import { evaluateFullThrottle, evaluateIdle } from './evaluate-speeds';
@@ -28,7 +34,10 @@ export function evaluateCheck(entry: CheckEntry): ItemJudgement {
       ? { verdict: 'not-applicable', reasons: [`Not applicable: ${entry.note}`], figures: [] }
       : open('Marked not applicable: say why in the note.');
   }
-  const reasons = entry.result === 'fail' ? ['Marked as failed: put it right and check again before handover.'] : ['Checked and passed.'];
+  const reasons =
+    entry.result === 'fail'
+      ? ['Marked as failed: put it right and check again before handover.']
+      : ['Checked and passed.'];
   if (entry.note && entry.result === 'fail') reasons.push(`Note: ${entry.note}`);
   return { verdict: entry.result, reasons, figures: [] };
 }
@@ -52,9 +61,16 @@ function measuredItems(input: ChecklistInput, engine: ChecklistEngine): ItemEval
 }
 
 /** Every item judged by the computation core, with a count of where the checklist stands. */
-export function evaluateChecklist(input: ChecklistInput, engine: ChecklistEngine): ChecklistEvaluation {
-  const items = [...measuredItems(input, engine), ...CHECK_ITEM_IDS.map((id) => checkItem(id, input.checks[id]))];
-  const count = (verdict: ItemEvaluation['verdict']) => items.filter((i) => i.verdict === verdict).length;
+export function evaluateChecklist(
+  input: ChecklistInput,
+  engine: ChecklistEngine,
+): ChecklistEvaluation {
+  const items = [
+    ...measuredItems(input, engine),
+    ...CHECK_ITEM_IDS.map((id) => checkItem(id, input.checks[id])),
+  ];
+  const count = (verdict: ItemEvaluation['verdict']) =>
+    items.filter((i) => i.verdict === verdict).length;
   const summary: ChecklistSummary = {
     total: ALL_ITEMS.length,
     passed: count('pass'),
@@ -67,11 +83,14 @@ export function evaluateChecklist(input: ChecklistInput, engine: ChecklistEngine
 }
 
 /** Why a checklist cannot be completed yet, one message per item, naming the item. */
-export function completionProblems(evaluation: ChecklistEvaluation): Array<{ field: string; message: string }> {
+export function completionProblems(
+  evaluation: ChecklistEvaluation,
+): Array<{ field: string; message: string }> {
   return evaluation.items
     .filter((item) => item.verdict === 'fail' || item.verdict === 'open')
     .map((item) => ({
       field: item.field,
-      message: `${item.label}: ${item.verdict === 'fail' ? 'failed' : 'not finished'}. ${item.reasons[0] ?? ''}`.trim(),
+      message:
+        `${item.label}: ${item.verdict === 'fail' ? 'failed' : 'not finished'}. ${item.reasons[0] ?? ''}`.trim(),
     }));
 }

@@ -1,7 +1,14 @@
 import type { SignalSource } from '../engine-speed/signal-source.schema';
 import { engineRpmFromFrequency, tachDialSetting } from '../engine-speed/engine-speed';
 import type { TachometerEntry } from './checklist.schema';
-import { notApplicable, open, percentText, rpmText, type ChecklistEngine, type ItemJudgement } from './evaluation';
+import {
+  notApplicable,
+  open,
+  percentText,
+  rpmText,
+  type ChecklistEngine,
+  type ItemJudgement,
+} from './evaluation';
 
 /**
  * A helm tachometer within ±3 % of the true engine speed passes. Analogue marine tachometers are
@@ -11,7 +18,8 @@ export const TACH_TOLERANCE = 0.03;
 
 /** The engine's AC signal source, when its record has one the frequency can be turned into RPM with. */
 export function signalSourceOf(engine: ChecklistEngine): SignalSource | null {
-  if (engine.tachSource === 'charging-coil' && engine.poles) return { kind: 'charging-coil', poles: engine.poles };
+  if (engine.tachSource === 'charging-coil' && engine.poles)
+    return { kind: 'charging-coil', poles: engine.poles };
   if (engine.tachSource === 'belt-alternator' && engine.poles && engine.pulleyRatio) {
     return { kind: 'belt-alternator', poles: engine.poles, pulleyRatio: engine.pulleyRatio };
   }
@@ -29,9 +37,13 @@ function trueSpeed(entry: TachometerEntry, source: SignalSource | null): TrueSpe
           'Enter a hand-held tachometer reading instead, or complete the engine record.',
       };
     }
-    return { rpm: engineRpmFromFrequency(entry.measuredHz, source), how: `from ${entry.measuredHz} Hz` };
+    return {
+      rpm: engineRpmFromFrequency(entry.measuredHz, source),
+      how: `from ${entry.measuredHz} Hz`,
+    };
   }
-  if (entry.referenceRpm !== null) return { rpm: entry.referenceRpm, how: 'by hand-held tachometer' };
+  if (entry.referenceRpm !== null)
+    return { rpm: entry.referenceRpm, how: 'by hand-held tachometer' };
   return { problem: 'Enter the measured frequency, or the RPM read with a hand-held tachometer.' };
 }
 
@@ -55,7 +67,8 @@ export function evaluateTachometer(entry: TachometerEntry, engine: ChecklistEngi
   const source = signalSourceOf(engine);
   const truth = trueSpeed(entry, source);
   if ('problem' in truth) return open(truth.problem);
-  if (entry.tachReadingRpm === null) return open('Enter what the helm tachometer showed at the same moment.');
+  if (entry.tachReadingRpm === null)
+    return open('Enter what the helm tachometer showed at the same moment.');
 
   const deviation = (entry.tachReadingRpm - truth.rpm) / truth.rpm;
   const figures = [
@@ -64,9 +77,15 @@ export function evaluateTachometer(entry: TachometerEntry, engine: ChecklistEngi
   ];
   const limit = `±${TACH_TOLERANCE * 100} %`;
   if (Math.abs(deviation) <= TACH_TOLERANCE) {
-    return { verdict: 'pass', reasons: [`The tachometer reads within ${limit} of the true speed.`], figures };
+    return {
+      verdict: 'pass',
+      reasons: [`The tachometer reads within ${limit} of the true speed.`],
+      figures,
+    };
   }
-  const reasons = [`The tachometer reads ${percentText(deviation)} off the true speed; it should be within ${limit}.`];
+  const reasons = [
+    `The tachometer reads ${percentText(deviation)} off the true speed; it should be within ${limit}.`,
+  ];
   const advice = dialAdvice(entry.tachReadingRpm / truth.rpm, source);
   if (advice) reasons.push(advice);
   return { verdict: 'fail', reasons, figures };

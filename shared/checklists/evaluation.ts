@@ -28,18 +28,33 @@ export interface ItemEvaluation extends ItemJudgement {
 /** The engine facts the checklist judges against. */
 export type ChecklistEngine = Pick<
   EngineInput,
-  'installation' | 'ratedRpmMin' | 'ratedRpmMax' | 'gearRatio' | 'propPitchIn' | 'tachSource' | 'poles' | 'pulleyRatio'
+  | 'installation'
+  | 'ratedRpmMin'
+  | 'ratedRpmMax'
+  | 'gearRatio'
+  | 'propPitchIn'
+  | 'tachSource'
+  | 'poles'
+  | 'pulleyRatio'
 >;
 
-export const open = (...reasons: string[]): ItemJudgement => ({ verdict: 'open', reasons, figures: [] });
+export const open = (...reasons: string[]): ItemJudgement => ({
+  verdict: 'open',
+  reasons,
+  figures: [],
+});
 
 /** An item marked not applicable counts only with a note saying why. */
-export function notApplicable(entry: { notApplicable: boolean; note: string }): ItemJudgement | null {
+export function notApplicable(entry: {
+  notApplicable: boolean;
+  note: string;
+}): ItemJudgement | null {
   if (!entry.notApplicable) return null;
   if (!entry.note) return open('Marked not applicable: say why in the note.');
   return { verdict: 'not-applicable', reasons: [`Not applicable: ${entry.note}`], figures: [] };
 }
 
 export const rpmText = (rpm: number) => `${Math.round(rpm)} rpm`;
-export const percentText = (share: number) => `${share >= 0 ? '+' : '−'}${Math.abs(share * 100).toFixed(1)} %`;
+export const percentText = (share: number) =>
+  `${share >= 0 ? '+' : '−'}${Math.abs(share * 100).toFixed(1)} %`;
 export const voltText = (v: number) => `${v.toFixed(2)} V`;

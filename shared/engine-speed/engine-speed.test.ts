@@ -15,8 +15,22 @@ import { SignalSourceSchema, TachSetupSchema, type SignalSource } from './signal
 
 // Standard synchronous-speed tables, n = 120 f / P (S. J. Chapman, Electric Machinery
 // Fundamentals, 5th ed., McGraw-Hill 2012, from memory).
-const SYNCHRONOUS_50_HZ = [[2, 3000], [4, 1500], [6, 1000], [8, 750], [10, 600], [12, 500]] as const;
-const SYNCHRONOUS_60_HZ = [[2, 3600], [4, 1800], [6, 1200], [8, 900], [10, 720], [12, 600]] as const;
+const SYNCHRONOUS_50_HZ = [
+  [2, 3000],
+  [4, 1500],
+  [6, 1000],
+  [8, 750],
+  [10, 600],
+  [12, 500],
+] as const;
+const SYNCHRONOUS_60_HZ = [
+  [2, 3600],
+  [4, 1800],
+  [6, 1200],
+  [8, 900],
+  [10, 720],
+  [12, 600],
+] as const;
 
 const coil12: SignalSource = { kind: 'charging-coil', poles: 12 };
 // Alternator tachometer-signal application notes (common practice): 12 poles, pulley ratio 2.5.
@@ -44,7 +58,10 @@ describe('rpm from AC frequency', () => {
 
   it('frequency and rpm are inverses for any source', () => {
     const source = fc.oneof(
-      fc.record({ kind: fc.constant('charging-coil' as const), poles: fc.integer({ min: 1, max: 24 }).map((n) => n * 2) }),
+      fc.record({
+        kind: fc.constant('charging-coil' as const),
+        poles: fc.integer({ min: 1, max: 24 }).map((n) => n * 2),
+      }),
       fc.record({
         kind: fc.constant('belt-alternator' as const),
         poles: fc.integer({ min: 1, max: 12 }).map((n) => n * 2),
@@ -92,13 +109,17 @@ describe('tachometer convention (common practice: poles on some units, pulses pe
     expect(tachDialSetting(beltedAlternator, 'pulses-per-rev')).toBeCloseTo(15, 12);
   });
 
-  it.each(['poles', 'pulses-per-rev'] as const)('a correctly set %s tachometer shows engine rpm', (convention) => {
-    for (const wave of ['half-wave', 'full-wave'] as const) {
-      const pulseHz = expectedFrequencyAtEngineRpm(1000, beltedAlternator) * (wave === 'full-wave' ? 2 : 1);
-      const dial = tachDialSetting(beltedAlternator, convention, wave);
-      expect(tachReadingRpm(pulseHz, convention, dial)).toBeCloseTo(1000, 9);
-    }
-  });
+  it.each(['poles', 'pulses-per-rev'] as const)(
+    'a correctly set %s tachometer shows engine rpm',
+    (convention) => {
+      for (const wave of ['half-wave', 'full-wave'] as const) {
+        const pulseHz =
+          expectedFrequencyAtEngineRpm(1000, beltedAlternator) * (wave === 'full-wave' ? 2 : 1);
+        const dial = tachDialSetting(beltedAlternator, convention, wave);
+        expect(tachReadingRpm(pulseHz, convention, dial)).toBeCloseTo(1000, 9);
+      }
+    },
+  );
 
   it('mixing up the labels shows half or double the true rpm', () => {
     // 12-pole coil at 3000 rpm gives 300 Hz (common practice, no single source).
@@ -127,7 +148,9 @@ describe('SignalSourceSchema', () => {
   });
 
   it('rejects zero or negative poles', () => {
-    expect(messageAt({ kind: 'charging-coil', poles: 0 }).message).toBe('The number of poles (poles) must be more than zero.');
+    expect(messageAt({ kind: 'charging-coil', poles: 0 }).message).toBe(
+      'The number of poles (poles) must be more than zero.',
+    );
     expect(messageAt({ kind: 'charging-coil', poles: -4 }).path).toBe('poles');
   });
 

@@ -47,13 +47,21 @@ export const pulsesPerEngineRev = (source: SignalSource, wave: SignalWave = 'hal
  * The number to dial into a tachometer. A "poles" dial reads rpm = pulses/s × 120 / setting,
  * so its setting is twice the pulses per revolution; a "pulses-per-rev" dial takes the count.
  */
-export function tachDialSetting(source: SignalSource, convention: TachConvention, wave: SignalWave = 'half-wave'): number {
+export function tachDialSetting(
+  source: SignalSource,
+  convention: TachConvention,
+  wave: SignalWave = 'half-wave',
+): number {
   const pulses = pulsesPerEngineRev(source, wave);
   return convention === 'poles' ? pulses * 2 : pulses;
 }
 
 /** What a tachometer shows for a pulse frequency, given how its dial is labelled and set. */
-export function tachReadingRpm(pulseHz: number, convention: TachConvention, dialSetting: number): number {
+export function tachReadingRpm(
+  pulseHz: number,
+  convention: TachConvention,
+  dialSetting: number,
+): number {
   const pulsesPerRev = convention === 'poles' ? dialSetting / 2 : dialSetting;
   return (pulseHz * SECONDS_PER_MINUTE) / pulsesPerRev;
 }

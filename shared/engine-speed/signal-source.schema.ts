@@ -5,7 +5,9 @@ const polesField = z
   .int({ error: 'The number of poles (poles) must be a whole number.' })
   .positive({ error: 'The number of poles (poles) must be more than zero.' })
   // Poles come in north/south pairs, so an odd count is always a typing slip.
-  .refine((poles) => poles % 2 === 0, { error: 'The number of poles (poles) must be even: poles come in pairs.' });
+  .refine((poles) => poles % 2 === 0, {
+    error: 'The number of poles (poles) must be even: poles come in pairs.',
+  });
 
 const pulleyRatioField = z
   .number({ error: 'Enter the pulley ratio (pulleyRatio) as a number, like 2.5.' })
@@ -20,7 +22,11 @@ export const SignalSourceSchema = z.discriminatedUnion(
   'kind',
   [
     z.object({ kind: z.literal('charging-coil'), poles: polesField }),
-    z.object({ kind: z.literal('belt-alternator'), poles: polesField, pulleyRatio: pulleyRatioField }),
+    z.object({
+      kind: z.literal('belt-alternator'),
+      poles: polesField,
+      pulleyRatio: pulleyRatioField,
+    }),
   ],
   { error: 'The signal source (kind) must be "charging-coil" or "belt-alternator".' },
 );

@@ -1,15 +1,21 @@
 import { z } from 'zod';
 
 export const ENGINE_POSITIONS = ['single', 'port', 'starboard', 'centre', 'inboard'] as const;
-export const EnginePositionSchema = z.enum(ENGINE_POSITIONS, { error: 'Choose the engine position from the list.' });
+export const EnginePositionSchema = z.enum(ENGINE_POSITIONS, {
+  error: 'Choose the engine position from the list.',
+});
 export type EnginePosition = z.infer<typeof EnginePositionSchema>;
 
 export const INSTALLATIONS = ['outboard', 'inboard', 'sterndrive'] as const;
-export const InstallationSchema = z.enum(INSTALLATIONS, { error: 'Choose outboard, inboard or sterndrive.' });
+export const InstallationSchema = z.enum(INSTALLATIONS, {
+  error: 'Choose outboard, inboard or sterndrive.',
+});
 export type Installation = z.infer<typeof InstallationSchema>;
 
 export const FuelSchema = z.enum(['petrol', 'diesel'], { error: 'Choose petrol or diesel.' });
-export const CycleSchema = z.enum(['two-stroke', 'four-stroke'], { error: 'Choose two-stroke or four-stroke.' });
+export const CycleSchema = z.enum(['two-stroke', 'four-stroke'], {
+  error: 'Choose two-stroke or four-stroke.',
+});
 
 export const TACH_SOURCES = ['charging-coil', 'belt-alternator', 'ignition', 'none'] as const;
 /** Where the tachometer signal comes from; decides how a measured frequency becomes RPM. */
@@ -43,8 +49,16 @@ const EngineFieldsSchema = z.object({
   vesselId: z.uuid({ error: 'Choose the vessel.' }),
   position: EnginePositionSchema,
   installation: InstallationSchema,
-  maker: z.string({ error: 'Enter the maker.' }).trim().min(1, { error: 'Enter the maker.' }).max(60, { error: 'Maker can have at most 60 characters.' }),
-  model: z.string({ error: 'Enter the model.' }).trim().min(1, { error: 'Enter the model.' }).max(60, { error: 'Model can have at most 60 characters.' }),
+  maker: z
+    .string({ error: 'Enter the maker.' })
+    .trim()
+    .min(1, { error: 'Enter the maker.' })
+    .max(60, { error: 'Maker can have at most 60 characters.' }),
+  model: z
+    .string({ error: 'Enter the model.' })
+    .trim()
+    .min(1, { error: 'Enter the model.' })
+    .max(60, { error: 'Model can have at most 60 characters.' }),
   serialNumber: z
     .string({ error: 'Enter the serial number.' })
     .trim()
@@ -82,32 +96,63 @@ const EngineFieldsSchema = z.object({
     .max(100000, { error: 'Hour meter must be at most 100,000 h.' })
     .nullable()
     .default(null),
-  commissionedOn: z.iso.date({ error: 'Commissioning date must be a date like 2026-05-14.' }).nullable().default(null),
+  commissionedOn: z.iso
+    .date({ error: 'Commissioning date must be a date like 2026-05-14.' })
+    .nullable()
+    .default(null),
 });
 
 /** The fields the cross-field rules read; the rules run whenever these are fine, so a form shows every problem at once. */
-const CrossFieldsSchema = EngineFieldsSchema.pick({ ratedRpmMin: true, ratedRpmMax: true, poles: true, tachSource: true, pulleyRatio: true });
+const CrossFieldsSchema = EngineFieldsSchema.pick({
+  ratedRpmMin: true,
+  ratedRpmMax: true,
+  poles: true,
+  tachSource: true,
+  pulleyRatio: true,
+});
 
-export const EngineInputSchema = EngineFieldsSchema.superRefine((e, ctx) => {
-  if (e.ratedRpmMin >= e.ratedRpmMax) {
-    ctx.addIssue({ code: 'custom', path: ['ratedRpmMax'], message: 'Rated RPM high end must be above the low end.' });
-  } else if (e.ratedRpmMax - e.ratedRpmMin > MAX_RATED_RANGE_WIDTH_RPM) {
-    ctx.addIssue({
-      code: 'custom',
-      path: ['ratedRpmMax'],
-      message: `Rated RPM range is ${e.ratedRpmMax - e.ratedRpmMin} rpm wide; makers' full-throttle ranges are at most ${MAX_RATED_RANGE_WIDTH_RPM.toLocaleString('en-GB')} rpm wide. Check both ends.`,
-    });
-  }
-  if (e.poles !== null && e.poles % 2 !== 0) {
-    ctx.addIssue({ code: 'custom', path: ['poles'], message: 'Poles come in pairs: enter an even number.' });
-  }
-  if (e.tachSource === 'belt-alternator' && e.pulleyRatio === null) {
-    ctx.addIssue({ code: 'custom', path: ['pulleyRatio'], message: 'A belt-driven alternator needs its pulley ratio.' });
-  }
-  if ((e.tachSource === 'charging-coil' || e.tachSource === 'belt-alternator') && e.poles === null) {
-    ctx.addIssue({ code: 'custom', path: ['poles'], message: 'Enter the number of poles of the coil or alternator.' });
-  }
-}, { when: (payload) => CrossFieldsSchema.safeParse(payload.value).success });
+export const EngineInputSchema = EngineFieldsSchema.superRefine(
+  (e, ctx) => {
+    if (e.ratedRpmMin >= e.ratedRpmMax) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ratedRpmMax'],
+        message: 'Rated RPM high end must be above the low end.',
+      });
+    } else if (e.ratedRpmMax - e.ratedRpmMin > MAX_RATED_RANGE_WIDTH_RPM) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['ratedRpmMax'],
+        message: `Rated RPM range is ${e.ratedRpmMax - e.ratedRpmMin} rpm wide; makers' full-throttle ranges are at most ${MAX_RATED_RANGE_WIDTH_RPM.toLocaleString('en-GB')} rpm wide. Check both ends.`,
+      });
+    }
+    if (e.poles !== null && e.poles % 2 !== 0) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['poles'],
+        message: 'Poles come in pairs: enter an even number.',
+      });
+    }
+    if (e.tachSource === 'belt-alternator' && e.pulleyRatio === null) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['pulleyRatio'],
+        message: 'A belt-driven alternator needs its pulley ratio.',
+      });
+    }
+    if (
+      (e.tachSource === 'charging-coil' || e.tachSource === 'belt-alternator') &&
+      e.poles === null
+    ) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['poles'],
+        message: 'Enter the number of poles of the coil or alternator.',
+      });
+    }
+  },
+  { when: (payload) => CrossFieldsSchema.safeParse(payload.value).success },
+);
 export type EngineInput = z.infer<typeof EngineInputSchema>;
 /** What a form holds before the defaults are filled in. */
 export type EngineFormInput = z.input<typeof EngineInputSchema>;

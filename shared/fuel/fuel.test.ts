@@ -33,7 +33,11 @@ describe('BSFC estimate ("Calculating Fuel Consumption", Boating magazine; const
         fc.double({ min: 0.7, max: 0.9, noNaN: true }),
         (bsfc, hp, density) => {
           const gph = usGallonsPerHourFromBsfc(bsfc, hp, fuelPoundsPerUsGallon(density));
-          const lph = litresPerHourFromBsfc(bsfcToGramsPerKWh(bsfc), horsepowerToKilowatts(hp), density);
+          const lph = litresPerHourFromBsfc(
+            bsfcToGramsPerKWh(bsfc),
+            horsepowerToKilowatts(hp),
+            density,
+          );
           expect(lph / usGallonsToLitres(gph)).toBeCloseTo(1, 9);
         },
       ),
@@ -67,7 +71,12 @@ describe('flow per hour and per nautical mile', () => {
 
 describe('range on a tank', () => {
   it('keeps the reserve: 200 L, a third in reserve, 20 L/h at 10 kn', () => {
-    const range = tankRange({ tankLitres: 200, reserveShare: 1 / 3, litresPerHour: 20, speedKn: 10 });
+    const range = tankRange({
+      tankLitres: 200,
+      reserveShare: 1 / 3,
+      litresPerHour: 20,
+      speedKn: 10,
+    });
     expect(range.usableLitres).toBeCloseTo(133.333, 3);
     expect(range.hours).toBeCloseTo(6.6667, 4);
     expect(range.nauticalMiles).toBeCloseTo(66.667, 3);
@@ -82,7 +91,12 @@ describe('range on a tank', () => {
   });
 
   it('rejects a reserve of the whole tank, naming the field', () => {
-    const result = TankRangeInputSchema.safeParse({ tankLitres: 100, reserveShare: 1, litresPerHour: 10, speedKn: 5 });
+    const result = TankRangeInputSchema.safeParse({
+      tankLitres: 100,
+      reserveShare: 1,
+      litresPerHour: 10,
+      speedKn: 5,
+    });
     expect(result.error?.issues[0]).toMatchObject({
       path: ['reserveShare'],
       message: 'The reserve (reserveShare) must be below 1: some fuel must be usable.',
@@ -90,7 +104,12 @@ describe('range on a tank', () => {
   });
 
   it('rejects negative flow, naming the field', () => {
-    const result = TankRangeInputSchema.safeParse({ tankLitres: 100, reserveShare: 0.2, litresPerHour: -1, speedKn: 5 });
+    const result = TankRangeInputSchema.safeParse({
+      tankLitres: 100,
+      reserveShare: 0.2,
+      litresPerHour: -1,
+      speedKn: 5,
+    });
     expect(result.error?.issues[0].path).toEqual(['litresPerHour']);
   });
 });

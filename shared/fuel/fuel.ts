@@ -12,9 +12,11 @@ export const FUEL_DENSITY_KG_PER_L = {
 } as const;
 
 export const FuelFlowReadingSchema = z.object({
-  litresPerHour: z.number({ error: 'Enter the fuel flow in litres per hour (litresPerHour).' }).nonnegative({
-    error: 'The fuel flow (litresPerHour) cannot be negative.',
-  }),
+  litresPerHour: z
+    .number({ error: 'Enter the fuel flow in litres per hour (litresPerHour).' })
+    .nonnegative({
+      error: 'The fuel flow (litresPerHour) cannot be negative.',
+    }),
   speedKn: z.number({ error: 'Enter the speed in knots (speedKn).' }).nonnegative({
     error: 'The speed (speedKn) cannot be negative.',
   }),
@@ -56,7 +58,11 @@ export const TankRangeInputSchema = FuelFlowReadingSchema.extend({
 export type TankRangeInput = z.infer<typeof TankRangeInputSchema>;
 
 /** Range on a tank, keeping a reserve share untouched. */
-export function tankRange(input: TankRangeInput): { usableLitres: number; hours: number | null; nauticalMiles: number | null } {
+export function tankRange(input: TankRangeInput): {
+  usableLitres: number;
+  hours: number | null;
+  nauticalMiles: number | null;
+} {
   const usableLitres = input.tankLitres * (1 - input.reserveShare);
   if (input.litresPerHour <= 0) return { usableLitres, hours: null, nauticalMiles: null };
   const hours = usableLitres / input.litresPerHour;
@@ -64,18 +70,25 @@ export function tankRange(input: TankRangeInput): { usableLitres: number; hours:
 }
 
 /** Fuel weight per US gallon from density: kg/L × L/gal ÷ kg/lb. */
-export const fuelPoundsPerUsGallon = (densityKgPerL: number): number => (densityKgPerL * US_GALLON_L) / POUND_KG;
+export const fuelPoundsPerUsGallon = (densityKgPerL: number): number =>
+  (densityKgPerL * US_GALLON_L) / POUND_KG;
 
 /**
  * gal/h = BSFC (lb/hp·h) × hp / fuel weight (lb/gal)
  * ("Calculating Fuel Consumption", Boating magazine; constants are common practice).
  */
-export const usGallonsPerHourFromBsfc = (bsfcLbPerHpH: number, horsepower: number, fuelLbPerUsGallon: number): number =>
-  (bsfcLbPerHpH * horsepower) / fuelLbPerUsGallon;
+export const usGallonsPerHourFromBsfc = (
+  bsfcLbPerHpH: number,
+  horsepower: number,
+  fuelLbPerUsGallon: number,
+): number => (bsfcLbPerHpH * horsepower) / fuelLbPerUsGallon;
 
 /** The metric form: L/h = BSFC (g/kWh) × kW / (density kg/L × 1000 g/kg). */
-export const litresPerHourFromBsfc = (bsfcGPerKWh: number, kilowatts: number, densityKgPerL: number): number =>
-  (bsfcGPerKWh * kilowatts) / (densityKgPerL * 1000);
+export const litresPerHourFromBsfc = (
+  bsfcGPerKWh: number,
+  kilowatts: number,
+  densityKgPerL: number,
+): number => (bsfcGPerKWh * kilowatts) / (densityKgPerL * 1000);
 
 /** lb/hp·h → g/kWh through the pound and horsepower definitions. */
 export const bsfcToGramsPerKWh = (bsfcLbPerHpH: number): number =>

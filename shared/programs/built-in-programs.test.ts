@@ -10,19 +10,29 @@ const totalHours = (key: keyof typeof BUILT_IN_PROGRAMS) =>
 describe('built-in programs', () => {
   it('has stable keys', () => {
     expect(Object.keys(BUILT_IN_PROGRAMS)).toEqual([...BUILT_IN_PROGRAM_KEYS]);
-    expect(BUILT_IN_PROGRAM_KEYS).toEqual(['four-stroke-outboard', 'two-stroke-outboard', 'small-inboard-diesel']);
+    expect(BUILT_IN_PROGRAM_KEYS).toEqual([
+      'four-stroke-outboard',
+      'two-stroke-outboard',
+      'small-inboard-diesel',
+    ]);
   });
 
-  it.each(BUILT_IN_PROGRAM_KEYS)('%s is valid, says common practice and puts the manual first', (key) => {
-    const program = BUILT_IN_PROGRAMS[key];
-    expect(ProgramSchema.parse(program)).toEqual(program);
-    expect(program.source).toMatch(/^Common practice/);
-    expect(program.source).toContain('The maker\u2019s manual for your engine comes first');
-  });
+  it.each(BUILT_IN_PROGRAM_KEYS)(
+    '%s is valid, says common practice and puts the manual first',
+    (key) => {
+      const program = BUILT_IN_PROGRAMS[key];
+      expect(ProgramSchema.parse(program)).toEqual(program);
+      expect(program.source).toMatch(/^Common practice/);
+      expect(program.source).toContain('The maker\u2019s manual for your engine comes first');
+    },
+  );
 
-  it.each(BUILT_IN_PROGRAM_KEYS)('%s: first service 20 h or 1 month (common practice; BoatUS "Long Life – Outboard Maintenance")', (key) => {
-    expect(BUILT_IN_PROGRAMS[key].firstService).toEqual({ hours: 20, months: 1 });
-  });
+  it.each(BUILT_IN_PROGRAM_KEYS)(
+    '%s: first service 20 h or 1 month (common practice; BoatUS "Long Life – Outboard Maintenance")',
+    (key) => {
+      expect(BUILT_IN_PROGRAMS[key].firstService).toEqual({ hours: 20, months: 1 });
+    },
+  );
 
   it.each(BUILT_IN_PROGRAM_KEYS)('%s: the first phase is the workshop at idle', (key) => {
     const [first, ...rest] = BUILT_IN_PROGRAMS[key].phases;
@@ -32,7 +42,9 @@ describe('built-in programs', () => {
   });
 
   it.each(BUILT_IN_PROGRAM_KEYS)('%s: bands fit any engine (shares of rated rpm)', (key) => {
-    expect(checkProgramForEngine(BUILT_IN_PROGRAMS[key], { ratedRpmMin: 2800, ratedRpmMax: 3000 })).toEqual({ ok: true });
+    expect(
+      checkProgramForEngine(BUILT_IN_PROGRAMS[key], { ratedRpmMin: 2800, ratedRpmMax: 3000 }),
+    ).toEqual({ ok: true });
   });
 
   it('four-stroke outboard: about 10 h, below half then below three-quarter (common practice)', () => {
@@ -63,7 +75,9 @@ describe('built-in programs', () => {
       expect(loaded.band.shareMin ** 3).toBeCloseTo(0.5, 12);
       expect(loaded.band.shareMax ** 3).toBeCloseTo(0.75, 12);
     }
-    expect(program.phases.map((p) => p.instructions).join(' ')).toContain('glazes the cylinder walls');
+    expect(program.phases.map((p) => p.instructions).join(' ')).toContain(
+      'glazes the cylinder walls',
+    );
   });
 });
 

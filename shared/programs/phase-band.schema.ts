@@ -7,14 +7,20 @@ export const RPM_UPPER_BOUND = 20_000;
 const rpmField = (label: string, key: string) =>
   z.number({ error: `Enter the ${label} (${key}) as a number of rpm.` }).check(
     z.minimum(0, { error: `The ${label} (${key}) cannot be negative.` }),
-    z.maximum(RPM_UPPER_BOUND, { error: `The ${label} (${key}) must be at most ${RPM_UPPER_BOUND} rpm.` }),
+    z.maximum(RPM_UPPER_BOUND, {
+      error: `The ${label} (${key}) must be at most ${RPM_UPPER_BOUND} rpm.`,
+    }),
   );
 
 const shareField = (label: string, key: string) =>
-  z.number({ error: `Enter the ${label} (${key}) as a share of rated full-throttle rpm, from 0 to 1.` }).check(
-    z.minimum(0, { error: `The ${label} (${key}) must be a share from 0 to 1; it is below 0.` }),
-    z.maximum(1, { error: `The ${label} (${key}) must be a share from 0 to 1; it is above 1.` }),
-  );
+  z
+    .number({
+      error: `Enter the ${label} (${key}) as a share of rated full-throttle rpm, from 0 to 1.`,
+    })
+    .check(
+      z.minimum(0, { error: `The ${label} (${key}) must be a share from 0 to 1; it is below 0.` }),
+      z.maximum(1, { error: `The ${label} (${key}) must be a share from 0 to 1; it is above 1.` }),
+    );
 
 /*
  * "Overlapping or inverted bands" are rejected. We read that as a band whose own limits
@@ -47,9 +53,14 @@ export const ShareOfRatedBandSchema = z
     }),
   );
 
-export const PhaseBandSchema = z.discriminatedUnion('kind', [AbsoluteBandSchema, ShareOfRatedBandSchema], {
-  error: 'The band kind (kind) must be "absolute" (rpm) or "share-of-rated" (share of rated full-throttle rpm).',
-});
+export const PhaseBandSchema = z.discriminatedUnion(
+  'kind',
+  [AbsoluteBandSchema, ShareOfRatedBandSchema],
+  {
+    error:
+      'The band kind (kind) must be "absolute" (rpm) or "share-of-rated" (share of rated full-throttle rpm).',
+  },
+);
 export type PhaseBand = z.infer<typeof PhaseBandSchema>;
 
 /** A band in engine rpm, after a share band is resolved against an engine's rating. */

@@ -47,7 +47,12 @@ export const FOUR_STROKE_OUTBOARD = ProgramSchema.parse({
       throttleCeiling: 'three-quarter',
       band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.75 }, // ¾ throttle ≈ ¾ rated rpm (common practice)
       // "only brief full-throttle bursts" (common practice); 60 s and 5 min an hour are our reading
-      rules: { changeSpeedEveryMinutes: 15, fullThrottleMaxSeconds: 60, fullThrottleMaxMinutesPerHour: 5, idleMaxMinutes: 10 },
+      rules: {
+        changeSpeedEveryMinutes: 15,
+        fullThrottleMaxSeconds: 60,
+        fullThrottleMaxMinutesPerHour: 5,
+        idleMaxMinutes: 10,
+      },
       instructions:
         'Run mostly at three-quarter throttle or less, still changing speed often. Once the boat is on the plane you may open up to full throttle for a minute at most, a few times an hour, then ease back.',
     },

@@ -38,7 +38,11 @@ export const INBOARD_DIESEL = ProgramSchema.parse({
       requiredMinutes: 1200, // 20 h, the floor of 20–50 h (common practice; TM 5-3805-254-14&P)
       throttleCeiling: 'varied',
       // 50–75 % load (common practice; TM 5-3805-254-14&P), as rpm by the propeller law above
-      band: { kind: 'share-of-rated', shareMin: loadToRpmShare(0.5), shareMax: loadToRpmShare(0.75) },
+      band: {
+        kind: 'share-of-rated',
+        shareMin: loadToRpmShare(0.5),
+        shareMax: loadToRpmShare(0.75),
+      },
       // full power ≤ about 5 min at a time (common practice); "avoid long idling": 10 min is our reading
       rules: { fullThrottleMaxSeconds: 300, idleMaxMinutes: 10 },
       instructions:

@@ -48,7 +48,12 @@ export const TWO_STROKE_OUTBOARD = ProgramSchema.parse({
       throttleCeiling: 'three-quarter',
       band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.75 }, // ¾ throttle ≈ ¾ rated rpm (common practice)
       // "only brief full-throttle bursts" (common practice); 60 s and 5 min an hour are our reading
-      rules: { changeSpeedEveryMinutes: 15, fullThrottleMaxSeconds: 60, fullThrottleMaxMinutesPerHour: 5, idleMaxMinutes: 10 },
+      rules: {
+        changeSpeedEveryMinutes: 15,
+        fullThrottleMaxSeconds: 60,
+        fullThrottleMaxMinutesPerHour: 5,
+        idleMaxMinutes: 10,
+      },
       instructions:
         'Run mostly at three-quarter throttle or less, changing speed often. Short bursts of full throttle, a minute at most, are fine once on the plane. Go back to the normal oil mix only when the manual says so.',
     },

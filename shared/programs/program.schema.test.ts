@@ -39,7 +39,11 @@ describe('ProgramSchema', () => {
   });
 
   it('rejects an inverted band, naming phases.N.band.rpmMax', () => {
-    const phases = [phase(), phase({ id: 'p2' }), phase({ id: 'p3', band: { kind: 'absolute', rpmMin: 3000, rpmMax: 2000 } })];
+    const phases = [
+      phase(),
+      phase({ id: 'p2' }),
+      phase({ id: 'p3', band: { kind: 'absolute', rpmMin: 3000, rpmMax: 2000 } }),
+    ];
     expect(firstIssue(program({ phases }))).toEqual({
       field: 'phases.2.band.rpmMax',
       message: 'The highest rpm of the band (rpmMax) must be above its lowest rpm (rpmMin).',
@@ -55,7 +59,8 @@ describe('ProgramSchema', () => {
     const above = [phase({ band: { kind: 'share-of-rated', shareMin: 0.5, shareMax: 1.2 } })];
     expect(firstIssue(program({ phases: above }))).toEqual({
       field: 'phases.0.band.shareMax',
-      message: 'The highest share of the band (shareMax) must be a share from 0 to 1; it is above 1.',
+      message:
+        'The highest share of the band (shareMax) must be a share from 0 to 1; it is above 1.',
     });
     const inverted = [phase({ band: { kind: 'share-of-rated', shareMin: 0.75, shareMax: 0.5 } })];
     expect(firstIssue(program({ phases: inverted })).field).toBe('phases.0.band.shareMax');
@@ -76,36 +81,51 @@ describe('ProgramSchema', () => {
       field: 'phases.0.requiredMinutes',
       message: 'The required run time in band (requiredMinutes) must be more than zero minutes.',
     });
-    expect(firstIssue(program({ phases: [phase({ requiredMinutes: -5 })] })).field).toBe('phases.0.requiredMinutes');
+    expect(firstIssue(program({ phases: [phase({ requiredMinutes: -5 })] })).field).toBe(
+      'phases.0.requiredMinutes',
+    );
     const rules = { fullThrottleMaxSeconds: 0 };
-    expect(firstIssue(program({ phases: [phase({ rules })] })).field).toBe('phases.0.rules.fullThrottleMaxSeconds');
+    expect(firstIssue(program({ phases: [phase({ rules })] })).field).toBe(
+      'phases.0.rules.fullThrottleMaxSeconds',
+    );
   });
 
   it('rejects an unknown band unit (kind)', () => {
     const phases = [phase({ band: { kind: 'percent', min: 10, max: 50 } })];
     expect(firstIssue(program({ phases }))).toEqual({
       field: 'phases.0.band.kind',
-      message: 'The band kind (kind) must be "absolute" (rpm) or "share-of-rated" (share of rated full-throttle rpm).',
+      message:
+        'The band kind (kind) must be "absolute" (rpm) or "share-of-rated" (share of rated full-throttle rpm).',
     });
   });
 
   it('rejects an unknown throttle ceiling and performer', () => {
-    expect(firstIssue(program({ phases: [phase({ throttleCeiling: 'wide-open' })] })).field).toBe('phases.0.throttleCeiling');
-    expect(firstIssue(program({ phases: [phase({ performedBy: 'dealer' })] })).field).toBe('phases.0.performedBy');
+    expect(firstIssue(program({ phases: [phase({ throttleCeiling: 'wide-open' })] })).field).toBe(
+      'phases.0.throttleCeiling',
+    );
+    expect(firstIssue(program({ phases: [phase({ performedBy: 'dealer' })] })).field).toBe(
+      'phases.0.performedBy',
+    );
   });
 
   it('rejects duplicate phase ids, naming the later one', () => {
     const phases = [phase(), phase({ id: 'p2' }), phase({ id: 'p1' })];
     expect(firstIssue(program({ phases }))).toEqual({
       field: 'phases.2.id',
-      message: 'The phase id (id) "p1" is already used by an earlier phase; each phase needs its own.',
+      message:
+        'The phase id (id) "p1" is already used by an earlier phase; each phase needs its own.',
     });
   });
 
   it('needs 1 to 30 phases', () => {
-    expect(firstIssue(program({ phases: [] }))).toEqual({ field: 'phases', message: 'A program needs at least one phase (phases).' });
+    expect(firstIssue(program({ phases: [] }))).toEqual({
+      field: 'phases',
+      message: 'A program needs at least one phase (phases).',
+    });
     const many = Array.from({ length: 31 }, (_, i) => phase({ id: `p${i}` }));
-    expect(firstIssue(program({ phases: many })).message).toBe('A program can have at most 30 phases (phases).');
+    expect(firstIssue(program({ phases: many })).message).toBe(
+      'A program can have at most 30 phases (phases).',
+    );
   });
 
   it('needs a first-service interval in hours or months', () => {
@@ -117,11 +137,15 @@ describe('ProgramSchema', () => {
 
   it('rejects more than 60 minutes of full throttle per hour', () => {
     const rules = { fullThrottleMaxMinutesPerHour: 61 };
-    expect(firstIssue(program({ phases: [phase({ rules })] })).field).toBe('phases.0.rules.fullThrottleMaxMinutesPerHour');
+    expect(firstIssue(program({ phases: [phase({ rules })] })).field).toBe(
+      'phases.0.rules.fullThrottleMaxMinutesPerHour',
+    );
   });
 
   it('rejects an unknown engine kind', () => {
-    expect(firstIssue(program({ suits: { engineKind: 'jet-ski' } })).field).toBe('suits.engineKind');
+    expect(firstIssue(program({ suits: { engineKind: 'jet-ski' } })).field).toBe(
+      'suits.engineKind',
+    );
   });
 
   it('rejects blank names and instructions with a sentence', () => {
@@ -134,10 +158,13 @@ describe('ProgramSchema', () => {
 
 describe('PhaseSchema and PhaseBandSchema alone', () => {
   it('name the field relative to themselves', () => {
-    const result = PhaseSchema.safeParse(phase({ band: { kind: 'absolute', rpmMin: 5, rpmMax: 30_000 } }));
-    expect(result.error?.issues[0].path).toEqual(['band', 'rpmMax']);
-    expect(PhaseBandSchema.safeParse({ kind: 'absolute', rpmMin: -1, rpmMax: 100 }).error?.issues[0].message).toBe(
-      'The lowest rpm of the band (rpmMin) cannot be negative.',
+    const result = PhaseSchema.safeParse(
+      phase({ band: { kind: 'absolute', rpmMin: 5, rpmMax: 30_000 } }),
     );
+    expect(result.error?.issues[0].path).toEqual(['band', 'rpmMax']);
+    expect(
+      PhaseBandSchema.safeParse({ kind: 'absolute', rpmMin: -1, rpmMax: 100 }).error?.issues[0]
+        .message,
+    ).toBe('The lowest rpm of the band (rpmMin) cannot be negative.');
   });
 });

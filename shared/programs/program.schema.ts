@@ -11,11 +11,26 @@ const positive = (label: string, key: string, unit: string) =>
     .positive({ error: `The ${label} (${key}) must be more than zero ${unit}.` });
 
 export const PhaseRulesSchema = z.object({
-  changeSpeedEveryMinutes: positive('longest time at one speed', 'changeSpeedEveryMinutes', 'minutes').optional(),
+  changeSpeedEveryMinutes: positive(
+    'longest time at one speed',
+    'changeSpeedEveryMinutes',
+    'minutes',
+  ).optional(),
   /** Per continuous stretch at full throttle. */
-  fullThrottleMaxSeconds: positive('longest full-throttle stretch', 'fullThrottleMaxSeconds', 'seconds').optional(),
-  fullThrottleMaxMinutesPerHour: positive('most full throttle in any hour', 'fullThrottleMaxMinutesPerHour', 'minutes')
-    .max(60, { error: 'The most full throttle in any hour (fullThrottleMaxMinutesPerHour) cannot exceed 60 minutes.' })
+  fullThrottleMaxSeconds: positive(
+    'longest full-throttle stretch',
+    'fullThrottleMaxSeconds',
+    'seconds',
+  ).optional(),
+  fullThrottleMaxMinutesPerHour: positive(
+    'most full throttle in any hour',
+    'fullThrottleMaxMinutesPerHour',
+    'minutes',
+  )
+    .max(60, {
+      error:
+        'The most full throttle in any hour (fullThrottleMaxMinutesPerHour) cannot exceed 60 minutes.',
+    })
     .optional(),
   idleMaxMinutes: positive('longest idling stretch', 'idleMaxMinutes', 'minutes').optional(),
 });
@@ -47,7 +62,10 @@ export type Phase = z.infer<typeof PhaseSchema>;
 
 export const EngineKindSchema = z.enum(
   ['outboard-4-stroke', 'outboard-2-stroke', 'inboard-diesel', 'sterndrive-petrol', 'any'],
-  { error: 'The engine kind (engineKind) must be one of outboard-4-stroke, outboard-2-stroke, inboard-diesel, sterndrive-petrol or any.' },
+  {
+    error:
+      'The engine kind (engineKind) must be one of outboard-4-stroke, outboard-2-stroke, inboard-diesel, sterndrive-petrol or any.',
+  },
 );
 export type EngineKind = z.infer<typeof EngineKindSchema>;
 
@@ -56,14 +74,22 @@ export const ProgramSchema = z
     name: text('program name', 'name', 120),
     suits: z.object({
       engineKind: EngineKindSchema,
-      label: z.string().trim().max(120, { error: 'The engine label (label) can have at most 120 characters.' }).default(''),
+      label: z
+        .string()
+        .trim()
+        .max(120, { error: 'The engine label (label) can have at most 120 characters.' })
+        .default(''),
     }),
     phases: z
       .array(PhaseSchema, { error: 'The phases (phases) must be a list.' })
       .min(1, { error: 'A program needs at least one phase (phases).' })
       .max(MAX_PHASES, { error: `A program can have at most ${MAX_PHASES} phases (phases).` }),
     firstService: ServiceIntervalSchema,
-    notes: z.string().trim().max(4000, { error: 'The notes (notes) can have at most 4000 characters.' }).default(''),
+    notes: z
+      .string()
+      .trim()
+      .max(4000, { error: 'The notes (notes) can have at most 4000 characters.' })
+      .default(''),
     source: text('source note', 'source', 500),
   })
   .check((ctx) => {

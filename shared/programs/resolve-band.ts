@@ -7,14 +7,23 @@ export const EngineRatingSchema = z
   .object({
     ratedRpmMin: z
       .number({ error: 'Enter the lowest rated full-throttle rpm (ratedRpmMin).' })
-      .check(z.positive({ error: 'The lowest rated full-throttle rpm (ratedRpmMin) must be more than zero.' })),
+      .check(
+        z.positive({
+          error: 'The lowest rated full-throttle rpm (ratedRpmMin) must be more than zero.',
+        }),
+      ),
     ratedRpmMax: z
       .number({ error: 'Enter the highest rated full-throttle rpm (ratedRpmMax).' })
-      .check(z.positive({ error: 'The highest rated full-throttle rpm (ratedRpmMax) must be more than zero.' })),
+      .check(
+        z.positive({
+          error: 'The highest rated full-throttle rpm (ratedRpmMax) must be more than zero.',
+        }),
+      ),
   })
   .check(
     z.refine((r) => r.ratedRpmMin < r.ratedRpmMax, {
-      error: 'The highest rated full-throttle rpm (ratedRpmMax) must be above the lowest (ratedRpmMin).',
+      error:
+        'The highest rated full-throttle rpm (ratedRpmMax) must be above the lowest (ratedRpmMin).',
       path: ['ratedRpmMax'],
     }),
   );
@@ -28,7 +37,10 @@ export type EngineRating = z.infer<typeof EngineRatingSchema>;
 export function resolvePhaseBand(phase: Pick<Phase, 'band'>, engine: EngineRating): RpmBand {
   const { band } = phase;
   if (band.kind === 'absolute') return { rpmMin: band.rpmMin, rpmMax: band.rpmMax };
-  return { rpmMin: Math.round(band.shareMin * engine.ratedRpmMax), rpmMax: Math.round(band.shareMax * engine.ratedRpmMax) };
+  return {
+    rpmMin: Math.round(band.shareMin * engine.ratedRpmMax),
+    rpmMax: Math.round(band.shareMax * engine.ratedRpmMax),
+  };
 }
 
 /** A phase ready for accounting: the band in rpm and the required time in milliseconds. */
@@ -39,10 +51,17 @@ export interface ResolvedPhase extends Omit<Phase, 'band' | 'requiredMinutes'> {
 
 const MS_PER_MINUTE = 60_000;
 
-export const resolveProgramPhases = (program: Pick<Program, 'phases'>, engine: EngineRating): ResolvedPhase[] =>
+export const resolveProgramPhases = (
+  program: Pick<Program, 'phases'>,
+  engine: EngineRating,
+): ResolvedPhase[] =>
   program.phases.map((phase) => {
     const { band, requiredMinutes, ...rest } = phase;
-    return { ...rest, band: resolvePhaseBand({ band }, engine), requiredMs: requiredMinutes * MS_PER_MINUTE };
+    return {
+      ...rest,
+      band: resolvePhaseBand({ band }, engine),
+      requiredMs: requiredMinutes * MS_PER_MINUTE,
+    };
   });
 
 export interface ProgramFieldIssue {

@@ -16,9 +16,11 @@ export const RPM_PER_INCH_OF_PITCH: Record<Propulsion, { low: number; high: numb
 
 export const FullThrottleCheckSchema = z
   .object({
-    fullThrottleRpm: z.number({ error: 'Enter the full-throttle rpm (fullThrottleRpm).' }).positive({
-      error: 'The full-throttle rpm (fullThrottleRpm) must be more than zero.',
-    }),
+    fullThrottleRpm: z
+      .number({ error: 'Enter the full-throttle rpm (fullThrottleRpm).' })
+      .positive({
+        error: 'The full-throttle rpm (fullThrottleRpm) must be more than zero.',
+      }),
     ratedRpmMin: z.number({ error: 'Enter the lowest rated rpm (ratedRpmMin).' }).positive({
       error: 'The lowest rated rpm (ratedRpmMin) must be more than zero.',
     }),
@@ -54,12 +56,20 @@ export interface PitchAdvice {
 const round1 = (n: number) => Math.round(n * 10) / 10;
 
 /** new pitch ≈ old pitch × measured rpm / target rpm (common practice). */
-export const proportionalPitch = (pitchIn: number, measuredRpm: number, targetRpm: number): number =>
-  (pitchIn * measuredRpm) / targetRpm;
+export const proportionalPitch = (
+  pitchIn: number,
+  measuredRpm: number,
+  targetRpm: number,
+): number => (pitchIn * measuredRpm) / targetRpm;
 
-function adviceWords(verdict: RatedRangeVerdict, change: PitchAdvice['pitchChangeIn'], check: FullThrottleCheck): string {
+function adviceWords(
+  verdict: RatedRangeVerdict,
+  change: PitchAdvice['pitchChangeIn'],
+  check: FullThrottleCheck,
+): string {
   const range = `${check.ratedRpmMin}–${check.ratedRpmMax} rpm`;
-  if (verdict === 'in-range') return `Full-throttle rpm is inside the rated range (${range}); keep this propeller.`;
+  if (verdict === 'in-range')
+    return `Full-throttle rpm is inside the rated range (${range}); keep this propeller.`;
   const least = round1(Math.abs(change.least));
   const most = round1(Math.abs(change.most));
   const inches = least === most ? `about ${least} in` : `about ${least}–${most} in`;
@@ -72,7 +82,11 @@ function adviceWords(verdict: RatedRangeVerdict, change: PitchAdvice['pitchChang
 export function adviseOnPitch(check: FullThrottleCheck): PitchAdvice {
   const { fullThrottleRpm, ratedRpmMin, ratedRpmMax, pitchIn, propulsion } = check;
   const verdict: RatedRangeVerdict =
-    fullThrottleRpm < ratedRpmMin ? 'below-range' : fullThrottleRpm > ratedRpmMax ? 'above-range' : 'in-range';
+    fullThrottleRpm < ratedRpmMin
+      ? 'below-range'
+      : fullThrottleRpm > ratedRpmMax
+        ? 'above-range'
+        : 'in-range';
   const targetRpm = (ratedRpmMin + ratedRpmMax) / 2;
   const rpmFromTarget = fullThrottleRpm - targetRpm;
   const perInch = RPM_PER_INCH_OF_PITCH[propulsion];

@@ -20,24 +20,38 @@ describe('pitch speed', () => {
   });
 
   it('5500 rpm, 2:1, 21 in → 47.52 kn; slip 15.8 % at 40 kn (computed from the formula)', () => {
-    const check = checkPropellerSpeed({ engineRpm: 5500, gearRatio: 2, pitchIn: 21, measuredKn: 40 });
+    const check = checkPropellerSpeed({
+      engineRpm: 5500,
+      gearRatio: 2,
+      pitchIn: 21,
+      measuredKn: 40,
+    });
     expect(check.shaftRpm).toBe(2750);
     expect(check.pitchSpeedKn).toBeCloseTo(47.52, 2);
     expect(check.slip).toBeCloseTo(0.158, 3);
   });
 
   it('3000 rpm, 2:1, 19 in → 23.45 kn; slip 6.2 % at 22 kn (computed from the formula)', () => {
-    const check = checkPropellerSpeed({ engineRpm: 3000, gearRatio: 2, pitchIn: 19, measuredKn: 22 });
+    const check = checkPropellerSpeed({
+      engineRpm: 3000,
+      gearRatio: 2,
+      pitchIn: 19,
+      measuredKn: 22,
+    });
     expect(check.pitchSpeedKn).toBeCloseTo(23.45, 2);
     expect(check.slip).toBeCloseTo(0.062, 3);
   });
 
   it('mph and knots agree through the unit definitions', () => {
     fc.assert(
-      fc.property(fc.double({ min: 100, max: 6000, noNaN: true }), fc.double({ min: 5, max: 30, noNaN: true }), (rpm, pitch) => {
-        const check = checkPropellerSpeed({ engineRpm: rpm, gearRatio: 1, pitchIn: pitch });
-        expect(check.pitchSpeedMph / check.pitchSpeedKn).toBeCloseTo(1852 / 1609.344, 9); // nautical mile / statute mile
-      }),
+      fc.property(
+        fc.double({ min: 100, max: 6000, noNaN: true }),
+        fc.double({ min: 5, max: 30, noNaN: true }),
+        (rpm, pitch) => {
+          const check = checkPropellerSpeed({ engineRpm: rpm, gearRatio: 1, pitchIn: pitch });
+          expect(check.pitchSpeedMph / check.pitchSpeedKn).toBeCloseTo(1852 / 1609.344, 9); // nautical mile / statute mile
+        },
+      ),
     );
   });
 
@@ -54,7 +68,12 @@ describe('pitch speed', () => {
 
 describe('full-throttle rpm against the rated range', () => {
   // Illustrative inputs, not trade figures; the expected numbers follow from the cited rules.
-  const base = { ratedRpmMin: 5000, ratedRpmMax: 6000, pitchIn: 19, propulsion: 'outboard' as const };
+  const base = {
+    ratedRpmMin: 5000,
+    ratedRpmMax: 6000,
+    pitchIn: 19,
+    propulsion: 'outboard' as const,
+  };
 
   it('proportional estimate: 19 in × 5000 / 6000 = 15.83 in (common practice)', () => {
     expect(proportionalPitch(19, 5000, 6000)).toBeCloseTo(15.83, 2);
@@ -67,14 +86,24 @@ describe('full-throttle rpm against the rated range', () => {
     expect(advice.rpmFromTarget).toBe(900);
     expect(advice.pitchChangeIn.least).toBeCloseTo(4.5, 9); // 900 / 200
     expect(advice.pitchChangeIn.most).toBeCloseTo(6, 9); // 900 / 150
-    expect(advice.advice).toBe('The engine over-revs above the rated range (5000–6000 rpm): try about 4.5–6 in more pitch.');
+    expect(advice.advice).toBe(
+      'The engine over-revs above the rated range (5000–6000 rpm): try about 4.5–6 in more pitch.',
+    );
   });
 
   it('below range → less pitch; inboards about 100 rpm per inch (common practice)', () => {
-    const advice = adviseOnPitch({ ...base, propulsion: 'inboard', ratedRpmMin: 3400, ratedRpmMax: 3600, fullThrottleRpm: 3200 });
+    const advice = adviseOnPitch({
+      ...base,
+      propulsion: 'inboard',
+      ratedRpmMin: 3400,
+      ratedRpmMax: 3600,
+      fullThrottleRpm: 3200,
+    });
     expect(advice.verdict).toBe('below-range');
     expect(advice.pitchChangeIn).toEqual({ least: -3, most: -3 }); // 300 rpm / 100 per inch
-    expect(advice.advice).toBe('The engine cannot reach the rated range (3400–3600 rpm) and is overloaded: try about 3 in less pitch.');
+    expect(advice.advice).toBe(
+      'The engine cannot reach the rated range (3400–3600 rpm) and is overloaded: try about 3 in less pitch.',
+    );
     expect(advice.proportionalPitchIn).toBeCloseTo((19 * 3200) / 3500, 9);
   });
 
@@ -87,7 +116,12 @@ describe('full-throttle rpm against the rated range', () => {
   });
 
   it('schema names an inverted rated range', () => {
-    const result = FullThrottleCheckSchema.safeParse({ ...base, ratedRpmMin: 6000, ratedRpmMax: 5000, fullThrottleRpm: 5500 });
+    const result = FullThrottleCheckSchema.safeParse({
+      ...base,
+      ratedRpmMin: 6000,
+      ratedRpmMax: 5000,
+      fullThrottleRpm: 5500,
+    });
     expect(result.error?.issues[0]).toMatchObject({
       path: ['ratedRpmMax'],
       message: 'The highest rated rpm (ratedRpmMax) must be above the lowest (ratedRpmMin).',
@@ -95,7 +129,11 @@ describe('full-throttle rpm against the rated range', () => {
   });
 
   it('schema rejects an unknown drive', () => {
-    const result = FullThrottleCheckSchema.safeParse({ ...base, propulsion: 'jet', fullThrottleRpm: 5500 });
+    const result = FullThrottleCheckSchema.safeParse({
+      ...base,
+      propulsion: 'jet',
+      fullThrottleRpm: 5500,
+    });
     expect(result.error?.issues[0].path).toEqual(['propulsion']);
   });
 });

@@ -47,6 +47,9 @@ export function checkPropellerSpeed(input: {
     shaftRpm: shaft,
     pitchSpeedKn: speedKn,
     pitchSpeedMph: pitchSpeedMph(shaft, input.pitchIn),
-    slip: input.measuredKn === undefined || speedKn <= 0 ? null : propellerSlip(input.measuredKn, speedKn),
+    slip:
+      input.measuredKn === undefined || speedKn <= 0
+        ? null
+        : propellerSlip(input.measuredKn, speedKn),
   };
 }

@@ -15,7 +15,15 @@ export interface RankedRun {
  * a broken rule or a wrong device clock may need a call to the skipper; a signed-off engine whose
  * first service is near needs booking. Runs that wait on someone else come after.
  */
-export const ACTION_GROUPS = ['review', 'check', 'book-service', 'under-way', 'with-skipper', 'planned', 'done'] as const;
+export const ACTION_GROUPS = [
+  'review',
+  'check',
+  'book-service',
+  'under-way',
+  'with-skipper',
+  'planned',
+  'done',
+] as const;
 export type ActionGroup = (typeof ACTION_GROUPS)[number];
 
 const SERVICE_FLAGS: readonly BoardFlagCode[] = ['service-overdue', 'service-due-soon'];
@@ -31,7 +39,8 @@ export function actionGroup(run: Pick<RankedRun, 'state' | 'flags'>): ActionGrou
 }
 
 /** True for the groups that ask something of the workshop now. */
-export const needsAction = (group: ActionGroup): boolean => group === 'review' || group === 'check' || group === 'book-service';
+export const needsAction = (group: ActionGroup): boolean =>
+  group === 'review' || group === 'check' || group === 'book-service';
 
 const rank = (group: ActionGroup) => ACTION_GROUPS.indexOf(group);
 

@@ -11,7 +11,8 @@ function parts(date: string): [number, number, number] {
   return [Number(date.slice(0, 4)), Number(date.slice(5, 7)), Number(date.slice(8, 10))];
 }
 
-const daysInMonth = (year: number, month: number) => new Date(Date.UTC(year, month, 0)).getUTCDate();
+const daysInMonth = (year: number, month: number) =>
+  new Date(Date.UTC(year, month, 0)).getUTCDate();
 
 /** The same day `months` later, clamped to the end of a shorter month (31 Jan + 1 month = 28/29 Feb). */
 export function addMonthsToDay(date: string, months: number): string {

@@ -30,7 +30,12 @@ export interface CertificateContent {
   comments: string;
   technician: { name: string; role: string };
   submittedAt: string | null;
-  firstService: { dueAtHours: number | null; dueOn: string | null; hoursNow: number; hoursSource: HoursSource } | null;
+  firstService: {
+    dueAtHours: number | null;
+    dueOn: string | null;
+    hoursNow: number;
+    hoursSource: HoursSource;
+  } | null;
 }
 
 export interface CertificatePhase {

@@ -1,5 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { certificateNumber, isCertificateNumber, luhnCheckDigit, workshopInitials } from './certificate-number';
+import {
+  certificateNumber,
+  isCertificateNumber,
+  luhnCheckDigit,
+  workshopInitials,
+} from './certificate-number';
 
 describe('certificate numbers', () => {
   it('uses the Luhn check digit', () => {

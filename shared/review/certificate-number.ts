@@ -14,7 +14,10 @@ export function workshopInitials(name: string): string {
     .replace(/[^A-Za-z\s]/g, ' ')
     .split(/\s+/)
     .filter(Boolean);
-  const initials = words.slice(0, 3).map((w) => w[0].toUpperCase()).join('');
+  const initials = words
+    .slice(0, 3)
+    .map((w) => w[0].toUpperCase())
+    .join('');
   return initials || 'RS';
 }
 
@@ -33,7 +36,11 @@ export function luhnCheckDigit(digits: string): number {
   return (10 - (sum % 10)) % 10;
 }
 
-export function certificateNumber(parts: { initials: string; year: number; sequence: number }): string {
+export function certificateNumber(parts: {
+  initials: string;
+  year: number;
+  sequence: number;
+}): string {
   const running = String(parts.sequence).padStart(4, '0');
   return `${parts.initials}-${parts.year}-${running}-${luhnCheckDigit(`${parts.year}${running}`)}`;
 }

@@ -75,8 +75,14 @@ export function xAt(segments: Pick<Segments, 'from' | 'to' | 'x'>, t: number): n
   return round3(x[lo] + held / MINUTE);
 }
 
-function collectSegments(ordered: readonly RunEvent[], phases: readonly ResolvedPhase[], maxHoldMs?: number): Map<string, Segments> {
-  const byPhase = new Map<string, Segments>(phases.map((p) => [p.id, { from: [], to: [], rpm: [], state: [], x: [], runMs: 0 }]));
+function collectSegments(
+  ordered: readonly RunEvent[],
+  phases: readonly ResolvedPhase[],
+  maxHoldMs?: number,
+): Map<string, Segments> {
+  const byPhase = new Map<string, Segments>(
+    phases.map((p) => [p.id, { from: [], to: [], rpm: [], state: [], x: [], runMs: 0 }]),
+  );
   const phaseById = new Map(phases.map((p) => [p.id, p]));
   walkTimeline(ordered, { maxHoldMs }, (reading, toMs) => {
     const segments = byPhase.get(reading.phaseId);
@@ -93,7 +99,8 @@ function collectSegments(ordered: readonly RunEvent[], phases: readonly Resolved
 
 function outingStarts(s: Segments): number[] {
   const starts: number[] = [];
-  for (let i = 1; i < s.from.length; i++) if (s.from[i] !== s.to[i - 1]) starts.push(round3(s.x[i]));
+  for (let i = 1; i < s.from.length; i++)
+    if (s.from[i] !== s.to[i - 1]) starts.push(round3(s.x[i]));
   return starts;
 }
 
@@ -108,7 +115,12 @@ export function phaseCharts(
   const byPhase = collectSegments(ordered, phases, options.maxHoldMs);
   return phases.map((phase, index) => {
     const s = byPhase.get(phase.id)!;
-    const kept = keepIndices(s.x, s.rpm, s.state.map((st) => st !== 'in-band'), maxPoints);
+    const kept = keepIndices(
+      s.x,
+      s.rpm,
+      s.state.map((st) => st !== 'in-band'),
+      maxPoints,
+    );
     const reasons = account.phases[index]?.reasons ?? [];
     return {
       phaseId: phase.id,
@@ -118,11 +130,23 @@ export function phaseCharts(
       readingCount: s.from.length,
       firstAt: s.from.length > 0 ? s.from[0] : null,
       lastAt: s.to.length > 0 ? s.to[s.to.length - 1] : null,
-      points: kept.map((i) => ({ x: round3(s.x[i]), at: s.from[i], rpm: s.rpm[i], state: s.state[i] })),
+      points: kept.map((i) => ({
+        x: round3(s.x[i]),
+        at: s.from[i],
+        rpm: s.rpm[i],
+        state: s.state[i],
+      })),
       outingStarts: outingStarts(s),
       breaches: reasons
         .filter((r) => r.code !== 'short-of-time' && r.fromMs !== null && r.toMs !== null)
-        .map((r) => ({ code: r.code, message: r.message, fromMs: r.fromMs!, toMs: r.toMs!, fromX: xAt(s, r.fromMs!), toX: xAt(s, r.toMs!) })),
+        .map((r) => ({
+          code: r.code,
+          message: r.message,
+          fromMs: r.fromMs!,
+          toMs: r.toMs!,
+          fromX: xAt(s, r.fromMs!),
+          toX: xAt(s, r.toMs!),
+        })),
     };
   });
 }

@@ -6,7 +6,7 @@ describe('thinning a long series for the chart', () => {
     expect(keepIndices([0, 1, 2], [5, 6, 7], [false, false, false], 10)).toEqual([0, 1, 2]);
   });
 
-  it('keeps first, last, each bucket\'s lowest and highest and every lone excursion from the band', () => {
+  it("keeps first, last, each bucket's lowest and highest and every lone excursion from the band", () => {
     const n = 36_000;
     const x = Array.from({ length: n }, (_, i) => i / 12); // a reading every 5 s, in minutes
     const y = x.map((_, i) => 3000 + ((i * 7919) % 400)); // wobble between 3000 and 3399

@@ -6,7 +6,12 @@
  */
 
 /** Indices of the points to keep, in ascending order; all of them when there are few enough. */
-export function keepIndices(x: readonly number[], y: readonly number[], flagged: readonly boolean[], maxPoints: number): number[] {
+export function keepIndices(
+  x: readonly number[],
+  y: readonly number[],
+  flagged: readonly boolean[],
+  maxPoints: number,
+): number[] {
   const n = x.length;
   if (n <= Math.max(2, maxPoints)) return Array.from({ length: n }, (_, i) => i);
   const buckets = Math.max(1, Math.floor((maxPoints - 2) / 3));

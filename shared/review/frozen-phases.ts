@@ -9,7 +9,10 @@ const MS_PER_MINUTE = 60_000;
  * resolved for the engine at assignment; reading them back (rather than resolving again) keeps a
  * run judged against exactly what the skipper was shown, whatever happens to the engine record.
  */
-export function frozenPhases(program: Pick<Program, 'phases'>, bands: Record<string, RpmBand>): ResolvedPhase[] {
+export function frozenPhases(
+  program: Pick<Program, 'phases'>,
+  bands: Record<string, RpmBand>,
+): ResolvedPhase[] {
   return program.phases.map((phase) => {
     const { band: _band, requiredMinutes, ...rest } = phase;
     const frozen = bands[phase.id];

@@ -28,7 +28,11 @@ export interface ReadingRow {
   note: string | null;
 }
 
-export function readingRow(reading: Reading, receivedAt: number, phase: ResolvedPhase | undefined): ReadingRow {
+export function readingRow(
+  reading: Reading,
+  receivedAt: number,
+  phase: ResolvedPhase | undefined,
+): ReadingRow {
   return {
     id: reading.id,
     at: reading.at,
@@ -51,19 +55,53 @@ export function readingRow(reading: Reading, receivedAt: number, phase: Resolved
   };
 }
 
-export const BAND_WORDS: Record<BandState, string> = { 'in-band': 'in band', over: 'over', under: 'under' };
+export const BAND_WORDS: Record<BandState, string> = {
+  'in-band': 'in band',
+  over: 'over',
+  under: 'under',
+};
 
 /** Column headings of the readings export; units in the heading so every cell is a bare number. */
 export const READING_CSV_HEADER: readonly string[] = [
-  'device time (UTC)', 'received (UTC)', 'phase', 'rpm', 'throttle', 'band', 'rpm source', 'frequency (Hz)',
-  'speed (kn)', 'speed source', 'fuel (L/h)', 'hour meter (h)', 'cooling water ok', 'latitude', 'longitude', 'note', 'reading id',
+  'device time (UTC)',
+  'received (UTC)',
+  'phase',
+  'rpm',
+  'throttle',
+  'band',
+  'rpm source',
+  'frequency (Hz)',
+  'speed (kn)',
+  'speed source',
+  'fuel (L/h)',
+  'hour meter (h)',
+  'cooling water ok',
+  'latitude',
+  'longitude',
+  'note',
+  'reading id',
 ];
 
 const iso = (ms: number) => new Date(ms).toISOString();
 
 export function readingCsvCells(row: ReadingRow): CsvCell[] {
   return [
-    iso(row.at), iso(row.receivedAt), row.phaseName, row.rpm, row.throttle, row.band ? BAND_WORDS[row.band] : '', row.rpmSource,
-    row.frequencyHz, row.speedKn, row.speedSource, row.fuelLph, row.hourMeter, row.coolantOk, row.lat, row.lon, row.note, row.id,
+    iso(row.at),
+    iso(row.receivedAt),
+    row.phaseName,
+    row.rpm,
+    row.throttle,
+    row.band ? BAND_WORDS[row.band] : '',
+    row.rpmSource,
+    row.frequencyHz,
+    row.speedKn,
+    row.speedSource,
+    row.fuelLph,
+    row.hourMeter,
+    row.coolantOk,
+    row.lat,
+    row.lon,
+    row.note,
+    row.id,
   ];
 }

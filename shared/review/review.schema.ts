@@ -15,7 +15,9 @@ export const SignOffInputSchema = z
     comments: z
       .string({ error: 'The comments (comments) must be text.' })
       .trim()
-      .max(MAX_COMMENTS, { error: `The comments (comments) can have at most ${MAX_COMMENTS} characters.` })
+      .max(MAX_COMMENTS, {
+        error: `The comments (comments) can have at most ${MAX_COMMENTS} characters.`,
+      })
       .default(''),
   })
   .refine((input) => input.decision !== 'return' || input.comments.length > 0, {
@@ -47,14 +49,28 @@ export const ReadingsQuerySchema = z.object({
 export type ReadingsQuery = z.infer<typeof ReadingsQuerySchema>;
 
 /** Which runs the board lists: what needs action (the default), all, or one state. */
-export const BOARD_SHOWS = ['action', 'all', 'planned', 'under-way', 'submitted', 'signed-off', 'returned'] as const;
+export const BOARD_SHOWS = [
+  'action',
+  'all',
+  'planned',
+  'under-way',
+  'submitted',
+  'signed-off',
+  'returned',
+] as const;
 export type BoardShow = (typeof BOARD_SHOWS)[number];
 
 export const BOARD_PAGE_MAX = 500;
 
 export const BoardQuerySchema = z.object({
-  show: z.enum(BOARD_SHOWS, { error: 'Show (show) must be action, all or a run state.' }).default('action'),
-  q: z.string({ error: 'The search text (q) must be text.' }).trim().max(80, { error: 'The search text (q) can have at most 80 characters.' }).default(''),
+  show: z
+    .enum(BOARD_SHOWS, { error: 'Show (show) must be action, all or a run state.' })
+    .default('action'),
+  q: z
+    .string({ error: 'The search text (q) must be text.' })
+    .trim()
+    .max(80, { error: 'The search text (q) can have at most 80 characters.' })
+    .default(''),
   limit: z.coerce
     .number({ error: 'The number of runs (limit) must be a whole number.' })
     .int({ error: 'The number of runs (limit) must be a whole number.' })

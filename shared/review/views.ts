@@ -31,7 +31,10 @@ export interface BoardRow {
 }
 
 /** What a board row says of the first service; the full working is on the review page. */
-export type BoardService = Pick<FirstServiceView, 'state' | 'dueAtHours' | 'dueOn' | 'hoursNow' | 'hoursSource'>;
+export type BoardService = Pick<
+  FirstServiceView,
+  'state' | 'dueAtHours' | 'dueOn' | 'hoursNow' | 'hoursSource'
+>;
 
 export interface BoardView {
   /** The workshop's calendar day the service states were worked out for. */
@@ -94,8 +97,15 @@ export interface RunReviewView {
   };
   vessel: { id: string; name: string; hin: string; homePort: string };
   engine: {
-    id: string; position: string; maker: string; model: string; serialNumber: string;
-    ratedRpmMin: number; ratedRpmMax: number; hourMeterAtCommissioning: number | null; commissionedOn: string | null;
+    id: string;
+    position: string;
+    maker: string;
+    model: string;
+    serialNumber: string;
+    ratedRpmMin: number;
+    ratedRpmMax: number;
+    hourMeterAtCommissioning: number | null;
+    commissionedOn: string | null;
   };
   skippers: Array<{ id: string; name: string }>;
   account: { verdict: Verdict; overallProgress: number; sessionMs: number; unassignedMs: number };
@@ -104,7 +114,13 @@ export interface RunReviewView {
   events: LoggedEvent[];
   eventsTotal: number;
   readingCount: number;
-  reviews: Array<{ decision: 'confirmed' | 'returned'; comments: string; verdict: string; reviewerName: string; decidedAt: string }>;
+  reviews: Array<{
+    decision: 'confirmed' | 'returned';
+    comments: string;
+    verdict: string;
+    reviewerName: string;
+    decidedAt: string;
+  }>;
   certificate: { number: string; issuedAt: string; downloadUrl: string } | null;
   firstService: FirstServiceView | null;
   trail: AuditView[];
@@ -118,7 +134,8 @@ export interface ReadingsPage {
   readings: ReadingRow[];
 }
 
-export type MailOutcomeView = { sent: true; to: string[] } | { sent: false; to: string[]; problem: string };
+export type MailOutcomeView =
+  { sent: true; to: string[] } | { sent: false; to: string[]; problem: string };
 
 export interface DecisionView {
   state: 'signed-off' | 'returned';

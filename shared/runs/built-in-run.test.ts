@@ -13,15 +13,23 @@ const phases = resolveProgramPhases(BUILT_IN_PROGRAMS['four-stroke-outboard'], e
 const at = (minutes: number) => T0 + minutes * MIN;
 
 function fourStrokeRun(burstSeconds: number): RunEvent[] {
-  const events: RunEvent[] = [start(at(0)), reading(at(0), 'dock-run', 750, 'idle'), reading(at(5), 'dock-run', 1400, 'idle')];
+  const events: RunEvent[] = [
+    start(at(0)),
+    reading(at(0), 'dock-run', 750, 'idle'),
+    reading(at(5), 'dock-run', 1400, 'idle'),
+  ];
   events.push(stop(at(10)), start(at(60)), advance(at(60), 'below-half'));
-  for (let m = 0; m < 110; m += 5) events.push(reading(at(60 + m), 'below-half', m % 10 === 0 ? 2200 : 2800, 'half'));
+  for (let m = 0; m < 110; m += 5)
+    events.push(reading(at(60 + m), 'below-half', m % 10 === 0 ? 2200 : 2800, 'half'));
   events.push(advance(at(170), 'below-three-quarter'));
   for (let m = 0; m < 500; m += 5) {
     const t = at(170 + m);
     if (m % 60 === 30) {
       // A short full-throttle burst once an hour, then back down.
-      events.push(reading(t, 'below-three-quarter', 5800, 'full'), reading(t + burstSeconds * SEC, 'below-three-quarter', 3800, 'three-quarter'));
+      events.push(
+        reading(t, 'below-three-quarter', 5800, 'full'),
+        reading(t + burstSeconds * SEC, 'below-three-quarter', 3800, 'three-quarter'),
+      );
     } else {
       events.push(reading(t, 'below-three-quarter', m % 10 === 0 ? 3600 : 4200, 'three-quarter'));
     }
@@ -68,12 +76,20 @@ describe('a run through the built-in four-stroke outboard program', () => {
   it('the live timer on deck agrees with the accounting at the end', () => {
     const events = fourStrokeRun(30);
     const live = liveTimerState(events, phases, at(700));
-    expect(live).toMatchObject({ currentPhaseId: 'below-three-quarter', state: 'stopped', phaseLeftMs: 0, overallProgress: 1 });
+    expect(live).toMatchObject({
+      currentPhaseId: 'below-three-quarter',
+      state: 'stopped',
+      phaseLeftMs: 0,
+      overallProgress: 1,
+    });
   });
 
   it('accounts a 50-hour run of 36,000 readings quickly (the 50 ms target is checked by the bench)', () => {
     const events: RunEvent[] = [start(T0)];
-    for (let i = 0; i < 36_000; i++) events.push(reading(T0 + i * 5 * SEC, 'below-three-quarter', 3000 + (i % 7) * 150, 'three-quarter'));
+    for (let i = 0; i < 36_000; i++)
+      events.push(
+        reading(T0 + i * 5 * SEC, 'below-three-quarter', 3000 + (i % 7) * 150, 'three-quarter'),
+      );
     events.push(stop(T0 + 36_000 * 5 * SEC));
     const began = performance.now();
     const account = accountRun(events.reverse(), phases);

@@ -32,7 +32,8 @@ function sortByTime(events: readonly RunEvent[]): Sorted {
     if (at > max) max = at;
   }
   const slots = 2 ** Math.max(1, Math.ceil(Math.log2(n + 1)));
-  if (n === 0 || (max - min + 1) * slots > Number.MAX_SAFE_INTEGER) return sortWithComparator(events);
+  if (n === 0 || (max - min + 1) * slots > Number.MAX_SAFE_INTEGER)
+    return sortWithComparator(events);
   const keys = new Float64Array(n);
   for (let i = 0; i < n; i++) keys[i] = (events[i].at - min) * slots + i;
   keys.sort();
@@ -48,7 +49,7 @@ function sortByTime(events: readonly RunEvent[]): Sorted {
 
 /** Puts each run of events at the same instant in id order. */
 function orderTiesById({ events, times }: Sorted): void {
-  for (let from = 0; from < events.length; ) {
+  for (let from = 0; from < events.length;) {
     let to = from + 1;
     while (to < events.length && times[to] === times[from]) to++;
     if (to - from > 1) {

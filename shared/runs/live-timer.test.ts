@@ -6,11 +6,32 @@ import { orderEvents } from './event-order';
 import { THROTTLE_POSITIONS } from '../programs/throttle';
 import { bandState } from './phase-rules';
 import { buildTimeline } from './timeline';
-import { advance, MIN, minutesAfterT0 as m, PROPERTY_PHASES, reading, SEC, start, stop, T0, testPhase } from './test-events';
+import {
+  advance,
+  MIN,
+  minutesAfterT0 as m,
+  PROPERTY_PHASES,
+  reading,
+  SEC,
+  start,
+  stop,
+  T0,
+  testPhase,
+} from './test-events';
 
 // Made-up phases and speeds to exercise the timer; expectations follow from the attribution rule.
-const half = testPhase({ id: 'half', band: { rpmMin: 1000, rpmMax: 3000 }, throttleCeiling: 'half', requiredMs: 60 * MIN });
-const below = testPhase({ id: 'below', band: { rpmMin: 0, rpmMax: 4500 }, throttleCeiling: 'three-quarter', requiredMs: 120 * MIN });
+const half = testPhase({
+  id: 'half',
+  band: { rpmMin: 1000, rpmMax: 3000 },
+  throttleCeiling: 'half',
+  requiredMs: 60 * MIN,
+});
+const below = testPhase({
+  id: 'below',
+  band: { rpmMin: 0, rpmMax: 4500 },
+  throttleCeiling: 'three-quarter',
+  requiredMs: 120 * MIN,
+});
 const phases = [half, below];
 
 describe('live timer', () => {
@@ -40,14 +61,23 @@ describe('live timer', () => {
   });
 
   it('over and under are shown as such', () => {
-    expect(liveTimerState([start(m(0)), reading(m(0), 'half', 3500, 'half')], phases, m(1)).state).toBe('over');
-    expect(liveTimerState([start(m(0)), reading(m(0), 'half', 700, 'idle')], phases, m(1)).state).toBe('under');
+    expect(
+      liveTimerState([start(m(0)), reading(m(0), 'half', 3500, 'half')], phases, m(1)).state,
+    ).toBe('over');
+    expect(
+      liveTimerState([start(m(0)), reading(m(0), 'half', 700, 'idle')], phases, m(1)).state,
+    ).toBe('under');
   });
 
   it('after the hold runs out (10 min, our choice): paused, and the count stops', () => {
     const events = [start(m(0)), reading(m(0), 'half', 2000, 'half')];
     const later = liveTimerState(events, phases, m(45));
-    expect(later).toMatchObject({ state: 'paused', phaseDoneMs: 10 * MIN, sessionElapsedMs: 45 * MIN, heldReading: null });
+    expect(later).toMatchObject({
+      state: 'paused',
+      phaseDoneMs: 10 * MIN,
+      sessionElapsedMs: 45 * MIN,
+      heldReading: null,
+    });
   });
 
   it('tells when the reading in force stops counting', () => {
@@ -69,18 +99,32 @@ describe('live timer', () => {
 
   it('after a stop: stopped, with the time kept', () => {
     const events = [start(m(0)), reading(m(0), 'half', 2000, 'half'), stop(m(7))];
-    expect(liveTimerState(events, phases, m(30))).toMatchObject({ state: 'stopped', phaseDoneMs: 7 * MIN, sessionElapsedMs: 0 });
+    expect(liveTimerState(events, phases, m(30))).toMatchObject({
+      state: 'stopped',
+      phaseDoneMs: 7 * MIN,
+      sessionElapsedMs: 0,
+    });
   });
 
   it('a clock set back before the newest event holds at that event: nothing negative', () => {
     const events = [start(m(0)), reading(m(5), 'half', 2000, 'half')];
     const state = liveTimerState(events, phases, m(5) - 60 * MIN);
-    expect(state).toMatchObject({ nowMs: m(5), clockBehindMs: 60 * MIN, phaseDoneMs: 0, sessionElapsedMs: 5 * MIN, state: 'in-band' });
+    expect(state).toMatchObject({
+      nowMs: m(5),
+      clockBehindMs: 60 * MIN,
+      phaseDoneMs: 0,
+      sessionElapsedMs: 5 * MIN,
+      state: 'in-band',
+    });
   });
 
   it('events logged after the clock went back are still ordered and counted sensibly', () => {
     // Reading at 10:05, then the clock jumps back an hour and the next reading says 09:06.
-    const events = [start(m(0)), reading(m(5), 'half', 2000, 'half'), reading(m(6) - 60 * MIN, 'half', 2500, 'half')];
+    const events = [
+      start(m(0)),
+      reading(m(5), 'half', 2000, 'half'),
+      reading(m(6) - 60 * MIN, 'half', 2500, 'half'),
+    ];
     const state = liveTimerState(events, phases, m(6) - 60 * MIN + 30 * SEC);
     expect(state.phaseDoneMs).toBeGreaterThanOrEqual(0);
     expect(state.sessionElapsedMs).toBeGreaterThanOrEqual(0);
@@ -91,7 +135,7 @@ describe('live timer', () => {
 /** Simulates a 10-hour day: readings every 20–90 s, stops, restarts and phase changes. */
 function tenHourDay(seed: number): RunEvent[] {
   let state = seed >>> 0;
-  const random = () => ((state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296);
+  const random = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296;
   const events: RunEvent[] = [start(T0)];
   let phase = 'a';
   let open = true;
@@ -105,7 +149,14 @@ function tenHourDay(seed: number): RunEvent[] {
       events.push(advance(at, phase));
     } else if (roll < 0.97) {
       // The rest of the time no reading is logged, which leaves a longer gap.
-      events.push(reading(at, phase, Math.floor(500 + random() * 5000), THROTTLE_POSITIONS[Math.floor(random() * 5)]));
+      events.push(
+        reading(
+          at,
+          phase,
+          Math.floor(500 + random() * 5000),
+          THROTTLE_POSITIONS[Math.floor(random() * 5)],
+        ),
+      );
     }
   }
   return events;
@@ -118,10 +169,19 @@ describe('live timer against a single computation', () => {
       const day = tenHourDay(seed);
       const whole = buildTimeline(orderEvents(day)).segments;
       for (let now = T0; now <= T0 + 10 * 60 * MIN + 15 * MIN; now += 61_337) {
-        const live = liveTimerState(day.filter((e) => e.at <= now), PROPERTY_PHASES, now);
+        const live = liveTimerState(
+          day.filter((e) => e.at <= now),
+          PROPERTY_PHASES,
+          now,
+        );
         const phase = PROPERTY_PHASES[live.currentPhaseIndex];
         const expected = whole
-          .filter((s) => s.phaseId === phase.id && s.fromMs < now && bandState(s.rpm, s.throttle, phase) === 'in-band')
+          .filter(
+            (s) =>
+              s.phaseId === phase.id &&
+              s.fromMs < now &&
+              bandState(s.rpm, s.throttle, phase) === 'in-band',
+          )
           .reduce((sum, s) => sum + Math.min(s.toMs, now) - s.fromMs, 0);
         expect(live.phaseDoneMs).toBe(expected);
         checked += expected > 0 ? 1 : 0;

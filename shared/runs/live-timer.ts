@@ -49,7 +49,11 @@ function currentPhaseIndex(ordered: readonly RunEvent[], phases: readonly Resolv
   return phases.length > 0 ? 0 : -1;
 }
 
-function liveState(timeline: TimelineEnd, phases: readonly ResolvedPhase[], nowMs: number): LiveState {
+function liveState(
+  timeline: TimelineEnd,
+  phases: readonly ResolvedPhase[],
+  nowMs: number,
+): LiveState {
   if (timeline.openSessionFromMs === null) return 'stopped';
   const held = timeline.heldAtEnd;
   if (held === null || nowMs >= held.holdEndsMs) return 'paused';
@@ -67,7 +71,10 @@ export function liveTimerState(
   const newestMs = ordered.length > 0 ? ordered[ordered.length - 1].at : nowMs;
   // A clock set back must not make time run backwards or go negative: hold at the newest event.
   const now = Math.max(nowMs, newestMs);
-  const { account, end: timeline } = accountOrdered(ordered, phases, { maxHoldMs: options.maxHoldMs, untilMs: now });
+  const { account, end: timeline } = accountOrdered(ordered, phases, {
+    maxHoldMs: options.maxHoldMs,
+    untilMs: now,
+  });
   const index = currentPhaseIndex(ordered, phases);
   const phase = index >= 0 ? account.phases[index] : undefined;
   const state = liveState(timeline, phases, now);

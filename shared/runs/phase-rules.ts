@@ -23,8 +23,13 @@ export interface RunReason {
 }
 
 /** In band: rpmMin ≤ rpm ≤ rpmMax with the lever at or below the ceiling. Over wins over under. */
-export function bandState(rpm: number, throttle: ThrottlePosition, phase: Pick<ResolvedPhase, 'band' | 'throttleCeiling'>): BandState {
-  if (rpm > phase.band.rpmMax || throttleAboveCeiling(throttle, phase.throttleCeiling)) return 'over';
+export function bandState(
+  rpm: number,
+  throttle: ThrottlePosition,
+  phase: Pick<ResolvedPhase, 'band' | 'throttleCeiling'>,
+): BandState {
+  if (rpm > phase.band.rpmMax || throttleAboveCeiling(throttle, phase.throttleCeiling))
+    return 'over';
   return rpm < phase.band.rpmMin ? 'under' : 'in-band';
 }
 
@@ -43,7 +48,12 @@ export interface PhaseStretches {
   idle: Stretch[];
 }
 
-const reason = (code: ReasonCode, message: string, s: Stretch): RunReason => ({ code, message, fromMs: s.fromMs, toMs: s.toMs });
+const reason = (code: ReasonCode, message: string, s: Stretch): RunReason => ({
+  code,
+  message,
+  fromMs: s.fromMs,
+  toMs: s.toMs,
+});
 
 const held = (s: Stretch) => durationWords(stretchMs(s));
 
@@ -61,10 +71,17 @@ function fullThrottleReasons(phase: ResolvedPhase, found: PhaseStretches): RunRe
   const { fullThrottleMaxSeconds, fullThrottleMaxMinutesPerHour } = phase.rules;
   const atATime = durationWords(secondsToMs(fullThrottleMaxSeconds ?? 0));
   const reasons = found.fullThrottleTooLong.map((s) =>
-    reason('full-throttle-too-long', `Full throttle was held for ${held(s)}; this phase allows at most ${atATime} at a time.`, s),
+    reason(
+      'full-throttle-too-long',
+      `Full throttle was held for ${held(s)}; this phase allows at most ${atATime} at a time.`,
+      s,
+    ),
   );
   const hour = found.fullThrottleHour;
-  if (fullThrottleMaxMinutesPerHour !== undefined && hour.totalMs > minutesToMs(fullThrottleMaxMinutesPerHour)) {
+  if (
+    fullThrottleMaxMinutesPerHour !== undefined &&
+    hour.totalMs > minutesToMs(fullThrottleMaxMinutesPerHour)
+  ) {
     const most = durationWords(minutesToMs(fullThrottleMaxMinutesPerHour));
     const message = `Full throttle added up to ${durationWords(hour.totalMs)} within one hour; this phase allows at most ${most} in any hour.`;
     reasons.push(reason('full-throttle-too-often', message, hour));
@@ -81,7 +98,9 @@ export function ruleBreaches(phase: ResolvedPhase, found: PhaseStretches): RunRe
   const every = durationWords(minutesToMs(phase.rules.changeSpeedEveryMinutes ?? 0));
   const idleMost = durationWords(minutesToMs(phase.rules.idleMaxMinutes ?? 0));
   return [
-    ...found.overBand.map((s) => reason('over-band', `The engine ran above this phase's band (${top}) for ${held(s)}.`, s)),
+    ...found.overBand.map((s) =>
+      reason('over-band', `The engine ran above this phase's band (${top}) for ${held(s)}.`, s),
+    ),
     ...fullThrottleReasons(phase, found),
     ...found.steady.map((s) =>
       reason(
@@ -91,7 +110,11 @@ export function ruleBreaches(phase: ResolvedPhase, found: PhaseStretches): RunRe
       ),
     ),
     ...found.idle.map((s) =>
-      reason('idle-too-long', `The engine idled for ${held(s)}; this phase allows at most ${idleMost} of idling at a time.`, s),
+      reason(
+        'idle-too-long',
+        `The engine idled for ${held(s)}; this phase allows at most ${idleMost} of idling at a time.`,
+        s,
+      ),
     ),
   ].sort(byTimeThenCode);
 }

@@ -55,14 +55,19 @@ export class PhaseTally {
     this.lastMs = toMs;
     this.fullThrottle.add(fromMs, toMs, throttle === 'full');
     // Where bursts are allowed they are judged by the full-throttle rules, not as over-band.
-    this.overBand.add(fromMs, toMs, state === 'over' && !(this.burstsAllowed && throttle === 'full'));
+    this.overBand.add(
+      fromMs,
+      toMs,
+      state === 'over' && !(this.burstsAllowed && throttle === 'full'),
+    );
     this.idle.add(fromMs, toMs, throttle === 'idle');
     // Idling is left to the idle rule: it is not a steady stretch, and it ends one.
     this.steady.add(fromMs, toMs, rpm, throttle !== 'idle');
   }
 
   finish(): PhaseAccount {
-    for (const tracker of [this.fullThrottle, this.overBand, this.idle, this.steady]) tracker.close();
+    for (const tracker of [this.fullThrottle, this.overBand, this.idle, this.steady])
+      tracker.close();
     const full = this.fullThrottle.kept;
     const tooLongMs = limitMs(this.phase.rules.fullThrottleMaxSeconds, secondsToMs);
     const fullThrottleHour = maxTotalInWindow(full, ONE_HOUR_MS);
@@ -91,7 +96,12 @@ export class PhaseTally {
   private shortOfTime(): RunReason {
     const required = durationWords(this.phase.requiredMs);
     if (this.firstMs === null) {
-      return { code: 'short-of-time', message: `Not run yet: ${required} in band is required.`, fromMs: null, toMs: null };
+      return {
+        code: 'short-of-time',
+        message: `Not run yet: ${required} in band is required.`,
+        fromMs: null,
+        toMs: null,
+      };
     }
     const left = durationWords(this.phase.requiredMs - this.inBandMs);
     return {

@@ -62,6 +62,10 @@ export function accountOrdered(
 }
 
 /** One engine's run accounted from its stored events, in any order, copies and all. */
-export function accountRun(events: readonly RunEvent[], phases: readonly ResolvedPhase[], options: AccountingOptions = {}): RunAccount {
+export function accountRun(
+  events: readonly RunEvent[],
+  phases: readonly ResolvedPhase[],
+  options: AccountingOptions = {},
+): RunAccount {
   return accountOrdered(orderEvents(events, options.engineId), phases, options).account;
 }

@@ -12,11 +12,18 @@ const eventBase = {
   id: z.uuid({ error: 'The event id (id) must be a UUID made on the device.' }),
   at: z
     .number({ error: 'The event time (at) must be a time in epoch milliseconds.' })
-    .check(z.int({ error: 'The event time (at) must be whole milliseconds.' }), z.nonnegative({ error: 'The event time (at) cannot be before 1970.' })),
-  engineId: z.string({ error: 'Choose the engine (engineId).' }).check(z.trim(), z.minLength(1, { error: 'Choose the engine (engineId).' })),
+    .check(
+      z.int({ error: 'The event time (at) must be whole milliseconds.' }),
+      z.nonnegative({ error: 'The event time (at) cannot be before 1970.' }),
+    ),
+  engineId: z
+    .string({ error: 'Choose the engine (engineId).' })
+    .check(z.trim(), z.minLength(1, { error: 'Choose the engine (engineId).' })),
 };
 
-const phaseIdField = z.string({ error: 'Choose the phase (phaseId).' }).check(z.trim(), z.minLength(1, { error: 'Choose the phase (phaseId).' }));
+const phaseIdField = z
+  .string({ error: 'Choose the phase (phaseId).' })
+  .check(z.trim(), z.minLength(1, { error: 'Choose the phase (phaseId).' }));
 
 export const SessionStartSchema = z.object({ kind: z.literal('session-start'), ...eventBase });
 export type SessionStart = z.infer<typeof SessionStartSchema>;
@@ -34,7 +41,11 @@ export const RpmSourceSchema = z.enum(['tachometer', 'frequency', 'estimate'], {
  * in scope does 80 kn or burns 400 L/h per engine), there to catch a slipped finger.
  */
 const readingExtras = {
-  speedSource: z.optional(z.enum(['gps', 'typed'], { error: 'Where the speed came from (speedSource) must be gps or typed.' })),
+  speedSource: z.optional(
+    z.enum(['gps', 'typed'], {
+      error: 'Where the speed came from (speedSource) must be gps or typed.',
+    }),
+  ),
   fuelLph: z.optional(
     z
       .number({ error: 'The fuel flow (fuelLph) must be a number of litres per hour.' })
@@ -51,7 +62,9 @@ const readingExtras = {
         z.maximum(100_000, { error: 'The hour meter (hourMeter) must be at most 100,000 h.' }),
       ),
   ),
-  coolantOk: z.optional(z.boolean({ error: 'The cooling-water tell-tale check (coolantOk) must be yes or no.' })),
+  coolantOk: z.optional(
+    z.boolean({ error: 'The cooling-water tell-tale check (coolantOk) must be yes or no.' }),
+  ),
   lat: z.optional(
     z
       .number()
@@ -71,7 +84,10 @@ const readingExtras = {
   note: z.optional(
     z
       .string({ error: 'The note (note) must be text.' })
-      .check(z.trim(), z.maxLength(1000, { error: 'The note (note) can have at most 1000 characters.' })),
+      .check(
+        z.trim(),
+        z.maxLength(1000, { error: 'The note (note) can have at most 1000 characters.' }),
+      ),
   ),
 };
 
@@ -80,12 +96,12 @@ export const ReadingSchema = z
     kind: z.literal('reading'),
     ...eventBase,
     phaseId: phaseIdField,
-    rpm: z
-      .number({ error: 'Enter the engine speed (rpm) as a number.' })
-      .check(
-        z.minimum(0, { error: 'The engine speed (rpm) cannot be negative.' }),
-        z.maximum(RPM_UPPER_BOUND, { error: `The engine speed (rpm) must be at most ${RPM_UPPER_BOUND} rpm.` }),
-      ),
+    rpm: z.number({ error: 'Enter the engine speed (rpm) as a number.' }).check(
+      z.minimum(0, { error: 'The engine speed (rpm) cannot be negative.' }),
+      z.maximum(RPM_UPPER_BOUND, {
+        error: `The engine speed (rpm) must be at most ${RPM_UPPER_BOUND} rpm.`,
+      }),
+    ),
     throttle: ThrottlePositionSchema,
     speedKn: z.optional(
       z
@@ -96,7 +112,9 @@ export const ReadingSchema = z
     frequencyHz: z.optional(
       z
         .number({ error: 'The measured frequency (frequencyHz) must be a number of hertz.' })
-        .check(z.positive({ error: 'The measured frequency (frequencyHz) must be more than zero.' })),
+        .check(
+          z.positive({ error: 'The measured frequency (frequencyHz) must be more than zero.' }),
+        ),
     ),
     ...readingExtras,
   })
@@ -109,7 +127,11 @@ export const ReadingSchema = z
 export type Reading = z.infer<typeof ReadingSchema>;
 
 /** The skipper (or workshop) confirms that `phaseId` now starts. */
-export const PhaseAdvanceSchema = z.object({ kind: z.literal('phase-advance'), ...eventBase, phaseId: phaseIdField });
+export const PhaseAdvanceSchema = z.object({
+  kind: z.literal('phase-advance'),
+  ...eventBase,
+  phaseId: phaseIdField,
+});
 export type PhaseAdvance = z.infer<typeof PhaseAdvanceSchema>;
 
 /** A rule warning raised on the device (over the ceiling, full throttle too long…); logged, never counted as time. */
@@ -117,8 +139,12 @@ export const AlertEventSchema = z.object({
   kind: z.literal('alert'),
   ...eventBase,
   phaseId: z.optional(phaseIdField),
-  code: z.string({ error: 'The alert code (code) must be text.' }).check(z.trim(), z.minLength(1), z.maxLength(64)),
-  message: z.string({ error: 'The alert message (message) must be text.' }).check(z.trim(), z.minLength(1), z.maxLength(500)),
+  code: z
+    .string({ error: 'The alert code (code) must be text.' })
+    .check(z.trim(), z.minLength(1), z.maxLength(64)),
+  message: z
+    .string({ error: 'The alert message (message) must be text.' })
+    .check(z.trim(), z.minLength(1), z.maxLength(500)),
 });
 export type AlertEvent = z.infer<typeof AlertEventSchema>;
 
@@ -138,7 +164,17 @@ export type NoteEvent = z.infer<typeof NoteEventSchema>;
 
 export const RunEventSchema = z.discriminatedUnion(
   'kind',
-  [SessionStartSchema, SessionStopSchema, ReadingSchema, PhaseAdvanceSchema, AlertEventSchema, NoteEventSchema],
-  { error: 'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.' },
+  [
+    SessionStartSchema,
+    SessionStopSchema,
+    ReadingSchema,
+    PhaseAdvanceSchema,
+    AlertEventSchema,
+    NoteEventSchema,
+  ],
+  {
+    error:
+      'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.',
+  },
 );
 export type RunEvent = z.infer<typeof RunEventSchema>;

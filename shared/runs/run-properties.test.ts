@@ -5,13 +5,29 @@ import { orderEvents } from './event-order';
 import { liveTimerState } from './live-timer';
 import { accountRun, type RunAccount } from './run-accounting';
 import type { RunEvent } from './run-event.schema';
-import { ENGINE, eventsFromSteps, MIN, PROPERTY_PHASES as phases, SEC, shuffled, T0 } from './test-events';
+import {
+  ENGINE,
+  eventsFromSteps,
+  MIN,
+  PROPERTY_PHASES as phases,
+  SEC,
+  shuffled,
+  T0,
+} from './test-events';
 import { buildTimeline } from './timeline';
 
 // Property tests of the attribution rule (timeline.ts) and the live timer over generated
 // event streams. Phases and speeds are made up; no trade figure is checked here.
 
-const KINDS = ['reading', 'reading', 'reading', 'reading', 'session-start', 'session-stop', 'phase-advance'] as const;
+const KINDS = [
+  'reading',
+  'reading',
+  'reading',
+  'reading',
+  'session-start',
+  'session-stop',
+  'phase-advance',
+] as const;
 
 const eventsArb = (options: { withClockJumps?: boolean; maxLength?: number } = {}) =>
   fc
@@ -20,7 +36,10 @@ const eventsArb = (options: { withClockJumps?: boolean; maxLength?: number } = {
         dtMs: fc.oneof(
           { weight: 1, arbitrary: fc.constant(0) },
           { weight: 6, arbitrary: fc.integer({ min: 1, max: 20 * MIN }) },
-          { weight: options.withClockJumps ? 1 : 0, arbitrary: fc.integer({ min: -60 * MIN, max: -1 }) },
+          {
+            weight: options.withClockJumps ? 1 : 0,
+            arbitrary: fc.integer({ min: -60 * MIN, max: -1 }),
+          },
         ),
         kind: fc.constantFrom(...KINDS),
         id: fc.uuid(),
@@ -35,7 +54,8 @@ const eventsArb = (options: { withClockJumps?: boolean; maxLength?: number } = {
 const RUNS = { numRuns: 300 };
 
 const totalCounted = (account: RunAccount) =>
-  account.phases.reduce((sum, p) => sum + p.timeInBandMs + p.timeOverMs + p.timeUnderMs, 0) + account.unassignedMs;
+  account.phases.reduce((sum, p) => sum + p.timeInBandMs + p.timeOverMs + p.timeUnderMs, 0) +
+  account.unassignedMs;
 
 describe('accounting properties', () => {
   it('time is never negative and shares stay within 0..1, even when the clock jumps back', () => {
@@ -43,12 +63,19 @@ describe('accounting properties', () => {
       fc.property(eventsArb({ withClockJumps: true }), (events) => {
         const account = accountRun(events, phases);
         for (const p of account.phases) {
-          for (const value of [p.timeInBandMs, p.timeOverMs, p.timeUnderMs, p.longestFullThrottleMs, p.maxFullThrottleInHourMs]) {
+          for (const value of [
+            p.timeInBandMs,
+            p.timeOverMs,
+            p.timeUnderMs,
+            p.longestFullThrottleMs,
+            p.maxFullThrottleInHourMs,
+          ]) {
             expect(value).toBeGreaterThanOrEqual(0);
           }
           expect(p.progressShare).toBeGreaterThanOrEqual(0);
           expect(p.progressShare).toBeLessThanOrEqual(1);
-          for (const r of p.reasons) if (r.fromMs !== null) expect(r.toMs!).toBeGreaterThanOrEqual(r.fromMs);
+          for (const r of p.reasons)
+            if (r.fromMs !== null) expect(r.toMs!).toBeGreaterThanOrEqual(r.fromMs);
         }
         expect(account.sessionMs).toBeGreaterThanOrEqual(0);
         expect(account.overallProgress).toBeLessThanOrEqual(1);
@@ -71,14 +98,26 @@ describe('accounting properties', () => {
     const share = fc.double({ min: 0, max: 1, noNaN: true });
     fc.assert(
       fc.property(eventsArb(), share, share, (events, pick, where) => {
-        const sessions = buildTimeline(orderEvents(events)).sessions.filter((s) => s.toMs - s.fromMs >= 2);
+        const sessions = buildTimeline(orderEvents(events)).sessions.filter(
+          (s) => s.toMs - s.fromMs >= 2,
+        );
         fc.pre(sessions.length > 0);
         const session = sessions[Math.min(sessions.length - 1, Math.floor(pick * sessions.length))];
         const at = session.fromMs + 1 + Math.floor(where * (session.toMs - session.fromMs - 2));
         const split: RunEvent[] = [
           ...events,
-          { kind: 'session-stop', id: 'ffffffff-0000-4000-8000-000000000001', at, engineId: ENGINE },
-          { kind: 'session-start', id: '00000000-ffff-4000-8000-000000000002', at, engineId: ENGINE },
+          {
+            kind: 'session-stop',
+            id: 'ffffffff-0000-4000-8000-000000000001',
+            at,
+            engineId: ENGINE,
+          },
+          {
+            kind: 'session-start',
+            id: '00000000-ffff-4000-8000-000000000002',
+            at,
+            engineId: ENGINE,
+          },
         ];
         expect(accountRun(split, phases)).toEqual(accountRun(events, phases));
       }),
@@ -88,10 +127,18 @@ describe('accounting properties', () => {
 
   it('arrival order and duplicate copies do not change the result', () => {
     fc.assert(
-      fc.property(eventsArb({ withClockJumps: true }), fc.integer(), fc.integer({ min: 0, max: 10 }), (events, seed, copies) => {
-        const delivered = shuffled([...events, ...shuffled(events, seed + 1).slice(0, copies)], seed);
-        expect(accountRun(delivered, phases)).toEqual(accountRun(events, phases));
-      }),
+      fc.property(
+        eventsArb({ withClockJumps: true }),
+        fc.integer(),
+        fc.integer({ min: 0, max: 10 }),
+        (events, seed, copies) => {
+          const delivered = shuffled(
+            [...events, ...shuffled(events, seed + 1).slice(0, copies)],
+            seed,
+          );
+          expect(accountRun(delivered, phases)).toEqual(accountRun(events, phases));
+        },
+      ),
       RUNS,
     );
   });
@@ -102,10 +149,15 @@ describe('accounting properties', () => {
         const account = accountRun(events, phases);
         for (const p of account.phases) {
           if (p.verdict === 'complete') expect(p.timeInBandMs).toBeGreaterThanOrEqual(p.requiredMs);
-          if (p.verdict === 'breached') expect(p.reasons.some((r) => r.code !== 'short-of-time')).toBe(true);
+          if (p.verdict === 'breached')
+            expect(p.reasons.some((r) => r.code !== 'short-of-time')).toBe(true);
         }
         const verdicts = account.phases.map((p) => p.verdict);
-        const expected = verdicts.includes('breached') ? 'breached' : verdicts.every((v) => v === 'complete') ? 'complete' : 'incomplete';
+        const expected = verdicts.includes('breached')
+          ? 'breached'
+          : verdicts.every((v) => v === 'complete')
+            ? 'complete'
+            : 'incomplete';
         expect(account.verdict).toBe(expected);
       }),
       RUNS,
@@ -130,31 +182,46 @@ describe('live timer properties', () => {
 
   it('reload in the middle: recomputing from stored events equals carrying on', () => {
     fc.assert(
-      fc.property(eventsArb({ maxLength: 80 }), fc.array(fc.boolean(), { minLength: 80, maxLength: 80 }), (events, reloads) => {
-        const running: RunEvent[] = [];
-        let stored: RunEvent[] = [];
-        events.forEach((event, i) => {
-          running.push(event);
-          stored.push(event);
-          // A killed app comes back with only what storage kept, in whatever order it returns it.
-          if (reloads[i]) stored = (JSON.parse(JSON.stringify(stored)) as RunEvent[]).reverse();
-          const now = event.at + 90 * SEC;
-          expect(liveTimerState(stored, phases, now)).toEqual(liveTimerState(running, phases, now));
-        });
-      }),
+      fc.property(
+        eventsArb({ maxLength: 80 }),
+        fc.array(fc.boolean(), { minLength: 80, maxLength: 80 }),
+        (events, reloads) => {
+          const running: RunEvent[] = [];
+          let stored: RunEvent[] = [];
+          events.forEach((event, i) => {
+            running.push(event);
+            stored.push(event);
+            // A killed app comes back with only what storage kept, in whatever order it returns it.
+            if (reloads[i]) stored = (JSON.parse(JSON.stringify(stored)) as RunEvent[]).reverse();
+            const now = event.at + 90 * SEC;
+            expect(liveTimerState(stored, phases, now)).toEqual(
+              liveTimerState(running, phases, now),
+            );
+          });
+        },
+      ),
       { numRuns: 100 },
     );
   });
 
   it('never goes negative when the clock jumps', () => {
     fc.assert(
-      fc.property(eventsArb({ withClockJumps: true }), fc.integer({ min: -120 * MIN, max: 24 * 60 * MIN }), (events, offset) => {
-        const live = liveTimerState(events, phases, T0 + offset);
-        for (const value of [live.phaseDoneMs, live.phaseLeftMs, live.sessionElapsedMs, live.clockBehindMs]) {
-          expect(value).toBeGreaterThanOrEqual(0);
-        }
-        expect(live.nowMs).toBeGreaterThanOrEqual(T0 + offset);
-      }),
+      fc.property(
+        eventsArb({ withClockJumps: true }),
+        fc.integer({ min: -120 * MIN, max: 24 * 60 * MIN }),
+        (events, offset) => {
+          const live = liveTimerState(events, phases, T0 + offset);
+          for (const value of [
+            live.phaseDoneMs,
+            live.phaseLeftMs,
+            live.sessionElapsedMs,
+            live.clockBehindMs,
+          ]) {
+            expect(value).toBeGreaterThanOrEqual(0);
+          }
+          expect(live.nowMs).toBeGreaterThanOrEqual(T0 + offset);
+        },
+      ),
       RUNS,
     );
   });

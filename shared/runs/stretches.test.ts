@@ -51,10 +51,18 @@ describe('SteadyTracker', () => {
 /** Brute force over every millisecond-aligned window start, for small inputs. */
 function bruteForceMax(stretches: Stretch[], windowMs: number): number {
   let best = 0;
-  const starts = stretches.flatMap((s) => [s.fromMs, s.toMs - windowMs, s.fromMs - windowMs, s.toMs]);
+  const starts = stretches.flatMap((s) => [
+    s.fromMs,
+    s.toMs - windowMs,
+    s.fromMs - windowMs,
+    s.toMs,
+  ]);
   for (const from of starts) {
     const to = from + windowMs;
-    const total = stretches.reduce((sum, s) => sum + Math.max(0, Math.min(to, s.toMs) - Math.max(from, s.fromMs)), 0);
+    const total = stretches.reduce(
+      (sum, s) => sum + Math.max(0, Math.min(to, s.toMs) - Math.max(from, s.fromMs)),
+      0,
+    );
     best = Math.max(best, total);
   }
   return best;
@@ -66,12 +74,22 @@ describe('maxTotalInWindow', () => {
   });
 
   it('caps a stretch longer than the window at the window', () => {
-    expect(maxTotalInWindow([{ fromMs: 0, toMs: 500 }, { fromMs: 600, toMs: 620 }], 100)).toEqual({ fromMs: 0, toMs: 100, totalMs: 100 });
+    expect(
+      maxTotalInWindow(
+        [
+          { fromMs: 0, toMs: 500 },
+          { fromMs: 600, toMs: 620 },
+        ],
+        100,
+      ),
+    ).toEqual({ fromMs: 0, toMs: 100, totalMs: 100 });
   });
 
   it('matches a brute-force search', () => {
     const stretchesArb = fc
-      .array(fc.tuple(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 1, max: 40 })), { maxLength: 15 })
+      .array(fc.tuple(fc.integer({ min: 0, max: 50 }), fc.integer({ min: 1, max: 40 })), {
+        maxLength: 15,
+      })
       .map((parts) => {
         let at = 0;
         return parts.map(([gap, length]) => {
@@ -82,7 +100,9 @@ describe('maxTotalInWindow', () => {
       });
     fc.assert(
       fc.property(stretchesArb, fc.integer({ min: 1, max: 120 }), (stretches, windowMs) => {
-        expect(maxTotalInWindow(stretches, windowMs).totalMs).toBe(bruteForceMax(stretches, windowMs));
+        expect(maxTotalInWindow(stretches, windowMs).totalMs).toBe(
+          bruteForceMax(stretches, windowMs),
+        );
       }),
       { numRuns: 500 },
     );
@@ -93,12 +113,21 @@ describe('orderEvents', () => {
   it('drops copies delivered twice, wherever they arrive', () => {
     const first = reading(T0, 'p', 2000, 'half');
     const other = reading(T0, 'p', 2500, 'half');
-    const ordered = orderEvents([{ ...first }, other, start(T0 - 1), first, { ...other }, { ...first }]);
+    const ordered = orderEvents([
+      { ...first },
+      other,
+      start(T0 - 1),
+      first,
+      { ...other },
+      { ...first },
+    ]);
     expect(ordered.map((e) => e.id)).toEqual([ordered[0].id, first.id, other.id]);
   });
 
   it('filters to one engine', () => {
-    expect(orderEvents([start(T0), start(T0, 'engine-starboard')], 'engine-starboard')).toHaveLength(1);
+    expect(
+      orderEvents([start(T0), start(T0, 'engine-starboard')], 'engine-starboard'),
+    ).toHaveLength(1);
   });
 
   it('breaks ties in time by id', () => {

@@ -31,7 +31,8 @@ export class StretchTracker {
   }
 
   close(): void {
-    if (this.toMs - this.fromMs > this.longerThanMs) this.kept.push({ fromMs: this.fromMs, toMs: this.toMs });
+    if (this.toMs - this.fromMs > this.longerThanMs)
+      this.kept.push({ fromMs: this.fromMs, toMs: this.toMs });
     this.toMs = Number.NaN;
   }
 }
@@ -76,7 +77,8 @@ export class SteadyTracker {
   }
 
   close(): void {
-    if (this.toMs - this.fromMs > this.longerThanMs) this.kept.push({ fromMs: this.fromMs, toMs: this.toMs, rpm: this.rpm });
+    if (this.toMs - this.fromMs > this.longerThanMs)
+      this.kept.push({ fromMs: this.fromMs, toMs: this.toMs, rpm: this.rpm });
     this.toMs = Number.NaN;
   }
 }
@@ -100,9 +102,11 @@ export function maxTotalInWindow(stretches: readonly Stretch[], windowMs: number
       whole = 0;
     }
     const windowEnd = stretches[i].fromMs + windowMs;
-    while (j < stretches.length && stretches[j].toMs <= windowEnd) whole += stretchMs(stretches[j++]);
+    while (j < stretches.length && stretches[j].toMs <= windowEnd)
+      whole += stretchMs(stretches[j++]);
     const partial = j < stretches.length ? Math.max(0, windowEnd - stretches[j].fromMs) : 0;
-    if (whole + partial > best.totalMs) best = { fromMs: stretches[i].fromMs, toMs: windowEnd, totalMs: whole + partial };
+    if (whole + partial > best.totalMs)
+      best = { fromMs: stretches[i].fromMs, toMs: windowEnd, totalMs: whole + partial };
     if (j > i) whole -= stretchMs(stretches[i]);
   }
   return best;

@@ -20,8 +20,18 @@ export function nextId(): string {
   return `00000000-0000-4000-8000-${counter.toString(16).padStart(12, '0')}`;
 }
 
-export const start = (at: number, engineId = ENGINE): RunEvent => ({ kind: 'session-start', id: nextId(), at, engineId });
-export const stop = (at: number, engineId = ENGINE): RunEvent => ({ kind: 'session-stop', id: nextId(), at, engineId });
+export const start = (at: number, engineId = ENGINE): RunEvent => ({
+  kind: 'session-start',
+  id: nextId(),
+  at,
+  engineId,
+});
+export const stop = (at: number, engineId = ENGINE): RunEvent => ({
+  kind: 'session-stop',
+  id: nextId(),
+  at,
+  engineId,
+});
 export const advance = (at: number, phaseId: string, engineId = ENGINE): RunEvent => ({
   kind: 'phase-advance',
   id: nextId(),
@@ -39,7 +49,9 @@ export const reading = (
 
 export const minutesAfterT0 = (m: number) => T0 + m * MIN;
 
-export function testPhase(overrides: Partial<ResolvedPhase> & Pick<ResolvedPhase, 'id'>): ResolvedPhase {
+export function testPhase(
+  overrides: Partial<ResolvedPhase> & Pick<ResolvedPhase, 'id'>,
+): ResolvedPhase {
   return {
     name: overrides.id,
     performedBy: 'skipper',
@@ -66,9 +78,19 @@ export const PROPERTY_PHASES: ResolvedPhase[] = [
     band: { rpmMin: 0, rpmMax: 4500 },
     throttleCeiling: 'three-quarter',
     requiredMs: 60 * MIN,
-    rules: { fullThrottleMaxSeconds: 60, fullThrottleMaxMinutesPerHour: 5, changeSpeedEveryMinutes: 15 },
+    rules: {
+      fullThrottleMaxSeconds: 60,
+      fullThrottleMaxMinutesPerHour: 5,
+      changeSpeedEveryMinutes: 15,
+    },
   }),
-  testPhase({ id: 'c', band: { rpmMin: 2500, rpmMax: 3000 }, throttleCeiling: 'varied', requiredMs: 20 * MIN, rules: { fullThrottleMaxSeconds: 300 } }),
+  testPhase({
+    id: 'c',
+    band: { rpmMin: 2500, rpmMax: 3000 },
+    throttleCeiling: 'varied',
+    requiredMs: 20 * MIN,
+    rules: { fullThrottleMaxSeconds: 300 },
+  }),
 ];
 
 /** One step of a generated event stream: how long after the last event, and what. */
@@ -87,8 +109,16 @@ export function eventsFromSteps(steps: readonly EventStep[]): RunEvent[] {
   return steps.map((step) => {
     at = Math.max(0, at + step.dtMs);
     const base = { id: step.id, at, engineId: ENGINE };
-    if (step.kind === 'reading') return { ...base, kind: 'reading', phaseId: step.phaseId, rpm: step.rpm, throttle: step.throttle };
-    if (step.kind === 'phase-advance') return { ...base, kind: 'phase-advance', phaseId: step.phaseId };
+    if (step.kind === 'reading')
+      return {
+        ...base,
+        kind: 'reading',
+        phaseId: step.phaseId,
+        rpm: step.rpm,
+        throttle: step.throttle,
+      };
+    if (step.kind === 'phase-advance')
+      return { ...base, kind: 'phase-advance', phaseId: step.phaseId };
     return { ...base, kind: step.kind as 'session-start' | 'session-stop' };
   });
 }

@@ -88,7 +88,11 @@ function readInstant(ordered: readonly RunEvent[], from: number, instant: Instan
  * Walks events already in (at, id) order and hands each segment to `visit`. Segments are not
  * stored, so a long run costs no more memory than its events (and no garbage collection).
  */
-export function walkTimeline(ordered: readonly RunEvent[], options: TimelineOptions, visit: SegmentVisitor): TimelineEnd {
+export function walkTimeline(
+  ordered: readonly RunEvent[],
+  options: TimelineOptions,
+  visit: SegmentVisitor,
+): TimelineEnd {
   const maxHoldMs = options.maxHoldMs ?? DEFAULT_MAX_HOLD_MS;
   const untilMs = options.untilMs ?? Number.POSITIVE_INFINITY;
   const sessions: SessionSpan[] = [];
@@ -100,7 +104,7 @@ export function walkTimeline(ordered: readonly RunEvent[], options: TimelineOpti
     const toMs = Math.min(endMs, reading.at + maxHoldMs, untilMs);
     if (toMs > reading.at) visit(reading, (lastEndMs = toMs));
   };
-  for (let i = 0; i < ordered.length && ordered[i].at <= untilMs; ) {
+  for (let i = 0; i < ordered.length && ordered[i].at <= untilMs;) {
     const at = ordered[i].at;
     i = readInstant(ordered, i, instant); // rule 5: events at one instant act together
     const closes = openFrom !== null && instant.stop && !instant.start;
@@ -119,15 +123,32 @@ export function walkTimeline(ordered: readonly RunEvent[], options: TimelineOpti
   if (held !== null) release(held, Number.POSITIVE_INFINITY);
   // With no end in sight a session left open ends where its last reading stops holding:
   // a forgotten phone does not count as running.
-  if (openFrom !== null) sessions.push({ fromMs: openFrom, toMs: Number.isFinite(untilMs) ? untilMs : Math.max(openFrom, lastEndMs) });
-  return { sessions, openSessionFromMs: openFrom, heldAtEnd: held === null ? null : { reading: held, holdEndsMs: held.at + maxHoldMs } };
+  if (openFrom !== null)
+    sessions.push({
+      fromMs: openFrom,
+      toMs: Number.isFinite(untilMs) ? untilMs : Math.max(openFrom, lastEndMs),
+    });
+  return {
+    sessions,
+    openSessionFromMs: openFrom,
+    heldAtEnd: held === null ? null : { reading: held, holdEndsMs: held.at + maxHoldMs },
+  };
 }
 
 /** The whole timeline with its segments, for charts and tests. */
-export function buildTimeline(ordered: readonly RunEvent[], options: TimelineOptions = {}): Timeline {
+export function buildTimeline(
+  ordered: readonly RunEvent[],
+  options: TimelineOptions = {},
+): Timeline {
   const segments: Segment[] = [];
   const end = walkTimeline(ordered, options, (reading, toMs) =>
-    segments.push({ fromMs: reading.at, toMs, phaseId: reading.phaseId, rpm: reading.rpm, throttle: reading.throttle }),
+    segments.push({
+      fromMs: reading.at,
+      toMs,
+      phaseId: reading.phaseId,
+      rpm: reading.rpm,
+      throttle: reading.throttle,
+    }),
   );
   return { ...end, segments };
 }

@@ -1,7 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { firstServiceDue, serviceDue, serviceStatus } from './service-due';
-import { CalendarDateSchema, FIRST_SERVICE_DEFAULT, REGULAR_SERVICE_DEFAULT, ServiceIntervalSchema } from './service.schema';
+import {
+  CalendarDateSchema,
+  FIRST_SERVICE_DEFAULT,
+  REGULAR_SERVICE_DEFAULT,
+  ServiceIntervalSchema,
+} from './service.schema';
 
 // Commissioning values below are illustrative inputs; the intervals are
 // common practice; BoatUS "Long Life – Outboard Maintenance".
@@ -16,22 +21,32 @@ describe('first service due', () => {
 
   it('counts only the limits the interval has', () => {
     expect(serviceDue(commissioning, { hours: 20 })).toEqual({ dueAtHours: 21.5, dueOn: null });
-    expect(serviceDue(commissioning, { months: 12 })).toEqual({ dueAtHours: null, dueOn: '2026-05-10' });
+    expect(serviceDue(commissioning, { months: 12 })).toEqual({
+      dueAtHours: null,
+      dueOn: '2026-05-10',
+    });
   });
 
   it('clamps to the last day of a shorter month (date-fns addMonths)', () => {
-    expect(serviceDue({ hourMeter: 0, date: '2024-01-31' }, { months: 1 }).dueOn).toBe('2024-02-29');
-    expect(serviceDue({ hourMeter: 0, date: '2025-01-31' }, { months: 1 }).dueOn).toBe('2025-02-28');
+    expect(serviceDue({ hourMeter: 0, date: '2024-01-31' }, { months: 1 }).dueOn).toBe(
+      '2024-02-29',
+    );
+    expect(serviceDue({ hourMeter: 0, date: '2025-01-31' }, { months: 1 }).dueOn).toBe(
+      '2025-02-28',
+    );
   });
 
   it('stays on the same calendar day whatever the zone (pure string in and out)', () => {
     fc.assert(
-      fc.property(fc.date({ min: new Date('2000-01-01'), max: new Date('2090-12-31'), noInvalidDate: true }), (d) => {
-        const date = d.toISOString().slice(0, 10);
-        const due = serviceDue({ hourMeter: 0, date }, { months: 12 }).dueOn!;
-        expect(due.slice(5, 7)).toBe(date.slice(5, 7));
-        expect(Number(due.slice(0, 4))).toBe(Number(date.slice(0, 4)) + 1);
-      }),
+      fc.property(
+        fc.date({ min: new Date('2000-01-01'), max: new Date('2090-12-31'), noInvalidDate: true }),
+        (d) => {
+          const date = d.toISOString().slice(0, 10);
+          const due = serviceDue({ hourMeter: 0, date }, { months: 12 }).dueOn!;
+          expect(due.slice(5, 7)).toBe(date.slice(5, 7));
+          expect(Number(due.slice(0, 4))).toBe(Number(date.slice(0, 4)) + 1);
+        },
+      ),
     );
   });
 });
@@ -49,7 +64,10 @@ describe('service status, whichever limit comes first', () => {
   });
 
   it('hours trigger first on a busy month', () => {
-    expect(serviceStatus(due, { hourMeter: 22, date: '2025-05-25' })).toMatchObject({ state: 'overdue', trigger: 'hours' });
+    expect(serviceStatus(due, { hourMeter: 22, date: '2025-05-25' })).toMatchObject({
+      state: 'overdue',
+      trigger: 'hours',
+    });
   });
 
   it('the date triggers first on a quiet month', () => {
@@ -66,12 +84,20 @@ describe('service status, whichever limit comes first', () => {
   });
 
   it('due soon within the reminder window (our choice: 5 h or 7 days)', () => {
-    expect(serviceStatus(due, { hourMeter: 17, date: '2025-05-12' })).toMatchObject({ state: 'due-soon', trigger: 'hours' });
-    expect(serviceStatus(due, { hourMeter: 3, date: '2025-06-05' })).toMatchObject({ state: 'due-soon', trigger: 'date' });
+    expect(serviceStatus(due, { hourMeter: 17, date: '2025-05-12' })).toMatchObject({
+      state: 'due-soon',
+      trigger: 'hours',
+    });
+    expect(serviceStatus(due, { hourMeter: 3, date: '2025-06-05' })).toMatchObject({
+      state: 'due-soon',
+      trigger: 'date',
+    });
   });
 
   it('takes a window from the caller', () => {
-    expect(serviceStatus(due, { hourMeter: 10, date: '2025-05-12' }, { hours: 12, days: 0 }).state).toBe('due-soon');
+    expect(
+      serviceStatus(due, { hourMeter: 10, date: '2025-05-12' }, { hours: 12, days: 0 }).state,
+    ).toBe('due-soon');
   });
 
   it('works with an hours-only interval', () => {
@@ -87,7 +113,9 @@ describe('service status, whichever limit comes first', () => {
 describe('schemas', () => {
   it('an interval needs hours or months', () => {
     const result = ServiceIntervalSchema.safeParse({});
-    expect(result.error?.issues[0].message).toBe('Give the service interval in engine hours, in months, or both.');
+    expect(result.error?.issues[0].message).toBe(
+      'Give the service interval in engine hours, in months, or both.',
+    );
   });
 
   it('rejects zero hours and fractional months, naming the field', () => {
@@ -99,7 +127,9 @@ describe('schemas', () => {
   });
 
   it('dates are YYYY-MM-DD', () => {
-    expect(CalendarDateSchema.safeParse('10/05/2025').error?.issues[0].message).toBe('Enter the date as YYYY-MM-DD.');
+    expect(CalendarDateSchema.safeParse('10/05/2025').error?.issues[0].message).toBe(
+      'Enter the date as YYYY-MM-DD.',
+    );
     expect(CalendarDateSchema.parse('2025-05-10')).toBe('2025-05-10');
   });
 });

@@ -1,5 +1,10 @@
 import { addMonths, differenceInCalendarDays, format, parseISO } from 'date-fns';
-import { FIRST_SERVICE_DEFAULT, type CalendarDate, type ServiceInterval, type ServiceStart } from './service.schema';
+import {
+  FIRST_SERVICE_DEFAULT,
+  type CalendarDate,
+  type ServiceInterval,
+  type ServiceStart,
+} from './service.schema';
 
 export interface ServiceDue {
   /** Hour meter reading at which service falls due, if the interval counts hours. */
@@ -51,15 +56,19 @@ export function serviceStatus(
   window: { hours: number; days: number } = DUE_SOON_WINDOW,
 ): ServiceStatus {
   const hoursLeft = due.dueAtHours === null ? null : due.dueAtHours - now.hourMeter;
-  const daysLeft = due.dueOn === null ? null : differenceInCalendarDays(parseISO(due.dueOn), parseISO(now.date));
+  const daysLeft =
+    due.dueOn === null ? null : differenceInCalendarDays(parseISO(due.dueOn), parseISO(now.date));
   const byHours = hoursLeft === null ? null : stateFrom(hoursLeft, window.hours);
   const byDate = daysLeft === null ? null : stateFrom(daysLeft, window.days);
   let trigger: 'hours' | 'date' = byHours === null ? 'date' : 'hours';
-  if (byHours !== null && byDate !== null && STATE_RANK[byDate] > STATE_RANK[byHours]) trigger = 'date';
+  if (byHours !== null && byDate !== null && STATE_RANK[byDate] > STATE_RANK[byHours])
+    trigger = 'date';
   const state = (trigger === 'hours' ? byHours : byDate) as ServiceState;
   return { ...due, state, trigger, hoursLeft, daysLeft };
 }
 
 /** First service from commissioning; by default 20 h or 1 month (common practice; BoatUS "Long Life – Outboard Maintenance"). */
-export const firstServiceDue = (commissioning: ServiceStart, interval: ServiceInterval = FIRST_SERVICE_DEFAULT): ServiceDue =>
-  serviceDue(commissioning, interval);
+export const firstServiceDue = (
+  commissioning: ServiceStart,
+  interval: ServiceInterval = FIRST_SERVICE_DEFAULT,
+): ServiceDue => serviceDue(commissioning, interval);

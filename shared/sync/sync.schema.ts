@@ -27,12 +27,16 @@ export const RunPatchItemSchema = z.object({
   type: z.literal('run-patch'),
   id: z.uuid({ error: 'The change id (id) must be a UUID made on the device.' }),
   runId: z.uuid({ error: 'The run (runId) must be a run id.' }),
-  at: z.number({ error: 'The change time (at) must be epoch milliseconds.' }).check(z.int(), z.nonnegative()),
+  at: z
+    .number({ error: 'The change time (at) must be epoch milliseconds.' })
+    .check(z.int(), z.nonnegative()),
   currentPhaseId: z.optional(z.string().check(z.trim(), z.minLength(1), z.maxLength(64))),
   notes: z.optional(
     z
       .string({ error: 'The run notes (notes) must be text.' })
-      .check(z.maxLength(4000, { error: 'The run notes (notes) can have at most 4000 characters.' })),
+      .check(
+        z.maxLength(4000, { error: 'The run notes (notes) can have at most 4000 characters.' }),
+      ),
   ),
   submit: z.optional(z.literal(true)),
 });
@@ -45,13 +49,15 @@ export type RunPatchItem = z.infer<typeof RunPatchItemSchema>;
 export const PushBatchSchema = z.object({
   deviceId: z.uuid({ error: 'The device id (deviceId) must be a UUID.' }),
   /** The device's clock when it sent the batch, to spot a device clock far off. */
-  sentAt: z.number({ error: 'The send time (sentAt) must be epoch milliseconds.' }).check(z.int(), z.nonnegative()),
-  items: z
-    .array(z.unknown(), { error: 'The items (items) must be a list.' })
-    .check(
-      z.minLength(1, { error: 'Send at least one item (items).' }),
-      z.maxLength(MAX_PUSH_ITEMS, { error: `Send at most ${MAX_PUSH_ITEMS} items (items) per batch.` }),
-    ),
+  sentAt: z
+    .number({ error: 'The send time (sentAt) must be epoch milliseconds.' })
+    .check(z.int(), z.nonnegative()),
+  items: z.array(z.unknown(), { error: 'The items (items) must be a list.' }).check(
+    z.minLength(1, { error: 'Send at least one item (items).' }),
+    z.maxLength(MAX_PUSH_ITEMS, {
+      error: `Send at most ${MAX_PUSH_ITEMS} items (items) per batch.`,
+    }),
+  ),
 });
 export type PushBatch = z.infer<typeof PushBatchSchema>;
 
@@ -76,9 +82,20 @@ export const PushResponseSchema = z.object({
 export type PushResponse = z.infer<typeof PushResponseSchema>;
 
 export const PullQuerySchema = z.object({
-  cursor: z._default(z.coerce.number({ error: 'The cursor (cursor) must be a whole number.' }).check(z.int(), z.nonnegative()), 0),
+  cursor: z._default(
+    z.coerce
+      .number({ error: 'The cursor (cursor) must be a whole number.' })
+      .check(z.int(), z.nonnegative()),
+    0,
+  ),
   limit: z._default(
-    z.coerce.number().check(z.int(), z.minimum(1), z.maximum(5000, { error: 'Ask for at most 5000 events (limit) at a time.' })),
+    z.coerce
+      .number()
+      .check(
+        z.int(),
+        z.minimum(1),
+        z.maximum(5000, { error: 'Ask for at most 5000 events (limit) at a time.' }),
+      ),
     2000,
   ),
 });
@@ -87,4 +104,5 @@ export const PullQuerySchema = z.object({
 export const CLOCK_SKEW_FLAG_MS = 24 * 60 * 60 * 1000;
 
 /** Id of a push item: the event's own id, or the patch id. */
-export const pushItemId = (item: PushItem): string => (item.type === 'event' ? item.event.id : item.id);
+export const pushItemId = (item: PushItem): string =>
+  item.type === 'event' ? item.event.id : item.id;

@@ -49,7 +49,9 @@ function expectClose(actual: number, expected: number) {
 const viaMathjs = (value: number, from: keyof typeof MATHJS_NAME, to: keyof typeof MATHJS_NAME) =>
   math.unit(value, MATHJS_NAME[from]).toNumber(MATHJS_NAME[to]);
 
-const sensibleValue = fc.double({ min: -1e6, max: 1e6, noNaN: true }).filter((v) => Math.abs(v) > 1e-3);
+const sensibleValue = fc
+  .double({ min: -1e6, max: 1e6, noNaN: true })
+  .filter((v) => Math.abs(v) > 1e-3);
 
 describe('exact definitions', () => {
   it('are the defined values', () => {
@@ -73,15 +75,27 @@ describe('conversions agree with mathjs', () => {
     units.flatMap((from) => units.map((to) => [from, to] as const));
 
   it.each(pairs(SPEED_UNITS))('speed %s → %s', (from, to) => {
-    fc.assert(fc.property(sensibleValue, (v) => expectClose(convertSpeed(v, from, to), viaMathjs(v, from, to))));
+    fc.assert(
+      fc.property(sensibleValue, (v) =>
+        expectClose(convertSpeed(v, from, to), viaMathjs(v, from, to)),
+      ),
+    );
   });
 
   it.each(pairs(VOLUME_UNITS))('volume %s → %s', (from, to) => {
-    fc.assert(fc.property(sensibleValue, (v) => expectClose(convertVolume(v, from, to), viaMathjs(v, from, to))));
+    fc.assert(
+      fc.property(sensibleValue, (v) =>
+        expectClose(convertVolume(v, from, to), viaMathjs(v, from, to)),
+      ),
+    );
   });
 
   it.each(pairs(POWER_UNITS))('power %s → %s', (from, to) => {
-    fc.assert(fc.property(sensibleValue, (v) => expectClose(convertPower(v, from, to), viaMathjs(v, from, to))));
+    fc.assert(
+      fc.property(sensibleValue, (v) =>
+        expectClose(convertPower(v, from, to), viaMathjs(v, from, to)),
+      ),
+    );
   });
 
   it.each(pairs(TEMPERATURE_UNITS))('temperature %s → %s', (from, to) => {
@@ -89,7 +103,8 @@ describe('conversions agree with mathjs', () => {
       fc.property(fc.double({ min: -200, max: 1000, noNaN: true }), (v) => {
         const expected = viaMathjs(v, from, to);
         // Near zero a relative tolerance means nothing; compare absolutely there.
-        if (Math.abs(expected) < 1) expect(convertTemperature(v, from, to)).toBeCloseTo(expected, 6);
+        if (Math.abs(expected) < 1)
+          expect(convertTemperature(v, from, to)).toBeCloseTo(expected, 6);
         else expectClose(convertTemperature(v, from, to), expected);
       }),
     );
@@ -97,8 +112,11 @@ describe('conversions agree with mathjs', () => {
 
   it('round trips return the starting value', () => {
     fc.assert(
-      fc.property(sensibleValue, fc.constantFrom(...SPEED_UNITS), fc.constantFrom(...SPEED_UNITS), (v, a, b) =>
-        expectClose(convertSpeed(convertSpeed(v, a, b), b, a), v),
+      fc.property(
+        sensibleValue,
+        fc.constantFrom(...SPEED_UNITS),
+        fc.constantFrom(...SPEED_UNITS),
+        (v, a, b) => expectClose(convertSpeed(convertSpeed(v, a, b), b, a), v),
       ),
     );
   });
@@ -124,6 +142,11 @@ describe('unit names', () => {
   });
 
   it('defaults preferences to kn, L, kW and °C', () => {
-    expect(UnitPreferencesSchema.parse({})).toEqual({ speed: 'kn', volume: 'L', power: 'kW', temperature: '°C' });
+    expect(UnitPreferencesSchema.parse({})).toEqual({
+      speed: 'kn',
+      volume: 'L',
+      power: 'kW',
+      temperature: '°C',
+    });
   });
 });

@@ -34,7 +34,11 @@ export const convertPower = (value: number, from: PowerUnit, to: PowerUnit): num
   scale(POWER_IN_W, value, from, to);
 
 /** °F = °C × 9/5 + 32 (definition of the Fahrenheit scale; NIST SP 811 (2008), Appendix B). */
-export function convertTemperature(value: number, from: TemperatureUnit, to: TemperatureUnit): number {
+export function convertTemperature(
+  value: number,
+  from: TemperatureUnit,
+  to: TemperatureUnit,
+): number {
   if (from === to) return value;
   return from === '°C' ? (value * 9) / 5 + 32 : ((value - 32) * 5) / 9;
 }

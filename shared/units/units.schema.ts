@@ -11,7 +11,9 @@ const unknownUnit = (what: string, allowed: readonly string[]) => (issue: { inpu
 export const SpeedUnitSchema = z.enum(SPEED_UNITS, { error: unknownUnit('speed', SPEED_UNITS) });
 export type SpeedUnit = z.infer<typeof SpeedUnitSchema>;
 
-export const VolumeUnitSchema = z.enum(VOLUME_UNITS, { error: unknownUnit('volume', VOLUME_UNITS) });
+export const VolumeUnitSchema = z.enum(VOLUME_UNITS, {
+  error: unknownUnit('volume', VOLUME_UNITS),
+});
 export type VolumeUnit = z.infer<typeof VolumeUnitSchema>;
 
 export const PowerUnitSchema = z.enum(POWER_UNITS, { error: unknownUnit('power', POWER_UNITS) });

@@ -11,6 +11,12 @@ export function createAppQueryClient(): QueryClient {
   return queryClient;
 }
 
-export function AppProviders({ queryClient, children }: { queryClient: QueryClient; children: ReactNode }) {
+export function AppProviders({
+  queryClient,
+  children,
+}: {
+  queryClient: QueryClient;
+  children: ReactNode;
+}) {
   return <QueryClientProvider client={queryClient}>{children}</QueryClientProvider>;
 }

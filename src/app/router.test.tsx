@@ -27,16 +27,31 @@ const vessel: VesselSummary = {
   skippers: [{ id: 'user-skipper', name: 'Ada Harbour' }],
   engines: [
     {
-      id: 'engine-1', position: 'single', maker: 'Acme', model: 'F115', serialNumber: 'SN-0042',
-      ratedPowerKw: 85, fuel: 'petrol', cycle: 'four-stroke', ratedRpmMin: 5000, ratedRpmMax: 6000,
-      hourMeterAtCommissioning: 0.4, commissionedOn: '2026-05-12',
+      id: 'engine-1',
+      position: 'single',
+      maker: 'Acme',
+      model: 'F115',
+      serialNumber: 'SN-0042',
+      ratedPowerKw: 85,
+      fuel: 'petrol',
+      cycle: 'four-stroke',
+      ratedRpmMin: 5000,
+      ratedRpmMax: 6000,
+      hourMeterAtCommissioning: 0.4,
+      commissionedOn: '2026-05-12',
     },
   ],
 };
 
-function renderApp(at: string, me: SessionUser | null, extra: Parameters<typeof stubFetch>[0] = {}) {
+function renderApp(
+  at: string,
+  me: SessionUser | null,
+  extra: Parameters<typeof stubFetch>[0] = {},
+) {
   const fetch = stubFetch({
-    'GET /api/auth/me': me ? { status: 200, body: { user: me } } : problem(401, 'Unauthorized', 'Sign in first.'),
+    'GET /api/auth/me': me
+      ? { status: 200, body: { user: me } }
+      : problem(401, 'Unauthorized', 'Sign in first.'),
     'GET /api/vessels': { status: 200, body: { vessels: [vessel] } },
     ...extra,
   });
@@ -47,7 +62,9 @@ function renderApp(at: string, me: SessionUser | null, extra: Parameters<typeof 
 describe('app routes', () => {
   it('sends a visitor who is not signed in to the sign-in page', async () => {
     const { router } = renderApp('/', null);
-    expect(await screen.findByRole('heading', { level: 1, name: 'Sign in to Ringseat' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Sign in to Ringseat' }),
+    ).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/sign-in');
   });
 
@@ -55,7 +72,10 @@ describe('app routes', () => {
     const manager = testUser('manager');
     const { router } = renderApp('/team', null, {
       'POST /api/auth/sign-in': { status: 200, body: { user: manager } },
-      'GET /api/users': { status: 200, body: { users: [{ ...manager, createdAt: '2026-01-05T10:00:00Z' }], invites: [] } },
+      'GET /api/users': {
+        status: 200,
+        body: { users: [{ ...manager, createdAt: '2026-01-05T10:00:00Z' }], invites: [] },
+      },
     });
     const user = userEvent.setup();
 
@@ -69,10 +89,12 @@ describe('app routes', () => {
     expect(await screen.findByText('No invites are waiting.')).toBeInTheDocument();
   });
 
-  it("shows a skipper their vessels, engines and the running caution", async () => {
+  it('shows a skipper their vessels, engines and the running caution', async () => {
     renderApp('/', testUser('skipper'));
 
-    expect(await screen.findByRole('heading', { level: 1, name: 'Your vessels' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Your vessels' }),
+    ).toBeInTheDocument();
     const card = (await screen.findByRole('heading', { name: 'Kittiwake' })).closest('section')!;
     expect(within(card).getByText('5000–6000 RPM')).toHaveClass('figures');
     expect(within(card).getByText('SN-0042')).toBeInTheDocument();
@@ -80,13 +102,17 @@ describe('app routes', () => {
     const caution = screen.getByRole('note', { name: /caution/i });
     expect(caution).toHaveTextContent(/kill-switch lanyard/i);
     expect(caution).toHaveTextContent(/carbon monoxide/i);
-    expect(caution).toHaveTextContent(/maker’s manual, local rules and your licensed technician come first/i);
+    expect(caution).toHaveTextContent(
+      /maker’s manual, local rules and your licensed technician come first/i,
+    );
   });
 
   it('gives workshop staff the workshop overview', async () => {
     renderApp('/', testUser('technician'));
     expect(await screen.findByRole('heading', { level: 1, name: 'Workshop' })).toBeInTheDocument();
-    expect(await screen.findByRole('table', { name: 'Vessels and engines of the workshop' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('table', { name: 'Vessels and engines of the workshop' }),
+    ).toBeInTheDocument();
   });
 
   it('tells a technician that Team is for managers', async () => {
@@ -96,21 +122,29 @@ describe('app routes', () => {
 
   it('answers an unknown address with a page inside the app and a way back', async () => {
     renderApp('/harbour/nowhere', testUser('skipper'));
-    expect(await screen.findByRole('heading', { level: 1, name: 'Page not found' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Page not found' }),
+    ).toBeInTheDocument();
     expect(screen.getByText('/harbour/nowhere')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Go to your vessels' })).toHaveAttribute('href', '/');
     expect(screen.getByRole('button', { name: 'Sign out' })).toBeInTheDocument();
   });
 
   it('shows an error with a way back when the session check fails', async () => {
-    renderApp('/', null, { 'GET /api/auth/me': problem(500, 'Internal Server Error', 'The database is not answering.') });
-    expect(await screen.findByRole('heading', { name: 'The server could not answer' })).toBeInTheDocument();
+    renderApp('/', null, {
+      'GET /api/auth/me': problem(500, 'Internal Server Error', 'The database is not answering.'),
+    });
+    expect(
+      await screen.findByRole('heading', { name: 'The server could not answer' }),
+    ).toBeInTheDocument();
     expect(screen.getByText('The database is not answering.')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Back to the start' })).toBeInTheDocument();
   });
 
   it('goes to sign-in when a request finds the session has expired', async () => {
-    const { router } = renderApp('/', testUser('skipper'), { 'GET /api/vessels': problem(401, 'Unauthorized', 'Sign in again.') });
+    const { router } = renderApp('/', testUser('skipper'), {
+      'GET /api/vessels': problem(401, 'Unauthorized', 'Sign in again.'),
+    });
     expect(await screen.findByRole('heading', { name: 'Sign in to Ringseat' })).toBeInTheDocument();
     expect(router.state.location.pathname).toBe('/sign-in');
   });

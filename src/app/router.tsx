@@ -1,4 +1,11 @@
-import { createBrowserRouter, Outlet, redirect, ScrollRestoration, type LoaderFunctionArgs, type RouteObject } from 'react-router-dom';
+import {
+  createBrowserRouter,
+  Outlet,
+  redirect,
+  ScrollRestoration,
+  type LoaderFunctionArgs,
+  type RouteObject,
+} from 'react-router-dom';
 import type { QueryClient } from '@tanstack/react-query';
 import { authQueries } from '../features/auth/api';
 import { teamQueries } from '../features/team/api';
@@ -20,21 +27,25 @@ function RootLayout() {
 }
 
 /** Signed-in routes wait for the session on arrival, so nobody sees a page they may not open. */
-const requireSession = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const user = await queryClient.ensureQueryData(authQueries.me());
-  if (!user) {
-    const url = new URL(request.url);
-    throw redirect(signInPath(url.pathname + url.search));
-  }
-  return null;
-};
+const requireSession =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await queryClient.ensureQueryData(authQueries.me());
+    if (!user) {
+      const url = new URL(request.url);
+      throw redirect(signInPath(url.pathname + url.search));
+    }
+    return null;
+  };
 
 /** Someone already signed in has no business on the sign-in page. */
-const skipSignInWhenSignedIn = (queryClient: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const user = await queryClient.ensureQueryData(authQueries.me()).catch(() => null);
-  if (user) throw redirect(safeNextPath(new URL(request.url).searchParams.get('next')));
-  return null;
-};
+const skipSignInWhenSignedIn =
+  (queryClient: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const user = await queryClient.ensureQueryData(authQueries.me()).catch(() => null);
+    if (user) throw redirect(safeNextPath(new URL(request.url).searchParams.get('next')));
+    return null;
+  };
 
 /** Starts a page's data while its code loads; the page's own query picks the result up. */
 const prefetch = (start: () => void) => () => {
@@ -50,7 +61,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
       errorElement,
       hydrateFallbackElement: <Splash />,
       children: [
-        { path: 'sign-in', loader: skipSignInWhenSignedIn(queryClient), lazy: () => import('./routes/sign-in'), errorElement },
+        {
+          path: 'sign-in',
+          loader: skipSignInWhenSignedIn(queryClient),
+          lazy: () => import('./routes/sign-in'),
+          errorElement,
+        },
         { path: 'invite/:token', lazy: () => import('./routes/accept-invite'), errorElement },
         {
           id: 'session',
@@ -79,7 +95,11 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
             { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
             { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
             { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },
-            { path: 'engines/:id/checklist', lazy: () => import('./routes/engine-checklist'), errorElement },
+            {
+              path: 'engines/:id/checklist',
+              lazy: () => import('./routes/engine-checklist'),
+              errorElement,
+            },
             { path: 'runs', lazy: () => import('./routes/runs'), errorElement },
             { path: 'runs/:id', lazy: () => import('./routes/run-review'), errorElement },
             { path: 'programs', lazy: () => import('./routes/programs'), errorElement },
@@ -92,4 +112,5 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
   ];
 }
 
-export const createAppRouter = (queryClient: QueryClient) => createBrowserRouter(createRoutes(queryClient));
+export const createAppRouter = (queryClient: QueryClient) =>
+  createBrowserRouter(createRoutes(queryClient));

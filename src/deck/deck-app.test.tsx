@@ -28,7 +28,11 @@ describe('the deck app', () => {
     expect(await screen.findByRole('heading', { name: 'On deck' })).toBeInTheDocument();
     expect(screen.getByText(/Noor Skeg/)).toBeInTheDocument();
     const nav = screen.getByRole('navigation', { name: 'Main' });
-    expect(within(nav).getAllByRole('link').map((l) => l.textContent)).toEqual(['Vessels', 'Deck']);
+    expect(
+      within(nav)
+        .getAllByRole('link')
+        .map((l) => l.textContent),
+    ).toEqual(['Vessels', 'Deck']);
     expect(within(nav).getByRole('link', { name: 'Deck' })).toHaveAttribute('aria-current', 'page');
   });
 
@@ -55,16 +59,21 @@ describe('the deck app', () => {
     const first = render(<DeckApp />);
     expect(await screen.findByRole('heading', { name: 'On deck' })).toBeInTheDocument();
     first.unmount();
-    vi.stubGlobal('fetch', vi.fn(async () => {
-      throw new TypeError('Failed to fetch');
-    }));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        throw new TypeError('Failed to fetch');
+      }),
+    );
     render(<DeckApp />);
     expect(await screen.findByRole('heading', { name: 'On deck' })).toBeInTheDocument();
     expect(screen.getByText(/Noor Skeg/)).toBeInTheDocument();
   });
 
   it('says what is wrong when the server fails and nobody is remembered on the device', async () => {
-    stubFetch({ 'GET /api/auth/me': problem(503, 'Service unavailable', 'The database is being moved.') });
+    stubFetch({
+      'GET /api/auth/me': problem(503, 'Service unavailable', 'The database is being moved.'),
+    });
     render(<DeckApp />);
     expect(await screen.findByRole('alert')).toHaveTextContent('The server could not answer');
     expect(screen.getByRole('button', { name: 'Try again' })).toBeInTheDocument();

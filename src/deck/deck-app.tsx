@@ -10,7 +10,10 @@ import { usePathname } from '../features/deck/deck-navigation';
 import { DeckHeader } from './deck-header';
 import { DeckHome, deckPageFor, DeckVesselPage } from './deck-pages';
 
-type Session = { state: 'checking' } | { state: 'signed-in'; user: SessionUser } | { state: 'failed'; error: unknown };
+type Session =
+  | { state: 'checking' }
+  | { state: 'signed-in'; user: SessionUser }
+  | { state: 'failed'; error: unknown };
 
 /**
  * Who is signed in: the server's answer, or with no network the user it last confirmed on this
@@ -34,11 +37,24 @@ function useDeckSession(): Session {
 
 function Problem({ error }: { error: unknown }) {
   const { title, detail } = describeError(error);
-  return <ProblemPanel title={title} detail={detail} back={<a href="/" className={buttonClass('secondary')}>Back to the start</a>} />;
+  return (
+    <ProblemPanel
+      title={title}
+      detail={detail}
+      back={
+        <a href="/" className={buttonClass('secondary')}>
+          Back to the start
+        </a>
+      }
+    />
+  );
 }
 
 /** A page that throws shows what happened instead of a blank screen. */
-class PageBoundary extends Component<{ children: ReactNode; resetKey: string }, { error: unknown }> {
+class PageBoundary extends Component<
+  { children: ReactNode; resetKey: string },
+  { error: unknown }
+> {
   state: { error: unknown } = { error: null };
 
   static getDerivedStateFromError(error: unknown) {
@@ -46,7 +62,8 @@ class PageBoundary extends Component<{ children: ReactNode; resetKey: string }, 
   }
 
   componentDidUpdate(previous: { resetKey: string }) {
-    if (previous.resetKey !== this.props.resetKey && this.state.error !== null) this.setState({ error: null });
+    if (previous.resetKey !== this.props.resetKey && this.state.error !== null)
+      this.setState({ error: null });
   }
 
   render() {
@@ -70,7 +87,11 @@ export function DeckApp() {
   return (
     <PageFrame header={<DeckHeader user={session.user} />}>
       <PageBoundary resetKey={pathname}>
-        {page.page === 'home' ? <DeckHome /> : <DeckVesselPage vesselId={page.vesselId} user={session.user} />}
+        {page.page === 'home' ? (
+          <DeckHome />
+        ) : (
+          <DeckVesselPage vesselId={page.vesselId} user={session.user} />
+        )}
       </PageBoundary>
     </PageFrame>
   );

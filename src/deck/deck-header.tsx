@@ -10,7 +10,10 @@ import { SiteHeader } from '../app/shell/site-header';
 
 /** The same header and navigation as the workshop app; links outside the deck load that app. */
 export function DeckHeader({ user }: { user: SessionUser }) {
-  const [signOut, setSignOut] = useState<{ pending: boolean; error: string | null }>({ pending: false, error: null });
+  const [signOut, setSignOut] = useState<{ pending: boolean; error: string | null }>({
+    pending: false,
+    error: null,
+  });
   const onSignOut = async () => {
     setSignOut({ pending: true, error: null });
     try {
@@ -22,9 +25,14 @@ export function DeckHeader({ user }: { user: SessionUser }) {
     }
   };
   return (
-    <SiteHeader user={user}
-      home={(className, content) => <a href="/" className={className}>{content}</a>}
-      nav={(
+    <SiteHeader
+      user={user}
+      home={(className, content) => (
+        <a href="/" className={className}>
+          {content}
+        </a>
+      )}
+      nav={
         <nav aria-label="Main" className={navBarClass}>
           <ul className="flex sm:gap-1">
             {navItemsFor(user.role).map(({ label, to, icon }) => {
@@ -32,7 +40,11 @@ export function DeckHeader({ user }: { user: SessionUser }) {
               const here = to === '/deck';
               return (
                 <li key={to} className="flex-1 sm:flex-none">
-                  <DeckLink to={to} className={navLinkClass(here)} aria-current={here ? 'page' : undefined}>
+                  <DeckLink
+                    to={to}
+                    className={navLinkClass(here)}
+                    aria-current={here ? 'page' : undefined}
+                  >
                     <Icon />
                     <span>{label}</span>
                   </DeckLink>
@@ -41,7 +53,8 @@ export function DeckHeader({ user }: { user: SessionUser }) {
             })}
           </ul>
         </nav>
-      )}
-      signOut={{ ...signOut, onSignOut: () => void onSignOut() }} />
+      }
+      signOut={{ ...signOut, onSignOut: () => void onSignOut() }}
+    />
   );
 }

@@ -8,7 +8,10 @@ export function DeckHome() {
     <div className="flex flex-col gap-4">
       <title>On deck · Ringseat</title>
       <h1 className="text-3xl font-bold">On deck</h1>
-      <p>Choose the boat you are running. Everything here is stored on this device and works with no signal.</p>
+      <p>
+        Choose the boat you are running. Everything here is stored on this device and works with no
+        signal.
+      </p>
       <VesselPicker />
     </div>
   );
@@ -20,7 +23,9 @@ export function DeckVesselPage({ vesselId, user }: { vesselId: string; user: Ses
 }
 
 /** Which deck page a path shows; null for an address the deck does not have. */
-export function deckPageFor(pathname: string): { page: 'home' } | { page: 'vessel'; vesselId: string } | null {
+export function deckPageFor(
+  pathname: string,
+): { page: 'home' } | { page: 'vessel'; vesselId: string } | null {
   const parts = pathname.split('/').filter(Boolean);
   if (parts[0] !== 'deck' || parts.length > 2) return null;
   if (parts.length === 1) return { page: 'home' };

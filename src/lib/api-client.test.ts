@@ -16,7 +16,11 @@ describe('api client', () => {
     await expect(api.post('/api/things', { name: 'Kittiwake' })).resolves.toEqual({ ok: true });
     const [path, init] = fetchMock.mock.calls[0] as unknown as [string, RequestInit];
     expect(path).toBe('/api/things');
-    expect(init).toMatchObject({ method: 'POST', credentials: 'same-origin', body: '{"name":"Kittiwake"}' });
+    expect(init).toMatchObject({
+      method: 'POST',
+      credentials: 'same-origin',
+      body: '{"name":"Kittiwake"}',
+    });
     expect(init.headers).toMatchObject({ 'Content-Type': 'application/json' });
   });
 
@@ -26,21 +30,39 @@ describe('api client', () => {
   });
 
   it('throws the problem details, field errors included', async () => {
-    const body = { type: 'about:blank', title: 'Bad request', status: 400, detail: 'Check the fields.', errors: [{ field: 'email', message: 'Enter an e-mail address.' }] };
+    const body = {
+      type: 'about:blank',
+      title: 'Bad request',
+      status: 400,
+      detail: 'Check the fields.',
+      errors: [{ field: 'email', message: 'Enter an e-mail address.' }],
+    };
     vi.stubGlobal('fetch', reply(400, JSON.stringify(body), 'application/problem+json'));
 
     const error = await api.get('/api/x').catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiError);
-    expect(error).toMatchObject({ status: 400, message: 'Check the fields.', fieldErrors: body.errors });
+    expect(error).toMatchObject({
+      status: 400,
+      message: 'Check the fields.',
+      fieldErrors: body.errors,
+    });
   });
 
   it('describes an answer that is not problem JSON by its status', async () => {
     vi.stubGlobal('fetch', reply(502, '<html>Bad gateway</html>', 'text/html'));
-    await expect(api.get('/api/x')).rejects.toMatchObject({ status: 502, message: 'The server answered with status 502.' });
+    await expect(api.get('/api/x')).rejects.toMatchObject({
+      status: 502,
+      message: 'The server answered with status 502.',
+    });
   });
 
   it('reports an unreachable server as a network error', async () => {
-    vi.stubGlobal('fetch', vi.fn(async () => { throw new TypeError('Failed to fetch'); }));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => {
+        throw new TypeError('Failed to fetch');
+      }),
+    );
     const error = (await api.get('/api/x').catch((e: unknown) => e)) as ApiError;
     expect(error.isNetworkError).toBe(true);
     expect(error.message).toMatch(/could not reach the server/i);

@@ -93,7 +93,8 @@ export const api = {
   patch: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'PATCH', body }),
   delete: <T>(path: string) => apiRequest<T>(path, { method: 'DELETE' }),
   /** multipart/form-data, for file uploads. */
-  postForm: <T>(path: string, form: FormData) => apiRequest<T>(path, { method: 'POST', body: form }),
+  postForm: <T>(path: string, form: FormData) =>
+    apiRequest<T>(path, { method: 'POST', body: form }),
 };
 
 /** A message fit to show a person, for any error a request can end with. */

@@ -10,10 +10,24 @@ afterEach(async () => {
   await database.delete();
 });
 
-const user = (id: string): SessionUser => ({ id, email: `${id}@example.com`, name: id, role: 'skipper', workshopId: 'w1', workshopName: 'Test Works' });
+const user = (id: string): SessionUser => ({
+  id,
+  email: `${id}@example.com`,
+  name: id,
+  role: 'skipper',
+  workshopId: 'w1',
+  workshopName: 'Test Works',
+});
 
 const event = (id: string, sync: EventRecord['sync']): EventRecord => ({
-  id, runId: 'run-1', engineId: 'engine-1', at: 1, kind: 'session-start', origin: 'device', sync, createdAt: 1,
+  id,
+  runId: 'run-1',
+  engineId: 'engine-1',
+  at: 1,
+  kind: 'session-start',
+  origin: 'device',
+  sync,
+  createdAt: 1,
   event: { kind: 'session-start', id, at: 1, engineId: 'engine-1' },
 });
 
@@ -21,8 +35,20 @@ async function fill() {
   await database.vessels.put({ id: 'v1' } as never);
   await database.runs.put({ id: 'run-1' } as never);
   await database.events.bulkPut([event('e-sent', 'synced'), event('e-waiting', 'pending')]);
-  await database.outings.put({ id: 'o1', vesselId: 'v1', runIds: ['run-1'], startedAt: 1, pausedAt: null, endedAt: null, cautionsReadAt: 1, createdAt: 1 });
-  await database.meta.bulkPut([{ key: 'deviceId', value: 'device-1' }, { key: 'pullCursor', value: 42 }]);
+  await database.outings.put({
+    id: 'o1',
+    vesselId: 'v1',
+    runIds: ['run-1'],
+    startedAt: 1,
+    pausedAt: null,
+    endedAt: null,
+    cautionsReadAt: 1,
+    createdAt: 1,
+  });
+  await database.meta.bulkPut([
+    { key: 'deviceId', value: 'device-1' },
+    { key: 'pullCursor', value: 42 },
+  ]);
 }
 
 describe('who is signed in on this device', () => {
@@ -53,7 +79,7 @@ describe('who is signed in on this device', () => {
     expect(await database.meta.get('outboxOwner')).toBeUndefined();
   });
 
-  it('someone else signing in never sees or sends the previous user\'s records', async () => {
+  it("someone else signing in never sees or sends the previous user's records", async () => {
     await rememberUser(user('sunniva'), database);
     await fill();
     await clearUserData(database);

@@ -20,7 +20,15 @@ export interface RunRecord {
   id: string;
   state: RunState;
   vessel: { id: string; name: string };
-  engine: { id: string; position: string; maker: string; model: string; serialNumber: string; ratedRpmMin: number; ratedRpmMax: number };
+  engine: {
+    id: string;
+    position: string;
+    maker: string;
+    model: string;
+    serialNumber: string;
+    ratedRpmMin: number;
+    ratedRpmMax: number;
+  };
   programId: string;
   programName: string;
   phaseCount: number;
@@ -136,8 +144,11 @@ export async function cachedUser(database: RingseatDb = db): Promise<SessionUser
  * previous user's copies and unsent records go first: nobody sees, or sends, another person's log.
  */
 export async function rememberUser(user: SessionUser, database: RingseatDb = db): Promise<void> {
-  const owner = (await cachedUser(database))?.id ?? ((await database.meta.get('outboxOwner'))?.value as string | undefined);
-  if (owner !== undefined && owner !== user.id) await clearUserData(database, { keepOutbox: false });
+  const owner =
+    (await cachedUser(database))?.id ??
+    ((await database.meta.get('outboxOwner'))?.value as string | undefined);
+  if (owner !== undefined && owner !== user.id)
+    await clearUserData(database, { keepOutbox: false });
   await database.transaction('rw', database.meta, async () => {
     await database.meta.delete('outboxOwner');
     await database.meta.put({ key: 'me', value: user });
@@ -149,21 +160,45 @@ export async function rememberUser(user: SessionUser, database: RingseatDb = db)
  * was logged here and not yet sent stays (with its outings), so a session that expired at sea
  * loses nothing: it goes out when the same person signs in again.
  */
-export async function clearUserData(database: RingseatDb = db, { keepOutbox = true } = {}): Promise<void> {
-  const tables = [database.vessels, database.runs, database.events, database.runPatches, database.photos, database.meta, database.outings];
+export async function clearUserData(
+  database: RingseatDb = db,
+  { keepOutbox = true } = {},
+): Promise<void> {
+  const tables = [
+    database.vessels,
+    database.runs,
+    database.events,
+    database.runPatches,
+    database.photos,
+    database.meta,
+    database.outings,
+  ];
   await database.transaction('rw', tables, async () => {
     const owner = (await cachedUser(database))?.id;
     await Promise.all([database.vessels.clear(), database.runs.clear()]);
     const outbox = [database.events, database.runPatches, database.photos] as const;
     if (keepOutbox) {
-      for (const table of outbox) await (table as Table<{ sync: SyncState }, string>).where('sync').notEqual('pending').delete();
+      for (const table of outbox)
+        await (table as Table<{ sync: SyncState }, string>)
+          .where('sync')
+          .notEqual('pending')
+          .delete();
     } else {
       await Promise.all([...outbox.map((table) => table.clear()), database.outings.clear()]);
     }
     const keys = await database.meta.toCollection().primaryKeys();
     // The device id names this device, not its user: it stays.
-    await database.meta.bulkDelete(keys.filter((key) => key !== 'deviceId' && !(keepOutbox && key === 'outboxOwner')));
-    const counts = keepOutbox ? await Promise.all(outbox.map((table) => (table as Table<{ sync: SyncState }, string>).where('sync').equals('pending').count())) : [];
-    if (owner !== undefined && counts.some((n) => n > 0)) await database.meta.put({ key: 'outboxOwner', value: owner });
+    await database.meta.bulkDelete(
+      keys.filter((key) => key !== 'deviceId' && !(keepOutbox && key === 'outboxOwner')),
+    );
+    const counts = keepOutbox
+      ? await Promise.all(
+          outbox.map((table) =>
+            (table as Table<{ sync: SyncState }, string>).where('sync').equals('pending').count(),
+          ),
+        )
+      : [];
+    if (owner !== undefined && counts.some((n) => n > 0))
+      await database.meta.put({ key: 'outboxOwner', value: owner });
   });
 }

@@ -21,7 +21,8 @@ export function readDisplayMode(): DisplayMode {
 }
 
 const prefersDark = () =>
-  typeof window.matchMedia === 'function' && window.matchMedia('(prefers-color-scheme: dark)').matches;
+  typeof window.matchMedia === 'function' &&
+  window.matchMedia('(prefers-color-scheme: dark)').matches;
 
 export function applyDisplayMode(mode: DisplayMode): void {
   const root = document.documentElement;

@@ -33,14 +33,18 @@ describe('useDeviceWrite', () => {
 
   it('keeps the failure for the screen, clears it on the next write, and rejects mutateAsync', async () => {
     let fail = true;
-    const { result } = renderHook(() => useDeviceWrite(async (_: number) => {
-      if (fail) throw new Error('The device database is full.');
-      return 'ok';
-    }));
+    const { result } = renderHook(() =>
+      useDeviceWrite(async (_: number) => {
+        if (fail) throw new Error('The device database is full.');
+        return 'ok';
+      }),
+    );
     act(() => result.current.mutate(1));
     await waitFor(() => expect(result.current.error?.message).toBe('The device database is full.'));
     expect(result.current.isPending).toBe(false);
-    await expect(act(() => result.current.mutateAsync(2))).rejects.toThrow('The device database is full.');
+    await expect(act(() => result.current.mutateAsync(2))).rejects.toThrow(
+      'The device database is full.',
+    );
     fail = false;
     await act(async () => {
       expect(await result.current.mutateAsync(3)).toBe('ok');

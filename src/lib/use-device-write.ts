@@ -15,7 +15,10 @@ export interface DeviceWrite<A, R> {
  * network modes have nothing to do. Several writes may overlap; pending lasts until all end.
  */
 export function useDeviceWrite<A, R>(write: (args: A) => Promise<R>): DeviceWrite<A, R> {
-  const [state, setState] = useState<{ running: number; error: Error | null }>({ running: 0, error: null });
+  const [state, setState] = useState<{ running: number; error: Error | null }>({
+    running: 0,
+    error: null,
+  });
   // The newest write function, for callbacks that keep one identity across renders.
   const latest = useRef(write);
   useLayoutEffect(() => {
@@ -33,6 +36,9 @@ export function useDeviceWrite<A, R>(write: (args: A) => Promise<R>): DeviceWrit
       throw error;
     }
   }, []);
-  const mutate = useCallback((args: A) => void mutateAsync(args).catch(() => undefined), [mutateAsync]);
+  const mutate = useCallback(
+    (args: A) => void mutateAsync(args).catch(() => undefined),
+    [mutateAsync],
+  );
   return { mutate, mutateAsync, isPending: state.running > 0, error: state.error };
 }

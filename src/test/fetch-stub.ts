@@ -9,7 +9,12 @@ export interface StubbedRequest {
 type Reply = { status: number; body?: unknown };
 type Handler = (request: StubbedRequest) => Reply;
 
-export const problem = (status: number, title: string, detail?: string, errors?: Array<{ field: string; message: string }>) => ({
+export const problem = (
+  status: number,
+  title: string,
+  detail?: string,
+  errors?: Array<{ field: string; message: string }>,
+) => ({
   status,
   body: { type: 'about:blank', title, status, detail, errors },
 });
@@ -23,7 +28,11 @@ export function stubFetch(routes: Record<string, Handler | Reply>) {
   const fetchMock = vi.fn(async (input: RequestInfo | URL, init: RequestInit = {}) => {
     const url = new URL(String(input), 'http://localhost');
     const method = (init.method ?? 'GET').toUpperCase();
-    const request: StubbedRequest = { method, path: url.pathname, body: init.body ? JSON.parse(String(init.body)) : undefined };
+    const request: StubbedRequest = {
+      method,
+      path: url.pathname,
+      body: init.body ? JSON.parse(String(init.body)) : undefined,
+    };
     calls.push(request);
     const route = routes[`${method} ${url.pathname}`];
     if (!route) throw new Error(`Unexpected request in test: ${method} ${url.pathname}`);

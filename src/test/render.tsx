@@ -7,7 +7,10 @@ import { AppProviders, createAppQueryClient } from '../app/providers';
 
 export function createTestQueryClient(): QueryClient {
   const queryClient = createAppQueryClient();
-  queryClient.setDefaultOptions({ queries: { retry: false, staleTime: Infinity }, mutations: { retry: false } });
+  queryClient.setDefaultOptions({
+    queries: { retry: false, staleTime: Infinity },
+    mutations: { retry: false },
+  });
   return queryClient;
 }
 
@@ -21,7 +24,10 @@ export const testUser = (role: SessionUser['role'], name = 'Ada Harbour'): Sessi
 });
 
 /** Renders routes in a memory router with the app's providers; returns the router to inspect. */
-export function renderRoutes(routes: RouteObject[], { at = '/', queryClient = createTestQueryClient() } = {}) {
+export function renderRoutes(
+  routes: RouteObject[],
+  { at = '/', queryClient = createTestQueryClient() } = {},
+) {
   const router = createMemoryRouter(routes, { initialEntries: [at] });
   const utils = render(
     <AppProviders queryClient={queryClient}>
@@ -32,7 +38,16 @@ export function renderRoutes(routes: RouteObject[], { at = '/', queryClient = cr
 }
 
 /** Renders one element on a page of its own, with a second page to see where it navigates to. */
-export function renderPage(element: ReactElement, options: { at?: string; path?: string; queryClient?: QueryClient } = {}) {
+export function renderPage(
+  element: ReactElement,
+  options: { at?: string; path?: string; queryClient?: QueryClient } = {},
+) {
   const { path = '/', ...rest } = options;
-  return renderRoutes([{ path, element }, { path: '*', element: <p>Elsewhere</p> }], { at: rest.at ?? path, ...rest });
+  return renderRoutes(
+    [
+      { path, element },
+      { path: '*', element: <p>Elsewhere</p> },
+    ],
+    { at: rest.at ?? path, ...rest },
+  );
 }

@@ -25,7 +25,9 @@ beforeAll(async () => {
   const tech = await apiSession(baseURL, 'ivo@tidewright.example');
   await openRun(tech, 'port');
   await openRun(tech, 'starboard');
-  ternId = (await tech('/api/vessels')).body.vessels.find((v: { name: string }) => v.name === 'Blue Tern').id;
+  ternId = (await tech('/api/vessels')).body.vessels.find(
+    (v: { name: string }) => v.name === 'Blue Tern',
+  ).id;
   browser = await launchBrowser();
 }, 120_000);
 afterAll(() => browser?.close());
@@ -36,7 +38,9 @@ async function signedInOnDeck(context: BrowserContext, email: string, path: stri
   await expect.poll(() => new URL(page.url()).pathname, { timeout: 15_000 }).not.toBe('/sign-in');
   await page.goto(path);
   // The service worker has installed and precached the app once it controls the page.
-  await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 30_000 });
+  await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, {
+    timeout: 30_000,
+  });
   return page;
 }
 
@@ -44,7 +48,10 @@ async function signedInOnDeck(context: BrowserContext, email: string, path: stri
 const countEvents = (page: Page, kind: string) =>
   page.evaluate(async (wanted) => {
     const open = indexedDB.open('ringseat');
-    const idb: IDBDatabase = await new Promise((resolve, reject) => { open.onsuccess = () => resolve(open.result); open.onerror = () => reject(open.error); });
+    const idb: IDBDatabase = await new Promise((resolve, reject) => {
+      open.onsuccess = () => resolve(open.result);
+      open.onerror = () => reject(open.error);
+    });
     const all: Array<{ kind: string }> = await new Promise((resolve, reject) => {
       const request = idb.transaction('events').objectStore('events').getAll();
       request.onsuccess = () => resolve(request.result);
@@ -61,19 +68,43 @@ describe('on deck with no signal', () => {
     const context = await newContext(browser, baseURL, PHONE);
     try {
       const page = await signedInOnDeck(context, 'sunniva@skipper.example', '/deck');
-      await expect.poll(() => visible(page, 'Four-stroke outboard, about 10 hours'), { timeout: 30_000 }).toBe(true);
+      await expect
+        .poll(() => visible(page, 'Four-stroke outboard, about 10 hours'), { timeout: 30_000 })
+        .toBe(true);
       await context.setOffline(true);
       await page.reload();
-      await expect.poll(() => page.getByRole('heading', { level: 1, name: 'On deck' }).isVisible(), { timeout: 15_000 }).toBe(true);
-      expect(await page.getByRole('list', { name: 'Vessels on this device' }).getByText('Blue Tern').isVisible()).toBe(true);
+      await expect
+        .poll(() => page.getByRole('heading', { level: 1, name: 'On deck' }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
+      expect(
+        await page
+          .getByRole('list', { name: 'Vessels on this device' })
+          .getByText('Blue Tern')
+          .isVisible(),
+      ).toBe(true);
       expect(await visible(page, 'Four-stroke outboard, about 10 hours')).toBe(true);
       // A cold start on a deep link, offline: the app shell comes from the cache, the data from IndexedDB.
       const cold = await context.newPage();
       await cold.goto(`/deck/${ternId}`);
-      await expect.poll(() => cold.getByRole('region', { name: 'Starboard' }).isVisible(), { timeout: 15_000 }).toBe(true);
-      expect(await cold.getByRole('heading', { level: 1, name: /Blue Tern/ }).isVisible()).toBe(true);
+      await expect
+        .poll(() => cold.getByRole('region', { name: 'Starboard' }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
+      expect(await cold.getByRole('heading', { level: 1, name: /Blue Tern/ }).isVisible()).toBe(
+        true,
+      );
       // The API is never answered with the app: offline it fails as a network error.
-      expect(await cold.evaluate(() => fetch('/api/auth/me').then((r) => r.headers.get('content-type'), () => 'network error'))).toBe('network error');
+      expect(
+        await cold.evaluate(() =>
+          fetch('/api/auth/me').then(
+            (r) => r.headers.get('content-type'),
+            () => 'network error',
+          ),
+        ),
+      ).toBe('network error');
     } finally {
       await context.close();
     }
@@ -84,7 +115,16 @@ describe('on deck with no signal', () => {
     await context.clock.install();
     try {
       const page = await signedInOnDeck(context, 'ivo@tidewright.example', `/deck/${ternId}`);
-      await expect.poll(() => page.getByRole('button', { name: 'Start outing' }).isEnabled().catch(() => false), { timeout: 30_000 }).toBe(true);
+      await expect
+        .poll(
+          () =>
+            page
+              .getByRole('button', { name: 'Start outing' })
+              .isEnabled()
+              .catch(() => false),
+          { timeout: 30_000 },
+        )
+        .toBe(true);
       await context.setOffline(true);
       await page.reload();
       await page.getByText('I have read the cautions').click();
@@ -98,27 +138,41 @@ describe('on deck with no signal', () => {
         await page.getByRole('textbox', { name: 'Engine speed (RPM)' }).fill(String(rpm));
         await page.getByRole('radio', { name: 'idle' }).click();
         await page.getByRole('button', { name: 'Log reading' }).click();
-        await expect.poll(() => visible(page, `Logged ${rpm} and ${rpm} rpm at idle for Port and Starboard.`)).toBe(true);
+        await expect
+          .poll(() => visible(page, `Logged ${rpm} and ${rpm} rpm at idle for Port and Starboard.`))
+          .toBe(true);
       };
       const timeInBand = () => port.getByTestId('time-in-band').textContent();
 
       await log(Math.min(800, rpmMax - 100)); // in band: idle speed, below the band's top (demo figure)
-      await expect.poll(() => port.getByRole('status', { name: /Port: In band/ }).isVisible()).toBe(true);
+      await expect
+        .poll(() => port.getByRole('status', { name: /Port: In band/ }).isVisible())
+        .toBe(true);
       await page.clock.fastForward(120_000);
       await log(rpmMax + 500); // over the band's top on both engines
-      await expect.poll(() => port.getByRole('status', { name: /Port: Over/ }).isVisible()).toBe(true);
+      await expect
+        .poll(() => port.getByRole('status', { name: /Port: Over/ }).isVisible())
+        .toBe(true);
       const held = await timeInBand();
       expect(held).toMatch(/^0:0[23]:\d\d$/);
 
       await page.clock.fastForward(65_000); // past the one-minute grace (our own allowance)
-      await expect.poll(() => visible(page, 'Over the band: ease back'), { timeout: 10_000 }).toBe(true);
-      await expect.poll(() => countEvents(page, 'alert'), { timeout: 10_000 }).toBeGreaterThanOrEqual(2);
+      await expect
+        .poll(() => visible(page, 'Over the band: ease back'), { timeout: 10_000 })
+        .toBe(true);
+      await expect
+        .poll(() => countEvents(page, 'alert'), { timeout: 10_000 })
+        .toBeGreaterThanOrEqual(2);
       expect(await timeInBand()).toBe(held); // time over the band never counts as time in band
       expect(await countEvents(page, 'reading')).toBe(readingsBefore + 4);
       await keepScreenshot(page, 'deck-run-day-phone');
 
       await page.reload(); // still offline, mid-outing
-      await expect.poll(() => port.getByRole('status', { name: /Port: Over/ }).isVisible(), { timeout: 15_000 }).toBe(true);
+      await expect
+        .poll(() => port.getByRole('status', { name: /Port: Over/ }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
       expect(await timeInBand()).toBe(held);
       expect(await countEvents(page, 'reading')).toBe(readingsBefore + 4);
       expect(await visible(page, 'Outing under way')).toBe(true);
@@ -130,29 +184,50 @@ describe('on deck with no signal', () => {
 
       // A 12-megapixel camera photo is made smaller on the phone and kept with the next reading.
       const photo = await page.evaluate(async () => {
-        const canvas = Object.assign(document.createElement('canvas'), { width: 4000, height: 3000 });
+        const canvas = Object.assign(document.createElement('canvas'), {
+          width: 4000,
+          height: 3000,
+        });
         const g = canvas.getContext('2d')!;
         for (let i = 0; i < 400; i++) g.fillRect((i * 97) % 4000, (i * 53) % 3000, 90, 60);
-        const blob: Blob = await new Promise((resolve) => canvas.toBlob((b) => resolve(b!), 'image/png'));
+        const blob: Blob = await new Promise((resolve) =>
+          canvas.toBlob((b) => resolve(b!), 'image/png'),
+        );
         return Array.from(new Uint8Array(await blob.arrayBuffer()));
       });
       await page.getByRole('button', { name: 'Details' }).click();
-      await page.getByLabel('Photo (hour meter, tachometer…)').setInputFiles({ name: 'hour-meter.png', mimeType: 'image/png', buffer: Buffer.from(photo) });
-      await expect.poll(() => visible(page, /Photo ready: 1600×1200/), { timeout: 10_000 }).toBe(true);
+      await page.getByLabel('Photo (hour meter, tachometer…)').setInputFiles({
+        name: 'hour-meter.png',
+        mimeType: 'image/png',
+        buffer: Buffer.from(photo),
+      });
+      await expect
+        .poll(() => visible(page, /Photo ready: 1600×1200/), { timeout: 10_000 })
+        .toBe(true);
       await page.getByRole('button', { name: 'Keep details' }).click();
       await page.getByRole('button', { name: 'Log reading' }).click();
       await expect.poll(() => countEvents(page, 'reading')).toBe(readingsBefore + 8);
       const stored = await page.evaluate(async () => {
         const open = indexedDB.open('ringseat');
-        const idb: IDBDatabase = await new Promise((resolve) => { open.onsuccess = () => resolve(open.result); });
-        const photos: Array<{ width: number; height: number; blob: Blob; sync: string }> = await new Promise((resolve) => {
-          const request = idb.transaction('photos').objectStore('photos').getAll();
-          request.onsuccess = () => resolve(request.result);
+        const idb: IDBDatabase = await new Promise((resolve) => {
+          open.onsuccess = () => resolve(open.result);
         });
+        const photos: Array<{ width: number; height: number; blob: Blob; sync: string }> =
+          await new Promise((resolve) => {
+            const request = idb.transaction('photos').objectStore('photos').getAll();
+            request.onsuccess = () => resolve(request.result);
+          });
         idb.close();
-        return photos.map((p) => ({ width: p.width, height: p.height, bytes: p.blob.size, sync: p.sync }));
+        return photos.map((p) => ({
+          width: p.width,
+          height: p.height,
+          bytes: p.blob.size,
+          sync: p.sync,
+        }));
       });
-      expect(stored).toEqual([expect.objectContaining({ width: 1600, height: 1200, sync: 'pending' })]);
+      expect(stored).toEqual([
+        expect.objectContaining({ width: 1600, height: 1200, sync: 'pending' }),
+      ]);
       expect(stored[0].bytes).toBeLessThan(1_500_000);
 
       await page.getByRole('button', { name: 'Display mode' }).click();
@@ -167,19 +242,31 @@ describe('on deck with no signal', () => {
     const context = await newContext(browser, baseURL);
     const page = await context.newPage();
     await signIn(page, 'ivo@tidewright.example');
-    await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, { timeout: 30_000 });
+    await page.waitForFunction(() => navigator.serviceWorker?.controller !== null, undefined, {
+      timeout: 30_000,
+    });
     const nav = page.getByRole('navigation', { name: 'Main' });
     await nav.getByRole('link', { name: 'Deck' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 }).toBe(true);
-    await expect.poll(() => page.getByRole('link', { name: 'Go on deck with Blue Tern' }).isVisible()).toBe(true);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 })
+      .toBe(true);
+    await expect
+      .poll(() => page.getByRole('link', { name: 'Go on deck with Blue Tern' }).isVisible())
+      .toBe(true);
     await page.getByRole('link', { name: 'Go on deck with Blue Tern' }).click();
     await expect.poll(() => new URL(page.url()).pathname).toBe(`/deck/${ternId}`);
     await context.setOffline(true);
     await nav.getByRole('link', { name: 'Runs' }).click();
     await expect.poll(() => new URL(page.url()).pathname, { timeout: 15_000 }).toBe('/runs');
-    await expect.poll(() => nav.getByRole('link', { name: 'Runs' }).getAttribute('aria-current'), { timeout: 15_000 }).toBe('page');
+    await expect
+      .poll(() => nav.getByRole('link', { name: 'Runs' }).getAttribute('aria-current'), {
+        timeout: 15_000,
+      })
+      .toBe('page');
     await nav.getByRole('link', { name: 'Deck' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 }).toBe(true);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'On deck' }).isVisible(), { timeout: 15_000 })
+      .toBe(true);
     await context.close();
   }, 90_000);
 });

@@ -1,6 +1,13 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESKTOP, keepScreenshot, launchBrowser, newContext, PHONE, signIn } from '../helpers/browser.js';
+import {
+  DESKTOP,
+  keepScreenshot,
+  launchBrowser,
+  newContext,
+  PHONE,
+  signIn,
+} from '../helpers/browser.js';
 
 const baseURL = inject('baseURL');
 let browser: Browser;
@@ -13,11 +20,16 @@ const BUILT_IN = 'Four-stroke outboard, about 10 hours';
 // Unique per run: the e2e server's database is shared by every file and survives reruns of this one.
 const copyName = `Tidewright outboard ${Date.now().toString(36)}`;
 
-const visible = (page: Page, text: string) => page.getByText(text, { exact: true }).first().isVisible();
+const visible = (page: Page, text: string) =>
+  page.getByText(text, { exact: true }).first().isVisible();
 
 async function openPrograms(page: Page) {
   await page.getByRole('link', { name: 'Programs', exact: true }).first().click();
-  await expect.poll(() => page.getByRole('heading', { level: 1, name: 'Break-in programs' }).isVisible(), { timeout: 15_000 }).toBe(true);
+  await expect
+    .poll(() => page.getByRole('heading', { level: 1, name: 'Break-in programs' }).isVisible(), {
+      timeout: 15_000,
+    })
+    .toBe(true);
 }
 
 describe('break-in programs', () => {
@@ -26,12 +38,20 @@ describe('break-in programs', () => {
     const page = await desk.newPage();
     try {
       await signIn(page, 'maren@tidewright.example');
-      await expect.poll(() => page.getByRole('heading', { level: 1, name: 'Workshop' }).isVisible(), { timeout: 15_000 }).toBe(true);
+      await expect
+        .poll(() => page.getByRole('heading', { level: 1, name: 'Workshop' }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
       await openPrograms(page);
       await keepScreenshot(page, 'programs-list-desktop');
 
       await page.getByRole('button', { name: `Copy ${BUILT_IN}`, exact: true }).click();
-      await expect.poll(() => page.getByRole('button', { name: 'Save program' }).isVisible(), { timeout: 15_000 }).toBe(true);
+      await expect
+        .poll(() => page.getByRole('button', { name: 'Save program' }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
       await page.getByLabel('Program name').fill(copyName);
       const second = page.getByRole('region', { name: 'Phase 2', exact: true });
       const minutes = second.getByLabel('Required minutes in band');
@@ -41,8 +61,17 @@ describe('break-in programs', () => {
       await expect.poll(() => visible(page, 'Program saved.'), { timeout: 15_000 }).toBe(true);
 
       await page.reload();
-      await expect.poll(() => page.getByRole('heading', { level: 1, name: copyName }).isVisible(), { timeout: 15_000 }).toBe(true);
-      expect(await page.getByRole('region', { name: 'Phase 2', exact: true }).getByLabel('Required minutes in band').inputValue()).toBe(newMinutes);
+      await expect
+        .poll(() => page.getByRole('heading', { level: 1, name: copyName }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
+      expect(
+        await page
+          .getByRole('region', { name: 'Phase 2', exact: true })
+          .getByLabel('Required minutes in band')
+          .inputValue(),
+      ).toBe(newMinutes);
       await keepScreenshot(page, 'program-edit-desktop');
     } finally {
       await desk.close();
@@ -52,9 +81,15 @@ describe('break-in programs', () => {
     const tech = await phone.newPage();
     try {
       await signIn(tech, 'ivo@tidewright.example');
-      await expect.poll(() => tech.getByRole('heading', { level: 1, name: 'Workshop' }).isVisible(), { timeout: 15_000 }).toBe(true);
+      await expect
+        .poll(() => tech.getByRole('heading', { level: 1, name: 'Workshop' }).isVisible(), {
+          timeout: 15_000,
+        })
+        .toBe(true);
       await openPrograms(tech);
-      await expect.poll(() => tech.getByRole('link', { name: copyName }).count(), { timeout: 15_000 }).toBe(1);
+      await expect
+        .poll(() => tech.getByRole('link', { name: copyName }).count(), { timeout: 15_000 })
+        .toBe(1);
       expect(await tech.getByRole('button', { name: `Copy ${BUILT_IN}` }).count()).toBe(0);
       await keepScreenshot(tech, 'programs-list-phone');
 
@@ -62,15 +97,26 @@ describe('break-in programs', () => {
       await tech.getByRole('link', { name: 'Gannet', exact: true }).first().click();
       await tech.getByRole('link', { name: 'Single · Norrvik NV-60 4S' }).first().click();
       const card = tech.getByRole('region', { name: 'Assign break-in program' });
-      await expect.poll(() => card.getByRole('option', { name: copyName }).count(), { timeout: 15_000 }).toBe(1);
+      await expect
+        .poll(() => card.getByRole('option', { name: copyName }).count(), { timeout: 15_000 })
+        .toBe(1);
       await card.getByLabel('Break-in program').selectOption({ label: copyName });
       await card.getByRole('button', { name: 'Assign program' }).click();
 
       // Another e2e file may already have started Gannet's break-in: the refusal is then the right answer.
       const created = card.getByText('Run created.');
-      const refused = card.getByRole('alert').filter({ hasText: 'already has an open break-in run' });
-      await expect.poll(async () => (await created.isVisible()) || (await refused.isVisible()), { timeout: 15_000 }).toBe(true);
-      if (await created.isVisible()) expect(await card.getByRole('link', { name: 'Open the run' }).getAttribute('href')).toMatch(/^\/runs\/[0-9a-f-]{36}$/);
+      const refused = card
+        .getByRole('alert')
+        .filter({ hasText: 'already has an open break-in run' });
+      await expect
+        .poll(async () => (await created.isVisible()) || (await refused.isVisible()), {
+          timeout: 15_000,
+        })
+        .toBe(true);
+      if (await created.isVisible())
+        expect(await card.getByRole('link', { name: 'Open the run' }).getAttribute('href')).toMatch(
+          /^\/runs\/[0-9a-f-]{36}$/,
+        );
       await keepScreenshot(tech, 'engine-assign-program-phone');
     } finally {
       await phone.close();

@@ -7,11 +7,18 @@ const baseURL = inject('baseURL');
 let browser: Browser;
 let context: BrowserContext;
 let page: Page;
-let runs: Array<{ id: string; engine: { id: string }; program: { phases: Array<{ id: string; performedBy: string }> } }>;
+let runs: Array<{
+  id: string;
+  engine: { id: string };
+  program: { phases: Array<{ id: string; performedBy: string }> };
+}>;
 
 beforeAll(async () => {
   const tech = await apiSession(baseURL, 'ivo@tidewright.example');
-  runs = [await openRunFor(tech, 'Blue Tern', 'port'), await openRunFor(tech, 'Blue Tern', 'starboard')];
+  runs = [
+    await openRunFor(tech, 'Blue Tern', 'port'),
+    await openRunFor(tech, 'Blue Tern', 'starboard'),
+  ];
   browser = await launchBrowser();
   context = await newContext(browser, baseURL, PHONE);
   page = await context.newPage();
@@ -44,19 +51,49 @@ async function logOffline(count: number, startAt: number): Promise<string[]> {
   const items = Array.from({ length: count }, (_, i) => {
     const run = runs[i % 2];
     const phase = run.program.phases.find((p) => p.performedBy === 'skipper')!;
-    return { runId: run.id, engineId: run.engine.id, phaseId: phase.id, at: startAt + i * 5000, rpm: 2400 + (i % 7) * 100 };
+    return {
+      runId: run.id,
+      engineId: run.engine.id,
+      phaseId: phase.id,
+      at: startAt + i * 5000,
+      rpm: 2400 + (i % 7) * 100,
+    };
   });
   return page.evaluate(async (readings) => {
     const open = indexedDB.open('ringseat');
-    const idb: IDBDatabase = await new Promise((resolve, reject) => { open.onsuccess = () => resolve(open.result); open.onerror = () => reject(open.error); });
+    const idb: IDBDatabase = await new Promise((resolve, reject) => {
+      open.onsuccess = () => resolve(open.result);
+      open.onerror = () => reject(open.error);
+    });
     const tx = idb.transaction('events', 'readwrite');
     const ids = readings.map((r) => {
       const id = crypto.randomUUID();
-      const event = { kind: 'reading', id, at: r.at, engineId: r.engineId, phaseId: r.phaseId, rpm: r.rpm, throttle: 'half' };
-      tx.objectStore('events').put({ id, runId: r.runId, engineId: r.engineId, at: r.at, kind: 'reading', event, origin: 'device', sync: 'pending', createdAt: Date.now() });
+      const event = {
+        kind: 'reading',
+        id,
+        at: r.at,
+        engineId: r.engineId,
+        phaseId: r.phaseId,
+        rpm: r.rpm,
+        throttle: 'half',
+      };
+      tx.objectStore('events').put({
+        id,
+        runId: r.runId,
+        engineId: r.engineId,
+        at: r.at,
+        kind: 'reading',
+        event,
+        origin: 'device',
+        sync: 'pending',
+        createdAt: Date.now(),
+      });
       return id;
     });
-    await new Promise((resolve, reject) => { tx.oncomplete = resolve; tx.onerror = () => reject(tx.error); });
+    await new Promise((resolve, reject) => {
+      tx.oncomplete = resolve;
+      tx.onerror = () => reject(tx.error);
+    });
     idb.close();
     return ids;
   }, items);
@@ -69,7 +106,8 @@ async function serverReadingIds(): Promise<string[]> {
   let cursor = 0;
   for (;;) {
     const body = (await skipper(`/api/sync/pull?cursor=${cursor}`)).body;
-    for (const e of body.events) if (runs.some((r) => r.id === e.runId) && e.event.kind === 'reading') ids.push(e.event.id);
+    for (const e of body.events)
+      if (runs.some((r) => r.id === e.runId) && e.event.kind === 'reading') ids.push(e.event.id);
     cursor = body.cursor;
     if (!body.more) return ids;
   }
@@ -80,8 +118,15 @@ describe('sync between the boat and the workshop', () => {
     const before = await serverReadingIds();
     await context.setOffline(true);
     const logged = await logOffline(50, Date.parse('2026-12-01T10:00:00Z'));
-    await page.getByRole('button', { name: /^Sync:/ }).first().click(); // open details, still offline
-    await expect.poll(() => page.getByRole('heading', { name: /Waiting to send \(50\)/ }).isVisible(), { timeout: 10_000 }).toBe(true);
+    await page
+      .getByRole('button', { name: /^Sync:/ })
+      .first()
+      .click(); // open details, still offline
+    await expect
+      .poll(() => page.getByRole('heading', { name: /Waiting to send \(50\)/ }).isVisible(), {
+        timeout: 10_000,
+      })
+      .toBe(true);
     await page.getByRole('button', { name: 'Close' }).click();
     await context.setOffline(false);
     await waitForPill(/All synced/);
@@ -103,11 +148,18 @@ describe('sync between the boat and the workshop', () => {
       await route.abort('connectionreset'); // …and the answer never reaches the phone
     });
     await context.setOffline(false);
-    await page.getByRole('button', { name: /^Sync:/ }).first().click();
+    await page
+      .getByRole('button', { name: /^Sync:/ })
+      .first()
+      .click();
     await page.getByRole('button', { name: 'Sync now' }).click();
     await expect.poll(() => cut, { timeout: 15_000 }).toBe(1);
     await page.getByRole('button', { name: 'Sync now' }).click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Waiting to send (0)' }).isVisible(), { timeout: 30_000 }).toBe(true);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Waiting to send (0)' }).isVisible(), {
+        timeout: 30_000,
+      })
+      .toBe(true);
     await page.unroute('**/api/sync/push');
     const after = await serverReadingIds();
     expect(after.length - before.length).toBe(50);

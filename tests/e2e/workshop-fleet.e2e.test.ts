@@ -1,7 +1,14 @@
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { apiSession } from '../helpers/api.js';
-import { DESKTOP, keepScreenshot, launchBrowser, newContext, PHONE, signIn } from '../helpers/browser.js';
+import {
+  DESKTOP,
+  keepScreenshot,
+  launchBrowser,
+  newContext,
+  PHONE,
+  signIn,
+} from '../helpers/browser.js';
 
 const baseURL = inject('baseURL');
 let browser: Browser;
@@ -14,7 +21,11 @@ const visible = (locator: ReturnType<Page['getByRole']>, timeout = 15_000) =>
   expect.poll(() => locator.first().isVisible(), { timeout }).toBe(true);
 
 async function addVesselAndEngine(page: Page, vesselName: string, serial: string) {
-  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Vessels', exact: true }).first().click();
+  await page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: 'Vessels', exact: true })
+    .first()
+    .click();
   await visible(page.getByRole('heading', { level: 1, name: 'Vessels and engines' }));
   await page.getByRole('button', { name: 'Add a vessel' }).click();
   await page.getByLabel('Vessel name').fill(vesselName);
@@ -42,21 +53,43 @@ async function addVesselAndEngine(page: Page, vesselName: string, serial: string
 }
 
 async function uploadPhoto(page: Page) {
-  const photo = await page.screenshot({ type: 'jpeg', quality: 60, clip: { x: 0, y: 0, width: 320, height: 200 } });
-  await page.getByLabel('Photo or document', { exact: true }).setInputFiles({ name: 'installation.jpg', mimeType: 'image/jpeg', buffer: photo });
+  const photo = await page.screenshot({
+    type: 'jpeg',
+    quality: 60,
+    clip: { x: 0, y: 0, width: 320, height: 200 },
+  });
+  await page
+    .getByLabel('Photo or document', { exact: true })
+    .setInputFiles({ name: 'installation.jpg', mimeType: 'image/jpeg', buffer: photo });
   await page.getByLabel('Caption (optional)').fill('Installation at handover');
   await page.getByRole('button', { name: 'Attach file' }).click();
   await visible(page.getByRole('img', { name: 'Installation at handover' }));
 }
 
 async function answer(page: Page, item: string, choice: 'Pass' | 'Fail' | 'N/A') {
-  await page.getByRole('radiogroup', { name: item }).locator('label').filter({ hasText: choice }).click();
+  await page
+    .getByRole('radiogroup', { name: item })
+    .locator('label')
+    .filter({ hasText: choice })
+    .click();
 }
 
-const CHECKS = ['Steering', 'Throttle cable adjustment', 'Shift cable adjustment', 'Starts in neutral only', 'Kill switch and lanyard', 'Cooling-water tell-tale', 'No fuel, oil or water leaks', 'Propeller and nut'];
+const CHECKS = [
+  'Steering',
+  'Throttle cable adjustment',
+  'Shift cable adjustment',
+  'Starts in neutral only',
+  'Kill switch and lanyard',
+  'Cooling-water tell-tale',
+  'No fuel, oil or water leaks',
+  'Propeller and nut',
+];
 
 describe('workshop fleet: vessel, engine and commissioning checklist', () => {
-  for (const [size, device] of [['desktop', DESKTOP], ['phone', PHONE]] as const) {
+  for (const [size, device] of [
+    ['desktop', DESKTOP],
+    ['phone', PHONE],
+  ] as const) {
     it(`a technician on ${size} adds a vessel and engine, saves the checklist part-done and completes it`, async () => {
       const context = await newContext(browser, baseURL, device);
       const page = await context.newPage();
@@ -81,14 +114,20 @@ describe('workshop fleet: vessel, engine and commissioning checklist', () => {
         await page.getByLabel('Helm tachometer showed (RPM)').fill('3040');
         const tach = page.getByRole('region', { name: 'Tachometer calibration' });
         await visible(tach.getByText('True engine speed (from 300 Hz)'));
-        expect(await tach.locator('[data-verdict]').first().getAttribute('data-verdict')).toBe('pass');
+        expect(await tach.locator('[data-verdict]').first().getAttribute('data-verdict')).toBe(
+          'pass',
+        );
         await answer(page, 'Steering', 'Pass');
         await page.getByRole('button', { name: 'Save for later' }).click();
         await visible(page.getByText(/^Saved\./));
         await keepScreenshot(page, `workshop-fleet-checklist-part-done-${size}`);
 
         await page.reload();
-        await expect.poll(() => page.getByLabel('Helm tachometer showed (RPM)').inputValue(), { timeout: 15_000 }).toBe('3040');
+        await expect
+          .poll(() => page.getByLabel('Helm tachometer showed (RPM)').inputValue(), {
+            timeout: 15_000,
+          })
+          .toBe('3040');
 
         // AGM absorption 14.4–14.7 V at 25 °C (Battery University BU-403): 14.4 V passes.
         await page.getByLabel('Battery chemistry').selectOption('agm');
@@ -99,10 +138,13 @@ describe('workshop fleet: vessel, engine and commissioning checklist', () => {
         await page.getByLabel("Maker's idle in gear, high (RPM)").fill('750');
         await page.getByLabel('Measured idle in gear (RPM)').fill('700');
         await page.getByRole('textbox', { name: 'Full-throttle RPM', exact: true }).fill('5500'); // the middle of the rated 5000–6000 rpm
-        for (const item of CHECKS.filter((c) => c !== 'Kill switch and lanyard')) await answer(page, item, 'Pass');
+        for (const item of CHECKS.filter((c) => c !== 'Kill switch and lanyard'))
+          await answer(page, item, 'Pass');
 
         await page.getByRole('button', { name: 'Complete checklist' }).click();
-        await visible(page.getByRole('alert').filter({ hasText: 'Kill switch and lanyard: not finished' }));
+        await visible(
+          page.getByRole('alert').filter({ hasText: 'Kill switch and lanyard: not finished' }),
+        );
         await answer(page, 'Kill switch and lanyard', 'Pass');
         await page.getByRole('button', { name: 'Complete checklist' }).click();
         await visible(page.getByText(/^Completed by Ivo Brandt on/));
@@ -126,11 +168,15 @@ describe('workshop fleet: vessel, engine and commissioning checklist', () => {
       await page.goto('/vessels');
       await visible(page.getByRole('link', { name: 'Halcyon Drift' }));
       await page.getByRole('button', { name: /^Vessel/ }).click();
-      await expect.poll(() => page.getByRole('columnheader', { name: /^Vessel/ }).getAttribute('aria-sort')).toBe('descending');
+      await expect
+        .poll(() => page.getByRole('columnheader', { name: /^Vessel/ }).getAttribute('aria-sort'))
+        .toBe('descending');
       await page.getByLabel('Search', { exact: true }).fill('marrow');
       await expect.poll(() => page.locator('tbody tr').count(), { timeout: 10_000 }).toBe(1);
       // Searching keeps the chosen sorting.
-      expect(await page.getByRole('columnheader', { name: /^Vessel/ }).getAttribute('aria-sort')).toBe('descending');
+      expect(
+        await page.getByRole('columnheader', { name: /^Vessel/ }).getAttribute('aria-sort'),
+      ).toBe('descending');
       await keepScreenshot(page, 'workshop-fleet-vessels-desktop');
       await page.getByRole('link', { name: 'Engines', exact: true }).click();
       await expect.poll(() => page.getByLabel('Search', { exact: true }).inputValue()).toBe('');
@@ -151,10 +197,18 @@ describe('workshop fleet: vessel, engine and commissioning checklist', () => {
 
   it('draws the checklist at night with no blue or white light, a failed item hatched and named', async () => {
     const tech = await apiSession(baseURL, 'ivo@tidewright.example');
-    const engines = (await tech('/api/engines')).body.engines as Array<{ id: string; tachSource: string; checklist: { completedAt: string | null } | null }>;
-    const engine = engines.find((e) => e.tachSource === 'charging-coil' && !e.checklist?.completedAt)!;
+    const engines = (await tech('/api/engines')).body.engines as Array<{
+      id: string;
+      tachSource: string;
+      checklist: { completedAt: string | null } | null;
+    }>;
+    const engine = engines.find(
+      (e) => e.tachSource === 'charging-coil' && !e.checklist?.completedAt,
+    )!;
     const context = await newContext(browser, baseURL, PHONE);
-    await context.addInitScript(() => window.localStorage.setItem('ringseat.display-mode', 'night'));
+    await context.addInitScript(() =>
+      window.localStorage.setItem('ringseat.display-mode', 'night'),
+    );
     const page = await context.newPage();
     try {
       await signIn(page, 'ivo@tidewright.example');
@@ -165,16 +219,28 @@ describe('workshop fleet: vessel, engine and commissioning checklist', () => {
       await page.getByLabel('Measured frequency (Hz)').fill('300');
       await page.getByLabel('Helm tachometer showed (RPM)').fill('3150');
       const tach = page.getByRole('region', { name: 'Tachometer calibration' });
-      await visible(tach.getByText('The tachometer reads +5.0 % off the true speed; it should be within ±3 %.'));
-      expect(await tach.locator('[data-verdict]').first().getAttribute('data-verdict')).toBe('fail');
+      await visible(
+        tach.getByText('The tachometer reads +5.0 % off the true speed; it should be within ±3 %.'),
+      );
+      expect(await tach.locator('[data-verdict]').first().getAttribute('data-verdict')).toBe(
+        'fail',
+      );
       const blueOrWhite = await page.evaluate(() => {
         const found: string[] = [];
         for (const el of Array.from(document.querySelectorAll('body *'))) {
           if (el.closest('img')) continue;
           const style = getComputedStyle(el);
-          for (const prop of ['color', 'background-color', 'border-top-color', 'border-bottom-color'] as const) {
-            const [r, g, b, a = 1] = (style.getPropertyValue(prop).match(/[\d.]+/g) ?? []).map(Number);
-            if (a > 0 && (b > 0 || (r > 200 && g > 200))) found.push(`${el.tagName}.${prop}=${style.getPropertyValue(prop)}`);
+          for (const prop of [
+            'color',
+            'background-color',
+            'border-top-color',
+            'border-bottom-color',
+          ] as const) {
+            const [r, g, b, a = 1] = (style.getPropertyValue(prop).match(/[\d.]+/g) ?? []).map(
+              Number,
+            );
+            if (a > 0 && (b > 0 || (r > 200 && g > 200)))
+              found.push(`${el.tagName}.${prop}=${style.getPropertyValue(prop)}`);
           }
         }
         return found.slice(0, 5);

@@ -8,14 +8,31 @@ export function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: CHROMIUM_PATH,
     headless: true,
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 
-export const PHONE = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+export const PHONE = {
+  viewport: { width: 390, height: 844 },
+  deviceScaleFactor: 2,
+  isMobile: true,
+  hasTouch: true,
+};
 export const DESKTOP = { viewport: { width: 1366, height: 900 } };
 
-export async function newContext(browser: Browser, baseURL: string, device: object = DESKTOP): Promise<BrowserContext> {
+export async function newContext(
+  browser: Browser,
+  baseURL: string,
+  device: object = DESKTOP,
+): Promise<BrowserContext> {
   return browser.newContext({ baseURL, ...device });
 }
 

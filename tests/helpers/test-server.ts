@@ -15,7 +15,8 @@ export const HOST = 'ringseat.test';
 export const ORIGIN = `http://${HOST}`;
 
 /** A supertest agent that sends the Host and Origin a browser on the app's own page would send. */
-export const browserAgent = (app: Express) => supertest.agent(app).set('Host', HOST).set('Origin', ORIGIN);
+export const browserAgent = (app: Express) =>
+  supertest.agent(app).set('Host', HOST).set('Origin', ORIGIN);
 
 /** A settable clock for tests where time matters. */
 export class FakeClock implements Clock {
@@ -28,10 +29,18 @@ export class FakeClock implements Clock {
   }
 }
 
-export type TestServer = { app: Express; dataSource: DataSource; dir: string; close: () => Promise<void> };
+export type TestServer = {
+  app: Express;
+  dataSource: DataSource;
+  dir: string;
+  close: () => Promise<void>;
+};
 
 /** A real app on a real, migrated SQLite file in a temporary folder, with the demo workshop in it. */
-export async function startTestServer(overrides: Partial<AppDeps> = {}, options: { seed?: boolean } = {}): Promise<TestServer> {
+export async function startTestServer(
+  overrides: Partial<AppDeps> = {},
+  options: { seed?: boolean } = {},
+): Promise<TestServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-test-'));
   const dataSource = await openDatabase(path.join(dir, 'ringseat.sqlite'));
   await prepareData(dataSource, { seed: options.seed === false ? 'none' : 'demo' });
@@ -51,7 +60,8 @@ export async function startTestServer(overrides: Partial<AppDeps> = {}, options:
 export async function signedInAgent(app: Express, email: string, password = DEMO_PASSWORD) {
   const agent = browserAgent(app);
   const res = await agent.post('/api/auth/sign-in').send({ email, password });
-  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
 }
 
@@ -63,15 +73,29 @@ export const DEMO = {
 } as const;
 
 /** A second, unrelated workshop with one technician, for tenancy checks. */
-export async function addOtherWorkshop(dataSource: DataSource): Promise<{ workshopId: string; technicianEmail: string }> {
+export async function addOtherWorkshop(
+  dataSource: DataSource,
+): Promise<{ workshopId: string; technicianEmail: string }> {
   const { randomUUID } = await import('node:crypto');
   const { Workshop } = await import('../../server/features/workshops/workshop.entity.js');
   const { User } = await import('../../server/features/users/user.entity.js');
   const { hashPassword } = await import('../../server/lib/passwords.js');
   const workshopId = randomUUID();
-  await dataSource.getRepository(Workshop).insert({ id: workshopId, name: 'Other Yard Ltd', units: { speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' } });
+  await dataSource.getRepository(Workshop).insert({
+    id: workshopId,
+    name: 'Other Yard Ltd',
+    units: { speed: 'kn', volume: 'L', power: 'kW', temperature: 'C' },
+  });
   const technicianEmail = `tech-${workshopId.slice(0, 8)}@other-yard.example`;
-  await dataSource.getRepository(User).insert({ id: randomUUID(), workshopId, email: technicianEmail, name: 'Other Technician', role: 'technician', passwordHash: await hashPassword(DEMO_PASSWORD), archivedAt: null });
+  await dataSource.getRepository(User).insert({
+    id: randomUUID(),
+    workshopId,
+    email: technicianEmail,
+    name: 'Other Technician',
+    role: 'technician',
+    passwordHash: await hashPassword(DEMO_PASSWORD),
+    archivedAt: null,
+  });
   await prepareData(dataSource, { seed: 'none' });
   return { workshopId, technicianEmail };
 }

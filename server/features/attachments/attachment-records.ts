@@ -15,8 +15,14 @@ export interface AttachableRecord {
   frozen: string | null;
 }
 
-async function checklistRecord(manager: EntityManager, user: SessionUser, id: string): Promise<AttachableRecord> {
-  const checklist = await manager.getRepository(CommissioningChecklist).findOne({ where: { id, workshopId: user.workshopId } });
+async function checklistRecord(
+  manager: EntityManager,
+  user: SessionUser,
+  id: string,
+): Promise<AttachableRecord> {
+  const checklist = await manager
+    .getRepository(CommissioningChecklist)
+    .findOne({ where: { id, workshopId: user.workshopId } });
   if (!checklist) throw new NotFoundError('checklist', id);
   await findVisibleEngine(manager, user, checklist.engineId).catch(() => {
     throw new NotFoundError('checklist', id);
@@ -24,15 +30,30 @@ async function checklistRecord(manager: EntityManager, user: SessionUser, id: st
   return { workshopId: checklist.workshopId, skipperMayAdd: false, frozen: null };
 }
 
-async function runRecord(manager: EntityManager, user: SessionUser, id: string): Promise<AttachableRecord> {
-  const run = await manager.getRepository(Run).findOne({ where: { id, workshopId: user.workshopId } });
-  if (!run || !(await mayViewVessel(manager, user, run.vesselId))) throw new NotFoundError('run', id);
-  const frozen = run.state === 'signed-off' ? 'This run is signed off and frozen: nothing more can be attached to it.' : null;
+async function runRecord(
+  manager: EntityManager,
+  user: SessionUser,
+  id: string,
+): Promise<AttachableRecord> {
+  const run = await manager
+    .getRepository(Run)
+    .findOne({ where: { id, workshopId: user.workshopId } });
+  if (!run || !(await mayViewVessel(manager, user, run.vesselId)))
+    throw new NotFoundError('run', id);
+  const frozen =
+    run.state === 'signed-off'
+      ? 'This run is signed off and frozen: nothing more can be attached to it.'
+      : null;
   return { workshopId: run.workshopId, skipperMayAdd: true, frozen };
 }
 
 /** The record if the user may see it; 404 otherwise (another workshop's ids are never confirmed). */
-export async function findVisibleRecord(manager: EntityManager, user: SessionUser, type: AttachmentRecordType, id: string): Promise<AttachableRecord> {
+export async function findVisibleRecord(
+  manager: EntityManager,
+  user: SessionUser,
+  type: AttachmentRecordType,
+  id: string,
+): Promise<AttachableRecord> {
   if (type === 'engine') {
     const engine = await findVisibleEngine(manager, user, id);
     return { workshopId: engine.workshopId, skipperMayAdd: false, frozen: null };
@@ -41,9 +62,17 @@ export async function findVisibleRecord(manager: EntityManager, user: SessionUse
 }
 
 /** The record if the user may add files to it. */
-export async function findAttachableRecord(manager: EntityManager, user: SessionUser, type: AttachmentRecordType, id: string): Promise<AttachableRecord> {
+export async function findAttachableRecord(
+  manager: EntityManager,
+  user: SessionUser,
+  type: AttachmentRecordType,
+  id: string,
+): Promise<AttachableRecord> {
   const record = await findVisibleRecord(manager, user, type, id);
-  if (user.role === 'skipper' && !record.skipperMayAdd) throw new ForbiddenError(`Only the workshop adds files to ${type === 'engine' ? 'an engine' : 'a checklist'}.`);
+  if (user.role === 'skipper' && !record.skipperMayAdd)
+    throw new ForbiddenError(
+      `Only the workshop adds files to ${type === 'engine' ? 'an engine' : 'a checklist'}.`,
+    );
   if (record.frozen) throw new ConflictError(record.frozen);
   return record;
 }

@@ -17,7 +17,8 @@ export class AttachmentStorage {
   /** Absolute path of a stored name, refusing anything that would leave the uploads folder. */
   pathOf(storedName: string): string {
     const full = path.resolve(this.root, storedName);
-    if (!full.startsWith(this.root + path.sep)) throw new Error(`Stored name escapes the uploads folder: ${storedName}`);
+    if (!full.startsWith(this.root + path.sep))
+      throw new Error(`Stored name escapes the uploads folder: ${storedName}`);
     return full;
   }
 

@@ -23,7 +23,11 @@ export interface UploadedFile {
 
 /** Keeps a device's file name readable but harmless: no control characters or path separators. */
 const cleanName = (name: string) =>
-  Array.from(name, (ch) => (ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f || ch === '/' || ch === '\\' ? '_' : ch)).join('').slice(-120) || 'file';
+  Array.from(name, (ch) =>
+    ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f || ch === '/' || ch === '\\' ? '_' : ch,
+  )
+    .join('')
+    .slice(-120) || 'file';
 
 export class AttachmentsService {
   constructor(
@@ -35,13 +39,21 @@ export class AttachmentsService {
    * Stores one file on a record. A repeated client-made id returns what is stored (created:
    * false) instead of a second copy, so the on-deck sync may retry freely.
    */
-  async upload(user: SessionUser, fields: AttachmentUploadFields, file: UploadedFile | undefined): Promise<{ attachment: AttachmentView; created: boolean }> {
+  async upload(
+    user: SessionUser,
+    fields: AttachmentUploadFields,
+    file: UploadedFile | undefined,
+  ): Promise<{ attachment: AttachmentView; created: boolean }> {
     const manager = this.dataSource.manager;
     const record = await findAttachableRecord(manager, user, fields.recordType, fields.recordId);
-    const repeat = fields.id ? await this.repeated(fields as AttachmentUploadFields & { id: string }, user) : null;
+    const repeat = fields.id
+      ? await this.repeated(fields as AttachmentUploadFields & { id: string }, user)
+      : null;
     if (repeat) return { attachment: await this.view(repeat), created: false };
     if (!file) throw new ValidationError([{ field: 'file', message: 'Choose a file to attach.' }]);
-    const count = await manager.getRepository(Attachment).count({ where: { recordType: fields.recordType, recordId: fields.recordId } });
+    const count = await manager
+      .getRepository(Attachment)
+      .count({ where: { recordType: fields.recordType, recordId: fields.recordId } });
     if (count >= MAX_ATTACHMENTS_PER_RECORD) {
       const message = `This ${fields.recordType} already has ${MAX_ATTACHMENTS_PER_RECORD} files, the most it can hold. Remove one first.`;
       throw new ConflictError(message, [{ field: 'file', message }]);
@@ -49,9 +61,16 @@ export class AttachmentsService {
     const mimeType = await sniffAcceptedType(file);
     const id = fields.id ?? randomUUID();
     const row = Object.assign(new Attachment(), {
-      id, workshopId: record.workshopId, recordType: fields.recordType, recordId: fields.recordId, caption: fields.caption,
-      originalName: cleanName(file.originalname), mimeType, sizeBytes: file.size,
-      storedName: `${record.workshopId}/${id}.${ACCEPTED_FILE_TYPES[mimeType]}`, uploadedById: user.id,
+      id,
+      workshopId: record.workshopId,
+      recordType: fields.recordType,
+      recordId: fields.recordId,
+      caption: fields.caption,
+      originalName: cleanName(file.originalname),
+      mimeType,
+      sizeBytes: file.size,
+      storedName: `${record.workshopId}/${id}.${ACCEPTED_FILE_TYPES[mimeType]}`,
+      uploadedById: user.id,
     });
     await this.storage.write(row.storedName, file.buffer);
     try {
@@ -60,24 +79,41 @@ export class AttachmentsService {
       await this.storage.remove(row.storedName);
       throw error;
     }
-    return { attachment: await this.view(await manager.getRepository(Attachment).findOneByOrFail({ id })), created: true };
+    return {
+      attachment: await this.view(await manager.getRepository(Attachment).findOneByOrFail({ id })),
+      created: true,
+    };
   }
 
-  private async repeated(fields: AttachmentUploadFields & { id: string }, user: SessionUser): Promise<Attachment | null> {
+  private async repeated(
+    fields: AttachmentUploadFields & { id: string },
+    user: SessionUser,
+  ): Promise<Attachment | null> {
     const repository = this.dataSource.getRepository(Attachment);
     const existing = await repository.findOne({ where: { id: fields.id } });
     if (!existing) return null;
-    if (existing.workshopId !== user.workshopId || existing.recordType !== fields.recordType || existing.recordId !== fields.recordId) {
-      throw new ConflictError('This attachment id is already used for another record.', [{ field: 'id', message: 'This attachment id is already in use.' }]);
+    if (
+      existing.workshopId !== user.workshopId ||
+      existing.recordType !== fields.recordType ||
+      existing.recordId !== fields.recordId
+    ) {
+      throw new ConflictError('This attachment id is already used for another record.', [
+        { field: 'id', message: 'This attachment id is already in use.' },
+      ]);
     }
-    if (fields.caption && fields.caption !== existing.caption) await repository.update({ id: existing.id }, { caption: fields.caption });
+    if (fields.caption && fields.caption !== existing.caption)
+      await repository.update({ id: existing.id }, { caption: fields.caption });
     return repository.findOneByOrFail({ id: existing.id });
   }
 
   async list(user: SessionUser, query: AttachmentListQuery): Promise<AttachmentView[]> {
     await findVisibleRecord(this.dataSource.manager, user, query.recordType, query.recordId);
     const rows = await this.dataSource.getRepository(Attachment).find({
-      where: { workshopId: user.workshopId, recordType: query.recordType, recordId: query.recordId },
+      where: {
+        workshopId: user.workshopId,
+        recordType: query.recordType,
+        recordId: query.recordId,
+      },
       order: { createdAt: 'ASC', id: 'ASC' },
     });
     return this.views(rows);
@@ -85,11 +121,15 @@ export class AttachmentsService {
 
   /** The stored attachment, if the user may see the record it is on. */
   async find(user: SessionUser, id: string): Promise<Attachment> {
-    const row = await this.dataSource.getRepository(Attachment).findOne({ where: { id, workshopId: user.workshopId } });
+    const row = await this.dataSource
+      .getRepository(Attachment)
+      .findOne({ where: { id, workshopId: user.workshopId } });
     if (!row) throw new NotFoundError('attachment', id);
-    await findVisibleRecord(this.dataSource.manager, user, row.recordType, row.recordId).catch(() => {
-      throw new NotFoundError('attachment', id);
-    });
+    await findVisibleRecord(this.dataSource.manager, user, row.recordType, row.recordId).catch(
+      () => {
+        throw new NotFoundError('attachment', id);
+      },
+    );
     return row;
   }
 
@@ -106,7 +146,11 @@ export class AttachmentsService {
 
   private async views(rows: Attachment[]): Promise<AttachmentView[]> {
     const ids = [...new Set(rows.map((r) => r.uploadedById))];
-    const users = ids.length ? await this.dataSource.getRepository(User).find({ select: { id: true, name: true }, where: { id: In(ids) } }) : [];
+    const users = ids.length
+      ? await this.dataSource
+          .getRepository(User)
+          .find({ select: { id: true, name: true }, where: { id: In(ids) } })
+      : [];
     const nameOf = new Map(users.map((u) => [u.id, u.name]));
     return rows.map((row) => ({
       id: row.id,

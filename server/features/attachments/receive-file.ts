@@ -23,13 +23,25 @@ function fromMulter(error: unknown): HttpError {
   const code = error instanceof multer.MulterError ? error.code : null;
   if (code === 'LIMIT_FILE_SIZE') {
     const message = `The file is larger than ${megabytes(MAX_ATTACHMENT_BYTES)}. Send a smaller photo or a shorter document.`;
-    return new HttpError(413, 'file-too-large', 'File too large', message, [{ field: 'file', message }]);
+    return new HttpError(413, 'file-too-large', 'File too large', message, [
+      { field: 'file', message },
+    ]);
   }
   if (code === 'LIMIT_FILE_COUNT' || code === 'LIMIT_UNEXPECTED_FILE') {
-    return new ValidationError([{ field: 'file', message: 'Send one file at a time, in the field named file.' }]);
+    return new ValidationError([
+      { field: 'file', message: 'Send one file at a time, in the field named file.' },
+    ]);
   }
-  if (code) return new ValidationError([{ field: '(request)', message: 'The upload has too many or too long fields.' }]);
-  return new HttpError(400, 'bad-upload', 'The upload could not be read', 'The upload was cut off or is not a multipart form. Try again.');
+  if (code)
+    return new ValidationError([
+      { field: '(request)', message: 'The upload has too many or too long fields.' },
+    ]);
+  return new HttpError(
+    400,
+    'bad-upload',
+    'The upload could not be read',
+    'The upload was cut off or is not a multipart form. Try again.',
+  );
 }
 
 /** Reads the multipart upload into `req.file`, answering size and count limits as problems. */
@@ -41,10 +53,17 @@ export const receiveFile: RequestHandler = (req, res, next) => {
  * The file's type from its content (magic numbers), whatever its name or the client's claim say.
  * Anything not on the accepted list is refused with 415 and the field named.
  */
-export async function sniffAcceptedType(file: { buffer: Buffer; originalname: string }): Promise<AcceptedMimeType> {
+export async function sniffAcceptedType(file: {
+  buffer: Buffer;
+  originalname: string;
+}): Promise<AcceptedMimeType> {
   const found = await fileTypeFromBuffer(file.buffer);
   if (found && found.mime in ACCEPTED_FILE_TYPES) return found.mime as AcceptedMimeType;
-  const what = found ? `its content is ${found.mime}` : 'its content is not a recognised photo or document format';
+  const what = found
+    ? `its content is ${found.mime}`
+    : 'its content is not a recognised photo or document format';
   const message = `${file.originalname || 'The file'} cannot be attached: ${what}. Send ${ACCEPTED_TYPE_WORDS}, whatever the file name says.`;
-  throw new HttpError(415, 'unsupported-file-type', 'Unsupported file type', message, [{ field: 'file', message }]);
+  throw new HttpError(415, 'unsupported-file-type', 'Unsupported file type', message, [
+    { field: 'file', message },
+  ]);
 }

@@ -1,7 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { browserAgent, DEMO, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  browserAgent,
+  DEMO,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 import { User } from '../users/user.entity.js';
 import { Session } from './session.entity.js';
 
@@ -12,13 +18,20 @@ beforeAll(async () => {
 afterAll(() => server.close());
 
 const sessionCount = () => server.dataSource.getRepository(Session).count();
-const cookieOf = (res: supertest.Response) => ([] as string[]).concat(res.headers['set-cookie'] ?? []).join('; ');
+const cookieOf = (res: supertest.Response) =>
+  ([] as string[]).concat(res.headers['set-cookie'] ?? []).join('; ');
 
 describe('sign-in', () => {
   it('signs in with the right password and sets an HttpOnly, SameSite=Lax session cookie', async () => {
-    const res = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: DEMO.technician, password: 'ringseat-demo' });
+    const res = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO.technician, password: 'ringseat-demo' });
     expect(res.status).toBe(200);
-    expect(res.body.user).toMatchObject({ email: DEMO.technician, role: 'technician', workshopName: 'Tidewright Marine Works' });
+    expect(res.body.user).toMatchObject({
+      email: DEMO.technician,
+      role: 'technician',
+      workshopName: 'Tidewright Marine Works',
+    });
     const cookie = cookieOf(res);
     expect(cookie).toMatch(/^ringseat_session=\w+/);
     expect(cookie).toContain('HttpOnly');
@@ -27,25 +40,37 @@ describe('sign-in', () => {
   });
 
   it('accepts the e-mail address in any case and with spaces around it', async () => {
-    const res = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: '  IVO@Tidewright.example ', password: 'ringseat-demo' });
+    const res = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: '  IVO@Tidewright.example ', password: 'ringseat-demo' });
     expect(res.status).toBe(200);
   });
 
   it('refuses a wrong password and an unknown e-mail with the same 401 problem, and creates no session', async () => {
     const before = await sessionCount();
-    const wrong = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'not-the-password' });
-    const unknown = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: 'nobody@tidewright.example', password: 'whatever-it-is' });
+    const wrong = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO.manager, password: 'not-the-password' });
+    const unknown = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 'nobody@tidewright.example', password: 'whatever-it-is' });
     for (const res of [wrong, unknown]) {
       expect(res.status).toBe(401);
       expect(res.headers['content-type']).toContain('application/problem+json');
-      expect(res.body).toMatchObject({ status: 401, title: 'Sign-in failed', detail: 'The e-mail address or the password is not right.' });
+      expect(res.body).toMatchObject({
+        status: 401,
+        title: 'Sign-in failed',
+        detail: 'The e-mail address or the password is not right.',
+      });
       expect(res.headers['set-cookie']).toBeUndefined();
     }
     expect(await sessionCount()).toBe(before);
   });
 
   it('names each wrong field when the body has the wrong types', async () => {
-    const res = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: 42, password: ['x'] });
+    const res = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: 42, password: ['x'] });
     expect(res.status).toBe(400);
     expect(res.body.type).toBe('/problems/validation-failed');
     const fields = res.body.errors.map((e: { field: string }) => e.field);
@@ -53,14 +78,22 @@ describe('sign-in', () => {
   });
 
   it('rejects malformed JSON with 400 and no stack trace', async () => {
-    const res = await browserAgent(server.app).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": "a@b.c", ');
+    const res = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email": "a@b.c", ');
     expect(res.status).toBe(400);
-    expect(res.body).toMatchObject({ type: '/problems/malformed-json', detail: 'The request body is not valid JSON.' });
+    expect(res.body).toMatchObject({
+      type: '/problems/malformed-json',
+      detail: 'The request body is not valid JSON.',
+    });
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.(js|ts):\d+/);
   });
 
   it('rejects an oversize JSON body with 413', async () => {
-    const res = await browserAgent(server.app).post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'x'.repeat(200_000) });
+    const res = await browserAgent(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO.manager, password: 'x'.repeat(200_000) });
     expect(res.status).toBe(413);
     expect(res.body.type).toBe('/problems/body-too-large');
   });
@@ -69,14 +102,19 @@ describe('sign-in', () => {
 describe('origin check on state-changing requests', () => {
   it('refuses a sign-in without an Origin header and creates no session', async () => {
     const before = await sessionCount();
-    const res = await supertest(server.app).post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'ringseat-demo' });
+    const res = await supertest(server.app)
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO.manager, password: 'ringseat-demo' });
     expect(res.status).toBe(403);
     expect(res.body.type).toBe('/problems/origin-missing');
     expect(await sessionCount()).toBe(before);
   });
 
   it('refuses a request from another site', async () => {
-    const res = await browserAgent(server.app).set('Origin', 'https://evil.example').post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'ringseat-demo' });
+    const res = await browserAgent(server.app)
+      .set('Origin', 'https://evil.example')
+      .post('/api/auth/sign-in')
+      .send({ email: DEMO.manager, password: 'ringseat-demo' });
     expect(res.status).toBe(403);
     expect(res.body.type).toBe('/problems/origin-mismatch');
   });
@@ -90,7 +128,10 @@ describe('origin check on state-changing requests', () => {
 describe('sessions', () => {
   it('knows who is signed in, and forgets after sign-out', async () => {
     const agent = await signedInAgent(server.app, DEMO.skipperA);
-    expect((await agent.get('/api/auth/me')).body.user).toMatchObject({ email: DEMO.skipperA, role: 'skipper' });
+    expect((await agent.get('/api/auth/me')).body.user).toMatchObject({
+      email: DEMO.skipperA,
+      role: 'skipper',
+    });
     const out = await agent.post('/api/auth/sign-out');
     expect(out.status).toBe(204);
     expect(cookieOf(out)).toMatch(/ringseat_session=;.*Max-Age=0/);
@@ -98,17 +139,25 @@ describe('sessions', () => {
   });
 
   it('treats a forged session cookie as signed out and clears it', async () => {
-    const res = await supertest(server.app).get('/api/auth/me').set('Cookie', 'ringseat_session=forgedforgedforgedforged');
+    const res = await supertest(server.app)
+      .get('/api/auth/me')
+      .set('Cookie', 'ringseat_session=forgedforgedforgedforged');
     expect(res.status).toBe(401);
     expect(res.body.type).toBe('/problems/unauthenticated');
     expect(cookieOf(res)).toMatch(/ringseat_session=;/);
   });
 
   it('treats an expired session as signed out and removes it', async () => {
-    const user = await server.dataSource.getRepository(User).findOneByOrFail({ email: DEMO.manager });
+    const user = await server.dataSource
+      .getRepository(User)
+      .findOneByOrFail({ email: DEMO.manager });
     const id = randomUUID().replace(/-/g, '');
-    await server.dataSource.getRepository(Session).insert({ id, userId: user.id, expiresAt: Date.now() - 1000 });
-    const res = await supertest(server.app).get('/api/auth/me').set('Cookie', `ringseat_session=${id}`);
+    await server.dataSource
+      .getRepository(Session)
+      .insert({ id, userId: user.id, expiresAt: Date.now() - 1000 });
+    const res = await supertest(server.app)
+      .get('/api/auth/me')
+      .set('Cookie', `ringseat_session=${id}`);
     expect(res.status).toBe(401);
     expect(await server.dataSource.getRepository(Session).existsBy({ id })).toBe(false);
   });
@@ -123,11 +172,17 @@ describe('rate limit and secure cookies', () => {
   it('stops sign-in attempts past the limit with 429', async () => {
     const limited = await startTestServer({ signInLimit: { windowMs: 60_000, limit: 3 } });
     try {
-      const attempt = () => browserAgent(limited.app).post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'guess-guess' });
+      const attempt = () =>
+        browserAgent(limited.app)
+          .post('/api/auth/sign-in')
+          .send({ email: DEMO.manager, password: 'guess-guess' });
       for (let i = 0; i < 3; i++) expect((await attempt()).status).toBe(401);
       const blocked = await attempt();
       expect(blocked.status).toBe(429);
-      expect(blocked.body).toMatchObject({ type: '/problems/too-many-sign-ins', detail: 'Too many attempts from this device. Wait 1 minutes and try again.' });
+      expect(blocked.body).toMatchObject({
+        type: '/problems/too-many-sign-ins',
+        detail: 'Too many attempts from this device. Wait 1 minutes and try again.',
+      });
     } finally {
       await limited.close();
     }
@@ -136,7 +191,10 @@ describe('rate limit and secure cookies', () => {
   it('marks the cookie Secure when served over https', async () => {
     const secure = await startTestServer({ publicOrigin: 'https://ringseat.test' });
     try {
-      const res = await browserAgent(secure.app).set('Origin', 'https://ringseat.test').post('/api/auth/sign-in').send({ email: DEMO.manager, password: 'ringseat-demo' });
+      const res = await browserAgent(secure.app)
+        .set('Origin', 'https://ringseat.test')
+        .post('/api/auth/sign-in')
+        .send({ email: DEMO.manager, password: 'ringseat-demo' });
       expect(res.status).toBe(200);
       expect(cookieOf(res)).toContain('Secure');
     } finally {

@@ -10,7 +10,11 @@ import type { AuthService } from './auth.service.js';
 
 export type SignInLimit = { windowMs: number; limit: number };
 
-export function authRouter(service: AuthService, lucia: AppLucia, signInLimit: SignInLimit): Router {
+export function authRouter(
+  service: AuthService,
+  lucia: AppLucia,
+  signInLimit: SignInLimit,
+): Router {
   const router = Router();
   /** Sets the cookie and answers with the user the new session belongs to. */
   const startSession = async (res: Response, sessionId: string, status: number) => {
@@ -28,7 +32,12 @@ export function authRouter(service: AuthService, lucia: AppLucia, signInLimit: S
     skipSuccessfulRequests: true,
     handler: (req, res) => {
       const minutes = Math.ceil(signInLimit.windowMs / 60_000);
-      const error = new HttpError(429, 'too-many-sign-ins', 'Too many sign-in attempts', `Too many attempts from this device. Wait ${minutes} minutes and try again.`);
+      const error = new HttpError(
+        429,
+        'too-many-sign-ins',
+        'Too many sign-in attempts',
+        `Too many attempts from this device. Wait ${minutes} minutes and try again.`,
+      );
       res.status(429).type('application/problem+json').json(problemFrom(error, req.originalUrl));
     },
   });
@@ -48,10 +57,15 @@ export function authRouter(service: AuthService, lucia: AppLucia, signInLimit: S
     res.json({ user: currentUser(res) });
   });
 
-  router.post('/accept-invite', limiter, validate({ body: AcceptInviteInputSchema }), async (req, res) => {
-    const session = await service.acceptInvite(req.body);
-    await startSession(res, session.id, 201);
-  });
+  router.post(
+    '/accept-invite',
+    limiter,
+    validate({ body: AcceptInviteInputSchema }),
+    async (req, res) => {
+      const session = await service.acceptInvite(req.body);
+      await startSession(res, session.id, 201);
+    },
+  );
 
   return router;
 }

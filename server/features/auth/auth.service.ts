@@ -23,7 +23,9 @@ export class AuthService {
   ) {}
 
   async signIn(input: SignInInput) {
-    const user = await this.dataSource.getRepository(User).findOne({ where: { email: input.email, archivedAt: IsNull() } });
+    const user = await this.dataSource
+      .getRepository(User)
+      .findOne({ where: { email: input.email, archivedAt: IsNull() } });
     if (!user) {
       this.decoyHash ??= hashPassword('decoy password for timing');
       await verifyPassword(await this.decoyHash, input.password);
@@ -45,7 +47,8 @@ export class AuthService {
       .getRepository(Invite)
       .findOne({ where: { tokenHash: hashToken(token) }, relations: { workshop: true } });
     if (!invite) throw new NotFoundError('invite');
-    if (invite.acceptedAt) throw new GoneError('This invite has already been used. Sign in with the password you set.');
+    if (invite.acceptedAt)
+      throw new GoneError('This invite has already been used. Sign in with the password you set.');
     if (invite.expiresAt.getTime() < this.clock.now().getTime()) {
       throw new GoneError('This invite has expired. Ask your workshop to send a new one.');
     }
@@ -59,9 +62,10 @@ export class AuthService {
     const userId = randomUUID();
     await this.dataSource.transaction(async (manager) => {
       if (await manager.getRepository(User).exists({ where: { email: invite.email } })) {
-        throw new ConflictError('An account with this e-mail address already exists. Sign in instead.', [
-          { field: 'token', message: 'This e-mail address already has an account.' },
-        ]);
+        throw new ConflictError(
+          'An account with this e-mail address already exists. Sign in instead.',
+          [{ field: 'token', message: 'This e-mail address already has an account.' }],
+        );
       }
       await manager.getRepository(User).insert({
         id: userId,
@@ -73,9 +77,13 @@ export class AuthService {
         archivedAt: null,
       });
       if (invite.role === 'skipper' && invite.vesselIds.length > 0) {
-        await manager.getRepository(VesselSkipper).insert(invite.vesselIds.map((vesselId) => ({ vesselId, userId })));
+        await manager
+          .getRepository(VesselSkipper)
+          .insert(invite.vesselIds.map((vesselId) => ({ vesselId, userId })));
       }
-      await manager.getRepository(Invite).update({ id: invite.id }, { acceptedAt: this.clock.now() });
+      await manager
+        .getRepository(Invite)
+        .update({ id: invite.id }, { acceptedAt: this.clock.now() });
     });
     return this.lucia.createSession(userId, {});
   }

@@ -1,10 +1,23 @@
-import { Lucia, TimeSpan, type Adapter, type DatabaseSession, type DatabaseUser, type User as LuciaUser } from 'lucia';
+import {
+  Lucia,
+  TimeSpan,
+  type Adapter,
+  type DatabaseSession,
+  type DatabaseUser,
+  type User as LuciaUser,
+} from 'lucia';
 import { IsNull, LessThan, type DataSource } from 'typeorm';
 import type { Role, SessionUser } from '../../../shared/auth/auth.schema.js';
 import { User } from '../users/user.entity.js';
 import { Session } from './session.entity.js';
 
-type UserAttributes = { email: string; name: string; role: Role; workshopId: string; workshopName: string };
+type UserAttributes = {
+  email: string;
+  name: string;
+  role: Role;
+  workshopId: string;
+  workshopName: string;
+};
 
 /** Lucia's storage interface over the TypeORM data source (sessions table + users joined to workshops). */
 export class TypeormSessionAdapter implements Adapter {
@@ -14,12 +27,15 @@ export class TypeormSessionAdapter implements Adapter {
     return this.dataSource.getRepository(Session);
   }
 
-  async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
+  async getSessionAndUser(
+    sessionId: string,
+  ): Promise<[DatabaseSession | null, DatabaseUser | null]> {
     const session = await this.sessions.findOne({ where: { id: sessionId } });
     if (!session) return [null, null];
-    const user = await this.dataSource
-      .getRepository(User)
-      .findOne({ where: { id: session.userId, archivedAt: IsNull() }, relations: { workshop: true } });
+    const user = await this.dataSource.getRepository(User).findOne({
+      where: { id: session.userId, archivedAt: IsNull() },
+      relations: { workshop: true },
+    });
     if (!user) return [null, null];
     return [toDatabaseSession(session), toDatabaseUser(user)];
   }
@@ -30,7 +46,11 @@ export class TypeormSessionAdapter implements Adapter {
   }
 
   async setSession(session: DatabaseSession): Promise<void> {
-    await this.sessions.insert({ id: session.id, userId: session.userId, expiresAt: session.expiresAt.getTime() });
+    await this.sessions.insert({
+      id: session.id,
+      userId: session.userId,
+      expiresAt: session.expiresAt.getTime(),
+    });
   }
 
   async updateSessionExpiration(sessionId: string, expiresAt: Date): Promise<void> {

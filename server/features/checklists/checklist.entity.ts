@@ -1,4 +1,13 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryColumn,
+  UpdateDateColumn,
+} from 'typeorm';
 import type { ChecklistInput } from '../../../shared/checklists/checklist.schema.js';
 import type { ChecklistEvaluation } from '../../../shared/checklists/evaluate-checklist.js';
 import { Engine } from '../vessels/engine.entity.js';

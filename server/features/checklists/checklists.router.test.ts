@@ -1,6 +1,13 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { CHECK_ITEM_IDS } from '../../../shared/checklists/checklist-items.js';
-import { addOtherWorkshop, DEMO, FakeClock, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  FakeClock,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 import { Engine } from '../vessels/engine.entity.js';
 import { CommissioningChecklist } from './checklist.entity.js';
 
@@ -13,13 +20,17 @@ beforeAll(async () => {
 });
 afterAll(() => server.close());
 
-const engineId = async (serialNumber: string) => (await server.dataSource.getRepository(Engine).findOneByOrFail({ serialNumber })).id;
+const engineId = async (serialNumber: string) =>
+  (await server.dataSource.getRepository(Engine).findOneByOrFail({ serialNumber })).id;
 const allChecks = Object.fromEntries(CHECK_ITEM_IDS.map((id) => [id, { result: 'pass' }]));
 
 // Gannet's outboard: 12-pole charging coil, rated 5000–6000 rpm, pitch 15 in (demo data).
 const partDone = {
   tachometer: { measuredHz: 300, tachReadingRpm: 3040 }, // 12-pole coil: 300 Hz = 3000 rpm (common practice); +1.3 %
-  checks: { steering: { result: 'pass' }, killSwitch: { result: 'fail', note: 'Lanyard clip missing' } },
+  checks: {
+    steering: { result: 'pass' },
+    killSwitch: { result: 'fail', note: 'Lanyard clip missing' },
+  },
 };
 const finished = {
   tachometer: { measuredHz: 300, tachReadingRpm: 3040 },
@@ -35,7 +46,11 @@ describe('commissioning checklist', () => {
     const res = await tech.get(`/api/engines/${await engineId('NV150-26-01127')}/checklist`);
     expect(res.status).toBe(200);
     expect(res.body.checklist).toMatchObject({ id: null, completedAt: null, updatedBy: null });
-    expect(res.body.checklist.evaluation.summary).toMatchObject({ total: 12, open: 12, readyToComplete: false });
+    expect(res.body.checklist.evaluation.summary).toMatchObject({
+      total: 12,
+      open: 12,
+      readyToComplete: false,
+    });
   });
 
   it('saves part-done with the evaluation, and keeps it for later', async () => {
@@ -48,22 +63,39 @@ describe('commissioning checklist', () => {
     expect(checklist.updatedBy.name).toBe('Ivo Brandt');
     expect(checklist.evaluation.summary).toMatchObject({ passed: 2, failed: 1, open: 9 });
     const tach = checklist.evaluation.items.find((i: { id: string }) => i.id === 'tachometer');
-    expect(tach.figures[0]).toEqual({ label: 'True engine speed (from 300 Hz)', value: '3000 rpm' });
+    expect(tach.figures[0]).toEqual({
+      label: 'True engine speed (from 300 Hz)',
+      value: '3000 rpm',
+    });
 
     const again = await tech.get(`/api/engines/${id}/checklist`);
-    expect(again.body.checklist.entries.checks.killSwitch).toEqual({ result: 'fail', note: 'Lanyard clip missing' });
+    expect(again.body.checklist.entries.checks.killSwitch).toEqual({
+      result: 'fail',
+      note: 'Lanyard clip missing',
+    });
     expect(again.body.checklist.entries.charging.chemistry).toBeNull();
   });
 
   it('refuses to complete with every unfinished item named, and changes nothing', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
     const id = await engineId('NV60-26-00418');
-    const res = await tech.post(`/api/engines/${id}/checklist/complete`).send({ ...finished, checks: { ...allChecks, leaks: { result: 'fail', note: 'Weep at the fuel filter' } }, charging: {} });
+    const res = await tech.post(`/api/engines/${id}/checklist/complete`).send({
+      ...finished,
+      checks: { ...allChecks, leaks: { result: 'fail', note: 'Weep at the fuel filter' } },
+      charging: {},
+    });
     expect(res.status).toBe(400);
     expect(res.body.detail).toBe('The checklist cannot be completed yet: 2 items need attention.');
-    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['charging', 'checks.leaks']);
-    expect(res.body.errors[0].message).toBe('Charging voltage at cruising RPM: not finished. Choose the battery chemistry.');
-    const row = await server.dataSource.getRepository(CommissioningChecklist).findOneByOrFail({ engineId: id });
+    expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual([
+      'charging',
+      'checks.leaks',
+    ]);
+    expect(res.body.errors[0].message).toBe(
+      'Charging voltage at cruising RPM: not finished. Choose the battery chemistry.',
+    );
+    const row = await server.dataSource
+      .getRepository(CommissioningChecklist)
+      .findOneByOrFail({ engineId: id });
     expect(row.completedAt).toBeNull();
     expect(row.entries.checks.leaks.result).toBeNull();
   });
@@ -73,7 +105,10 @@ describe('commissioning checklist', () => {
     const id = await engineId('NV60-26-00418');
     const res = await manager.post(`/api/engines/${id}/checklist/complete`).send(finished);
     expect(res.status).toBe(200);
-    expect(res.body.checklist).toMatchObject({ completedAt: '2026-11-20T14:30:00.000Z', completedBy: { name: 'Maren Holt' } });
+    expect(res.body.checklist).toMatchObject({
+      completedAt: '2026-11-20T14:30:00.000Z',
+      completedBy: { name: 'Maren Holt' },
+    });
     expect(res.body.checklist.evaluation.summary.readyToComplete).toBe(true);
 
     const change = await manager.put(`/api/engines/${id}/checklist`).send(partDone);
@@ -85,7 +120,9 @@ describe('commissioning checklist', () => {
 
   it('names a bad measured value by its field', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
-    const res = await tech.put(`/api/engines/${await engineId('NV150-26-01131')}/checklist`).send({ charging: { measuredV: 'high' }, tachometer: { tachReadingRpm: 3000.5 } });
+    const res = await tech
+      .put(`/api/engines/${await engineId('NV150-26-01131')}/checklist`)
+      .send({ charging: { measuredV: 'high' }, tachometer: { tachReadingRpm: 3000.5 } });
     expect(res.status).toBe(400);
     expect(res.body.errors).toEqual([
       { field: 'tachometer.tachReadingRpm', message: 'Tachometer reading must be a whole number.' },
@@ -98,7 +135,9 @@ describe('commissioning checklist', () => {
     const id = await engineId('NV60-26-00418');
     expect((await skipper.get(`/api/engines/${id}/checklist`)).status).toBe(200);
     expect((await skipper.put(`/api/engines/${id}/checklist`).send(partDone)).status).toBe(403);
-    expect((await skipper.post(`/api/engines/${id}/checklist/complete`).send(finished)).status).toBe(403);
+    expect(
+      (await skipper.post(`/api/engines/${id}/checklist/complete`).send(finished)).status,
+    ).toBe(403);
     const notOwn = await signedInAgent(server.app, DEMO.skipperB);
     expect((await notOwn.get(`/api/engines/${id}/checklist`)).status).toBe(404);
   });
@@ -108,6 +147,8 @@ describe('commissioning checklist', () => {
     const id = await engineId('B321-D-77841');
     expect((await other.get(`/api/engines/${id}/checklist`)).status).toBe(404);
     expect((await other.put(`/api/engines/${id}/checklist`).send(partDone)).status).toBe(404);
-    expect(await server.dataSource.getRepository(CommissioningChecklist).countBy({ engineId: id })).toBe(0);
+    expect(
+      await server.dataSource.getRepository(CommissioningChecklist).countBy({ engineId: id }),
+    ).toBe(0);
   });
 });

@@ -1,9 +1,16 @@
 import { randomUUID } from 'node:crypto';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import { ChecklistInputSchema, emptyChecklist, type ChecklistInput } from '../../../shared/checklists/checklist.schema.js';
+import {
+  ChecklistInputSchema,
+  emptyChecklist,
+  type ChecklistInput,
+} from '../../../shared/checklists/checklist.schema.js';
 import type { ChecklistView } from '../../../shared/checklists/checklist-view.js';
-import { completionProblems, evaluateChecklist } from '../../../shared/checklists/evaluate-checklist.js';
+import {
+  completionProblems,
+  evaluateChecklist,
+} from '../../../shared/checklists/evaluate-checklist.js';
 import { systemClock, type Clock } from '../../lib/clock.js';
 import { ConflictError, ValidationError } from '../../lib/errors.js';
 import { User } from '../users/user.entity.js';
@@ -20,7 +27,9 @@ export class ChecklistsService {
   /** The engine's checklist, or an empty one not saved yet. */
   async get(user: SessionUser, engineId: string): Promise<ChecklistView> {
     const engine = await findVisibleEngine(this.dataSource.manager, user, engineId);
-    const row = await this.dataSource.getRepository(CommissioningChecklist).findOne({ where: { engineId } });
+    const row = await this.dataSource
+      .getRepository(CommissioningChecklist)
+      .findOne({ where: { engineId } });
     return this.view(this.dataSource.manager, engine, row);
   }
 
@@ -37,13 +46,20 @@ export class ChecklistsService {
    * Saves and completes in one step, recording who and when. Refused with every unfinished or
    * failed item named when the checklist is not ready; then nothing at all is changed.
    */
-  async complete(user: SessionUser, engineId: string, input: ChecklistInput): Promise<ChecklistView> {
+  async complete(
+    user: SessionUser,
+    engineId: string,
+    input: ChecklistInput,
+  ): Promise<ChecklistView> {
     return this.dataSource.transaction(async (manager) => {
       const { engine, row } = await this.writable(manager, user, engineId);
       const evaluation = evaluateChecklist(input, engine);
       if (!evaluation.summary.readyToComplete) {
         const problems = completionProblems(evaluation);
-        throw new ValidationError(problems, `The checklist cannot be completed yet: ${problems.length} ${problems.length === 1 ? 'item needs' : 'items need'} attention.`);
+        throw new ValidationError(
+          problems,
+          `The checklist cannot be completed yet: ${problems.length} ${problems.length === 1 ? 'item needs' : 'items need'} attention.`,
+        );
       }
       const saved = await this.store(manager, user, engine, row, input, true);
       return this.view(manager, engine, saved);
@@ -52,15 +68,27 @@ export class ChecklistsService {
 
   private async writable(manager: EntityManager, user: SessionUser, engineId: string) {
     const engine = await findVisibleEngine(manager, user, engineId);
-    if (engine.archivedAt) throw new ConflictError('This engine is archived. Restore it before changing its checklist.');
-    const row = await manager.getRepository(CommissioningChecklist).findOne({ where: { engineId } });
+    if (engine.archivedAt)
+      throw new ConflictError('This engine is archived. Restore it before changing its checklist.');
+    const row = await manager
+      .getRepository(CommissioningChecklist)
+      .findOne({ where: { engineId } });
     if (row?.completedAt) {
-      throw new ConflictError('This checklist was completed at handover and is kept as the record of it; it can no longer be changed.');
+      throw new ConflictError(
+        'This checklist was completed at handover and is kept as the record of it; it can no longer be changed.',
+      );
     }
     return { engine, row };
   }
 
-  private async store(manager: EntityManager, user: SessionUser, engine: Engine, row: CommissioningChecklist | null, entries: ChecklistInput, completing: boolean) {
+  private async store(
+    manager: EntityManager,
+    user: SessionUser,
+    engine: Engine,
+    row: CommissioningChecklist | null,
+    entries: ChecklistInput,
+    completing: boolean,
+  ) {
     const saved = Object.assign(row ?? new CommissioningChecklist(), {
       id: row?.id ?? randomUUID(),
       workshopId: engine.workshopId,
@@ -74,10 +102,22 @@ export class ChecklistsService {
     return manager.getRepository(CommissioningChecklist).save(saved);
   }
 
-  private async view(manager: EntityManager, engine: Engine, row: CommissioningChecklist | null): Promise<ChecklistView> {
+  private async view(
+    manager: EntityManager,
+    engine: Engine,
+    row: CommissioningChecklist | null,
+  ): Promise<ChecklistView> {
     if (!row) {
       const entries = emptyChecklist();
-      const base = { id: null, engineId: engine.id, entries, updatedAt: null, updatedBy: null, completedAt: null, completedBy: null };
+      const base = {
+        id: null,
+        engineId: engine.id,
+        entries,
+        updatedAt: null,
+        updatedBy: null,
+        completedAt: null,
+        completedBy: null,
+      };
       return { ...base, evaluation: evaluateChecklist(entries, engine) };
     }
     // Stored entries go back through the schema, so fields added later get their defaults.
@@ -98,8 +138,13 @@ export class ChecklistsService {
 
   private async names(manager: EntityManager, ids: Array<string | null>) {
     const wanted = ids.filter((id): id is string => Boolean(id));
-    const users = wanted.length ? await manager.getRepository(User).find({ select: { id: true, name: true }, where: { id: In(wanted) } }) : [];
+    const users = wanted.length
+      ? await manager
+          .getRepository(User)
+          .find({ select: { id: true, name: true }, where: { id: In(wanted) } })
+      : [];
     const nameOf = new Map(users.map((u) => [u.id, u.name]));
-    return (id: string | null) => (id ? { id, name: nameOf.get(id) ?? 'a former member of staff' } : null);
+    return (id: string | null) =>
+      id ? { id, name: nameOf.get(id) ?? 'a former member of staff' } : null;
   }
 }

@@ -7,9 +7,17 @@ export function healthRouter(dataSource: DataSource): Router {
   router.get('/health', async (_req, res) => {
     try {
       await dataSource.query('SELECT 1');
-      res.json({ status: 'ok', database: 'reachable', migrations: await migrationLevel(dataSource) });
+      res.json({
+        status: 'ok',
+        database: 'reachable',
+        migrations: await migrationLevel(dataSource),
+      });
     } catch {
-      res.status(503).type('application/problem+json').json({ type: '/problems/database-unreachable', title: 'Database unreachable', status: 503 });
+      res.status(503).type('application/problem+json').json({
+        type: '/problems/database-unreachable',
+        title: 'Database unreachable',
+        status: 503,
+      });
     }
   });
   return router;

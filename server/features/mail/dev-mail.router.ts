@@ -7,7 +7,11 @@ import type { CaughtMessage, MailCatcher } from './mail-catcher.js';
  * server page (not part of the app bundle) so it works even when the client is not built.
  */
 
-const esc = (text: string) => text.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+const esc = (text: string) =>
+  text.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!,
+  );
 
 const STYLE = `body{margin:0;background:#f3ead6;color:#1b1813;font:17px/1.5 system-ui,sans-serif}
 main{max-width:60rem;margin:0 auto;padding:1rem}h1{font-size:1.8rem}
@@ -24,7 +28,10 @@ function page(title: string, body: string): string {
 
 function messageHtml(m: CaughtMessage, index: number): string {
   const files = m.attachments
-    .map((a) => `<li><a class="att" href="/dev/mail/${m.id}/attachments/${a.index}" download>${esc(a.filename)}</a> <span class="meta">${esc(a.contentType)}, ${Math.ceil(a.size / 1024)} KB</span></li>`)
+    .map(
+      (a) =>
+        `<li><a class="att" href="/dev/mail/${m.id}/attachments/${a.index}" download>${esc(a.filename)}</a> <span class="meta">${esc(a.contentType)}, ${Math.ceil(a.size / 1024)} KB</span></li>`,
+    )
     .join('');
   return `<details ${index === 0 ? 'open' : ''}><summary>${esc(m.subject)}</summary>
 <p class="meta">From ${esc(m.from)} to ${esc(m.to.join(', '))}, received ${esc(new Date(m.receivedAt).toUTCString())}</p>
@@ -39,7 +46,15 @@ const managersOnly: RequestHandler = (req, res, next) => {
     return;
   }
   if (user.role !== 'manager') {
-    res.status(403).type('html').send(page('Not allowed', '<h1>Not allowed</h1><p>Only the workshop\u2019s managers can read the local mailbox.</p><p><a href="/">Back to Ringseat</a></p>'));
+    res
+      .status(403)
+      .type('html')
+      .send(
+        page(
+          'Not allowed',
+          '<h1>Not allowed</h1><p>Only the workshop\u2019s managers can read the local mailbox.</p><p><a href="/">Back to Ringseat</a></p>',
+        ),
+      );
     return;
   }
   next();
@@ -48,7 +63,15 @@ const managersOnly: RequestHandler = (req, res, next) => {
 const ParamsSchema = z.object({ id: z.uuid(), index: z.coerce.number().int().nonnegative() });
 
 function notFound(res: Response) {
-  res.status(404).type('html').send(page('Not found', '<h1>Not found</h1><p>No such e-mail or attachment.</p><p><a href="/dev/mail">Back to the mailbox</a></p>'));
+  res
+    .status(404)
+    .type('html')
+    .send(
+      page(
+        'Not found',
+        '<h1>Not found</h1><p>No such e-mail or attachment.</p><p><a href="/dev/mail">Back to the mailbox</a></p>',
+      ),
+    );
 }
 
 export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Router {
@@ -57,11 +80,19 @@ export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Ro
 
   router.get('/', (_req, res) => {
     const messages = catcher.list();
-    const list = messages.length === 0 ? '<p>No e-mail has been sent yet.</p>' : messages.map(messageHtml).join('');
+    const list =
+      messages.length === 0
+        ? '<p>No e-mail has been sent yet.</p>'
+        : messages.map(messageHtml).join('');
     res.setHeader('Cache-Control', 'no-store');
-    res.type('html').send(page('Local mailbox', `<h1>Local mailbox</h1>
+    res.type('html').send(
+      page(
+        'Local mailbox',
+        `<h1>Local mailbox</h1>
 <p class="meta">Every e-mail Ringseat sent while no outside mail server is set up lands here instead of being delivered (${messages.length} kept, newest first). Set SMTP_HOST to send real mail.</p>
-<p><a href="/">Back to Ringseat</a></p>${list}`));
+<p><a href="/">Back to Ringseat</a></p>${list}`,
+      ),
+    );
   });
 
   router.get('/messages.json', (_req, res) => {
@@ -71,7 +102,9 @@ export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Ro
 
   router.get('/:id/attachments/:index', async (req, res) => {
     const params = ParamsSchema.safeParse(req.params);
-    const found = params.success ? await catcher.attachment(params.data.id, params.data.index) : null;
+    const found = params.success
+      ? await catcher.attachment(params.data.id, params.data.index)
+      : null;
     if (!found) return notFound(res);
     res.setHeader('Content-Type', found.contentType);
     res.setHeader('X-Content-Type-Options', 'nosniff');

@@ -21,7 +21,9 @@ const MAX_KEPT = 500;
 const MAX_SIZE = 25 * 1024 * 1024;
 
 const addresses = (field: ParsedMail['to']): string[] =>
-  (Array.isArray(field) ? field : field ? [field] : []).flatMap((a) => a.value.map((v) => v.address ?? '')).filter(Boolean);
+  (Array.isArray(field) ? field : field ? [field] : [])
+    .flatMap((a) => a.value.map((v) => v.address ?? ''))
+    .filter(Boolean);
 
 /**
  * The local stand-in for a mail provider: a real SMTP server inside the process, on a free
@@ -32,7 +34,11 @@ export class MailCatcher {
   private readonly messages: Stored[] = [];
   private readonly waiters = new Set<() => void>();
 
-  private constructor(private readonly server: SMTPServer, readonly port: number, private readonly dir: string | null) {}
+  private constructor(
+    private readonly server: SMTPServer,
+    readonly port: number,
+    private readonly dir: string | null,
+  ) {}
 
   static async start(options: { dir?: string; host?: string } = {}): Promise<MailCatcher> {
     const dir = options.dir ?? null;
@@ -47,13 +53,18 @@ export class MailCatcher {
         const chunks: Buffer[] = [];
         stream.on('data', (chunk: Buffer) => chunks.push(chunk));
         stream.on('end', () => {
-          catcher!.receive(Buffer.concat(chunks)).then(() => callback(), (error: Error) => callback(error));
+          catcher!.receive(Buffer.concat(chunks)).then(
+            () => callback(),
+            (error: Error) => callback(error),
+          );
         });
       },
     });
     const port = await new Promise<number>((resolve, reject) => {
       server.once('error', reject);
-      server.listen(0, options.host ?? '127.0.0.1', () => resolve((server.server.address() as { port: number }).port));
+      server.listen(0, options.host ?? '127.0.0.1', () =>
+        resolve((server.server.address() as { port: number }).port),
+      );
     });
     catcher = new MailCatcher(server, port, dir);
     await catcher.loadStored();
@@ -69,7 +80,12 @@ export class MailCatcher {
       to: addresses(parsed.to),
       subject: parsed.subject ?? '(no subject)',
       text: parsed.text ?? '',
-      attachments: parsed.attachments.map((a, index) => ({ index, filename: a.filename ?? `attachment-${index + 1}`, contentType: a.contentType, size: a.size })),
+      attachments: parsed.attachments.map((a, index) => ({
+        index,
+        filename: a.filename ?? `attachment-${index + 1}`,
+        contentType: a.contentType,
+        size: a.size,
+      })),
       raw,
     };
     this.keep(message);
@@ -93,7 +109,9 @@ export class MailCatcher {
     const stored: Stored[] = [];
     for (const file of metas) {
       try {
-        const meta = JSON.parse(fs.readFileSync(path.join(this.dir, file), 'utf8')) as CaughtMessage;
+        const meta = JSON.parse(
+          fs.readFileSync(path.join(this.dir, file), 'utf8'),
+        ) as CaughtMessage;
         stored.push({ ...meta, raw: fs.readFileSync(path.join(this.dir, `${meta.id}.eml`)) });
       } catch {
         // A half-written or foreign file is skipped, never fatal.
@@ -112,12 +130,21 @@ export class MailCatcher {
     return this.list().find((m) => m.id === id);
   }
 
-  async attachment(id: string, index: number): Promise<{ filename: string; contentType: string; content: Buffer } | null> {
+  async attachment(
+    id: string,
+    index: number,
+  ): Promise<{ filename: string; contentType: string; content: Buffer } | null> {
     const message = this.messages.find((m) => m.id === id);
     if (!message) return null;
     const parsed = await simpleParser(message.raw);
     const found = parsed.attachments[index];
-    return found ? { filename: found.filename ?? `attachment-${index + 1}`, contentType: found.contentType, content: found.content } : null;
+    return found
+      ? {
+          filename: found.filename ?? `attachment-${index + 1}`,
+          contentType: found.contentType,
+          content: found.content,
+        }
+      : null;
   }
 
   /** Resolves with the first message (newest first) that matches, waiting for it to arrive. */

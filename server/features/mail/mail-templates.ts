@@ -7,8 +7,18 @@ import type { MailMessage } from '../../lib/mailer.js';
 
 const SIGNATURE = (workshop: string) => `\n\n${workshop}\nSent by Ringseat, the break-in logbook.`;
 
-export function inviteMail(input: { to: string; workshopName: string; inviterName: string; role: string; link: string; expiresOn: string }): MailMessage {
-  const what = input.role === 'skipper' ? 'log the break-in of your engine and send it to the workshop' : 'work with the team on break-in runs';
+export function inviteMail(input: {
+  to: string;
+  workshopName: string;
+  inviterName: string;
+  role: string;
+  link: string;
+  expiresOn: string;
+}): MailMessage {
+  const what =
+    input.role === 'skipper'
+      ? 'log the break-in of your engine and send it to the workshop'
+      : 'work with the team on break-in runs';
   return {
     to: [input.to],
     subject: `${input.workshopName} invites you to Ringseat`,
@@ -41,7 +51,13 @@ export function certificateMail(input: {
       `First service: ${input.firstServiceWords}. Book it with the workshop.\n\n` +
       `The engine maker's manual and warranty terms come first; where they ask for more, follow them.` +
       SIGNATURE(input.workshopName),
-    attachments: [{ filename: `break-in-certificate-${input.number}.pdf`, content: input.pdf, contentType: 'application/pdf' }],
+    attachments: [
+      {
+        filename: `break-in-certificate-${input.number}.pdf`,
+        content: input.pdf,
+        contentType: 'application/pdf',
+      },
+    ],
   };
 }
 
@@ -55,7 +71,10 @@ export function returnedMail(input: {
   comments: string;
   reasons: string[];
 }): MailMessage {
-  const reasons = input.reasons.length > 0 ? `What the log shows:\n${input.reasons.map((r) => `- ${r}`).join('\n')}\n\n` : '';
+  const reasons =
+    input.reasons.length > 0
+      ? `What the log shows:\n${input.reasons.map((r) => `- ${r}`).join('\n')}\n\n`
+      : '';
   return {
     to: input.to,
     replyTo: input.replyTo,

@@ -12,10 +12,17 @@ export type MailTestServer = TestServer & { catcher: MailCatcher; dataDir: strin
  * A test server whose e-mail goes over real SMTP to a real catcher on a free local port, with
  * its own data folder for certificates and uploads. For tests only.
  */
-export async function startMailTestServer(overrides: Partial<AppDeps> = {}): Promise<MailTestServer> {
+export async function startMailTestServer(
+  overrides: Partial<AppDeps> = {},
+): Promise<MailTestServer> {
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-files-'));
   const catcher = await MailCatcher.start({ dir: path.join(dataDir, 'mail') });
-  const mailer = createSmtpMailer({ host: '127.0.0.1', port: catcher.port, secure: false, from: 'Ringseat <no-reply@ringseat.invalid>' });
+  const mailer = createSmtpMailer({
+    host: '127.0.0.1',
+    port: catcher.port,
+    secure: false,
+    from: 'Ringseat <no-reply@ringseat.invalid>',
+  });
   const server = await startTestServer({ mailer, mailbox: catcher, dataDir, ...overrides });
   return {
     ...server,

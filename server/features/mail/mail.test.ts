@@ -3,7 +3,12 @@ import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createLogger } from '../../lib/logger.js';
 import { createSmtpMailer, loadMailSettings } from '../../lib/mailer.js';
-import { browserAgent, DEMO, signedInAgent, startTestServer } from '../../../tests/helpers/test-server.js';
+import {
+  browserAgent,
+  DEMO,
+  signedInAgent,
+  startTestServer,
+} from '../../../tests/helpers/test-server.js';
 import { MailCatcher } from './mail-catcher.js';
 import { startMailTestServer, type MailTestServer } from './mail-test-server.js';
 import { Outbox } from './outbox.js';
@@ -17,7 +22,9 @@ afterAll(() => server.close());
 describe('invite e-mails', () => {
   it('e-mails the invite link over SMTP and still answers with the link', async () => {
     const manager = await signedInAgent(server.app, DEMO.manager);
-    const res = await manager.post('/api/invites').send({ email: 'new.crew@skipper.example', role: 'skipper', vesselIds: [] });
+    const res = await manager
+      .post('/api/invites')
+      .send({ email: 'new.crew@skipper.example', role: 'skipper', vesselIds: [] });
     expect(res.status).toBe(201);
     expect(res.body.mail).toEqual({ sent: true, to: ['new.crew@skipper.example'] });
     const mail = await server.catcher.waitFor((m) => m.to.includes('new.crew@skipper.example'));
@@ -31,10 +38,16 @@ describe('invite e-mails', () => {
     const bare = await startTestServer();
     try {
       const manager = await signedInAgent(bare.app, DEMO.manager);
-      const res = await manager.post('/api/invites').send({ email: 'offline@skipper.example', role: 'technician' });
+      const res = await manager
+        .post('/api/invites')
+        .send({ email: 'offline@skipper.example', role: 'technician' });
       expect(res.status).toBe(201);
       expect(res.body.link).toContain('/invite/');
-      expect(res.body.mail).toEqual({ sent: false, to: ['offline@skipper.example'], problem: 'No mail server is set up (SMTP_HOST), so the e-mail was not sent.' });
+      expect(res.body.mail).toEqual({
+        sent: false,
+        to: ['offline@skipper.example'],
+        problem: 'No mail server is set up (SMTP_HOST), so the e-mail was not sent.',
+      });
     } finally {
       await bare.close();
     }
@@ -43,9 +56,19 @@ describe('invite e-mails', () => {
 
 describe('the local mailbox page', () => {
   it('lists what was sent for a manager, with attachments to download', async () => {
-    const mailer = createSmtpMailer({ host: '127.0.0.1', port: server.catcher.port, secure: false, from: 'Ringseat <no-reply@ringseat.invalid>' });
+    const mailer = createSmtpMailer({
+      host: '127.0.0.1',
+      port: server.catcher.port,
+      secure: false,
+      from: 'Ringseat <no-reply@ringseat.invalid>',
+    });
     const sheet = Buffer.from('%PDF-1.4 demo sheet');
-    await mailer.send({ to: ['desk@tidewright.example'], subject: 'Sheet <with> markup', text: 'See attached.', attachments: [{ filename: 'sheet.pdf', content: sheet, contentType: 'application/pdf' }] });
+    await mailer.send({
+      to: ['desk@tidewright.example'],
+      subject: 'Sheet <with> markup',
+      text: 'See attached.',
+      attachments: [{ filename: 'sheet.pdf', content: sheet, contentType: 'application/pdf' }],
+    });
     mailer.close();
     const caught = await server.catcher.waitFor((m) => m.subject === 'Sheet <with> markup');
 
@@ -56,14 +79,19 @@ describe('the local mailbox page', () => {
     expect(page.text).toContain('Sheet &lt;with&gt; markup');
     expect(page.text).not.toContain('Sheet <with> markup');
     expect(page.text).toContain(`/dev/mail/${caught.id}/attachments/0`);
-    const file = await manager.get(`/dev/mail/${caught.id}/attachments/0`).buffer(true).parse((res, done) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const file = await manager
+      .get(`/dev/mail/${caught.id}/attachments/0`)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
     expect(file.headers['content-disposition']).toContain('sheet.pdf');
     expect(Buffer.compare(file.body as Buffer, sheet)).toBe(0);
-    expect((await manager.get('/dev/mail/messages.json')).body.messages[0].subject).toBe('Sheet <with> markup');
+    expect((await manager.get('/dev/mail/messages.json')).body.messages[0].subject).toBe(
+      'Sheet <with> markup',
+    );
     expect((await manager.get(`/dev/mail/${caught.id}/attachments/9`)).status).toBe(404);
   });
 
@@ -91,7 +119,12 @@ describe('the catcher and the mail settings', () => {
   it('keeps what it caught across a restart', async () => {
     const dir = path.join(server.dataDir, 'restart-box');
     const first = await MailCatcher.start({ dir });
-    const mailer = createSmtpMailer({ host: '127.0.0.1', port: first.port, secure: false, from: 'Ringseat <no-reply@ringseat.invalid>' });
+    const mailer = createSmtpMailer({
+      host: '127.0.0.1',
+      port: first.port,
+      secure: false,
+      from: 'Ringseat <no-reply@ringseat.invalid>',
+    });
     await mailer.send({ to: ['a@b.example'], subject: 'Kept', text: 'Body' });
     mailer.close();
     await first.close();
@@ -105,17 +138,43 @@ describe('the catcher and the mail settings', () => {
     const closed = await MailCatcher.start();
     const port = closed.port;
     await closed.close();
-    const outbox = new Outbox(createSmtpMailer({ host: '127.0.0.1', port, secure: false, from: 'x@y.example' }), createLogger('silent'));
-    expect(await outbox.send({ to: ['a@b.example'], subject: 's', text: 't' })).toEqual({ sent: false, to: ['a@b.example'], problem: 'The mail server did not accept the e-mail; try again later.' });
+    const outbox = new Outbox(
+      createSmtpMailer({ host: '127.0.0.1', port, secure: false, from: 'x@y.example' }),
+      createLogger('silent'),
+    );
+    expect(await outbox.send({ to: ['a@b.example'], subject: 's', text: 't' })).toEqual({
+      sent: false,
+      to: ['a@b.example'],
+      problem: 'The mail server did not accept the e-mail; try again later.',
+    });
   });
 
   it('reads real SMTP settings from the environment, naming a bad one', () => {
     expect(loadMailSettings({}).smtp).toBeNull();
     // 587 is mail submission with STARTTLS, 465 SMTP over TLS (RFC 8314).
-    expect(loadMailSettings({ SMTP_HOST: 'smtp.example.org' }).smtp).toMatchObject({ host: 'smtp.example.org', port: 587, secure: false });
-    expect(loadMailSettings({ SMTP_HOST: 'smtp.example.org', SMTP_SECURE: 'true', SMTP_USER: 'u', SMTP_PASS: 'p', MAIL_FROM: 'Yard <desk@yard.example>' }).smtp).toEqual({
-      host: 'smtp.example.org', port: 465, secure: true, user: 'u', pass: 'p', from: 'Yard <desk@yard.example>',
+    expect(loadMailSettings({ SMTP_HOST: 'smtp.example.org' }).smtp).toMatchObject({
+      host: 'smtp.example.org',
+      port: 587,
+      secure: false,
     });
-    expect(() => loadMailSettings({ SMTP_HOST: 'h', SMTP_SECURE: 'yes' })).toThrow('SMTP_SECURE must be true or false.');
+    expect(
+      loadMailSettings({
+        SMTP_HOST: 'smtp.example.org',
+        SMTP_SECURE: 'true',
+        SMTP_USER: 'u',
+        SMTP_PASS: 'p',
+        MAIL_FROM: 'Yard <desk@yard.example>',
+      }).smtp,
+    ).toEqual({
+      host: 'smtp.example.org',
+      port: 465,
+      secure: true,
+      user: 'u',
+      pass: 'p',
+      from: 'Yard <desk@yard.example>',
+    });
+    expect(() => loadMailSettings({ SMTP_HOST: 'h', SMTP_SECURE: 'yes' })).toThrow(
+      'SMTP_SECURE must be true or false.',
+    );
   });
 });

@@ -2,7 +2,8 @@ import type { Logger } from '../../lib/logger.js';
 import type { Mailer, MailMessage } from '../../lib/mailer.js';
 
 /** What became of an e-mail: callers report it to the person and keep it in the audit trail. */
-export type MailOutcome = { sent: true; to: string[] } | { sent: false; to: string[]; problem: string };
+export type MailOutcome =
+  { sent: true; to: string[] } | { sent: false; to: string[]; problem: string };
 
 /**
  * Sends the app's e-mails. A failed send never undoes what the e-mail is about (a sign-off stays
@@ -16,14 +17,27 @@ export class Outbox {
 
   async send(message: MailMessage): Promise<MailOutcome> {
     const to = message.to.filter(Boolean);
-    if (to.length === 0) return { sent: false, to, problem: 'There is no e-mail address to send to.' };
-    if (!this.mailer) return { sent: false, to, problem: 'No mail server is set up (SMTP_HOST), so the e-mail was not sent.' };
+    if (to.length === 0)
+      return { sent: false, to, problem: 'There is no e-mail address to send to.' };
+    if (!this.mailer)
+      return {
+        sent: false,
+        to,
+        problem: 'No mail server is set up (SMTP_HOST), so the e-mail was not sent.',
+      };
     try {
       await this.mailer.send({ ...message, to });
       return { sent: true, to };
     } catch (error) {
-      this.logger.warn({ err: error, subject: message.subject, via: this.mailer.describe }, 'e-mail not sent');
-      return { sent: false, to, problem: 'The mail server did not accept the e-mail; try again later.' };
+      this.logger.warn(
+        { err: error, subject: message.subject, via: this.mailer.describe },
+        'e-mail not sent',
+      );
+      return {
+        sent: false,
+        to,
+        problem: 'The mail server did not accept the e-mail; try again later.',
+      };
     }
   }
 }

@@ -1,5 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addOtherWorkshop, DEMO, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 
 let server: TestServer;
 beforeAll(async () => {
@@ -27,9 +33,14 @@ describe('program templates', () => {
   it('gives every workshop the three built-in programs, each citing common practice', async () => {
     const res = await (await technician()).get('/api/programs');
     expect(res.status).toBe(200);
-    const keys = res.body.programs.map((p: Summary) => p.builtInKey).filter(Boolean).sort();
+    const keys = res.body.programs
+      .map((p: Summary) => p.builtInKey)
+      .filter(Boolean)
+      .sort();
     expect(keys).toEqual(['four-stroke-outboard', 'small-inboard-diesel', 'two-stroke-outboard']);
-    const detail = await (await technician()).get(`/api/programs/${(await builtIn('four-stroke-outboard')).id}`);
+    const detail = await (
+      await technician()
+    ).get(`/api/programs/${(await builtIn('four-stroke-outboard')).id}`);
     expect(detail.body.program.definition.source).toMatch(/common practice/i);
   });
 
@@ -41,11 +52,17 @@ describe('program templates', () => {
   it('lets a manager copy a built-in program and edit the copy, but never the built-in itself', async () => {
     const copy = await copyOf('four-stroke-outboard');
     expect(copy).toMatchObject({ builtInKey: null, name: expect.stringContaining('(copy)') });
-    const definition = { ...copy.definition, name: 'Tidewright 4-stroke, short', phases: copy.definition.phases.slice(0, 2).reverse() };
+    const definition = {
+      ...copy.definition,
+      name: 'Tidewright 4-stroke, short',
+      phases: copy.definition.phases.slice(0, 2).reverse(),
+    };
     const saved = await (await manager()).put(`/api/programs/${copy.id}`).send(definition);
     expect(saved.status).toBe(200);
     expect(saved.body.program.name).toBe('Tidewright 4-stroke, short');
-    expect(saved.body.program.definition.phases.map((p: { id: string }) => p.id)).toEqual(definition.phases.map((p: { id: string }) => p.id));
+    expect(saved.body.program.definition.phases.map((p: { id: string }) => p.id)).toEqual(
+      definition.phases.map((p: { id: string }) => p.id),
+    );
 
     const original = await builtIn('four-stroke-outboard');
     const refused = await (await manager()).put(`/api/programs/${original.id}`).send(definition);
@@ -59,10 +76,20 @@ describe('program templates', () => {
     phases[0].band = { kind: 'absolute', rpmMin: 3000, rpmMax: 2000 }; // inverted
     phases[1].requiredMinutes = 0;
     phases[2].throttleCeiling = 'flank-speed';
-    const res = await (await manager()).put(`/api/programs/${copy.id}`).send({ ...copy.definition, phases });
+    const res = await (
+      await manager()
+    )
+      .put(`/api/programs/${copy.id}`)
+      .send({ ...copy.definition, phases });
     expect(res.status).toBe(400);
     const fields = res.body.errors.map((e: { field: string }) => e.field);
-    expect(fields).toEqual(expect.arrayContaining(['phases.0.band.rpmMax', 'phases.1.requiredMinutes', 'phases.2.throttleCeiling']));
+    expect(fields).toEqual(
+      expect.arrayContaining([
+        'phases.0.band.rpmMax',
+        'phases.1.requiredMinutes',
+        'phases.2.throttleCeiling',
+      ]),
+    );
     const after = await (await manager()).get(`/api/programs/${copy.id}`);
     expect(after.body.program.definition).toEqual(copy.definition);
   });
@@ -82,10 +109,12 @@ describe('program templates', () => {
     expect(back.body.program.retiredAt).toBeNull();
   });
 
-  it('hides another workshop\'s programs (404)', async () => {
+  it("hides another workshop's programs (404)", async () => {
     const other = await addOtherWorkshop(server.dataSource);
     const ours = await builtIn('four-stroke-outboard');
-    const res = await (await signedInAgent(server.app, other.technicianEmail)).get(`/api/programs/${ours.id}`);
+    const res = await (
+      await signedInAgent(server.app, other.technicianEmail)
+    ).get(`/api/programs/${ours.id}`);
     expect(res.status).toBe(404);
   });
 });

@@ -5,7 +5,9 @@ import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import { toDetail, toSummary, type ProgramsService } from './programs.service.js';
 
-const IdParamsSchema = z.object({ id: z.uuid({ error: 'The program id in the address is not valid.' }) });
+const IdParamsSchema = z.object({
+  id: z.uuid({ error: 'The program id in the address is not valid.' }),
+});
 
 export function programsRouter(service: ProgramsService): Router {
   const router = Router();
@@ -23,19 +25,33 @@ export function programsRouter(service: ProgramsService): Router {
   });
 
   router.post('/programs/:id/copy', manager, byId, async (req, res) => {
-    res.status(201).json({ program: toDetail(await service.copy(workshopOf(res), String(req.params.id))) });
+    res
+      .status(201)
+      .json({ program: toDetail(await service.copy(workshopOf(res), String(req.params.id))) });
   });
 
-  router.put('/programs/:id', manager, byId, validate({ body: ProgramSchema }), async (req, res) => {
-    res.json({ program: toDetail(await service.update(workshopOf(res), String(req.params.id), req.body)) });
-  });
+  router.put(
+    '/programs/:id',
+    manager,
+    byId,
+    validate({ body: ProgramSchema }),
+    async (req, res) => {
+      res.json({
+        program: toDetail(await service.update(workshopOf(res), String(req.params.id), req.body)),
+      });
+    },
+  );
 
   router.post('/programs/:id/retire', manager, byId, async (req, res) => {
-    res.json({ program: toDetail(await service.setRetired(workshopOf(res), String(req.params.id), true)) });
+    res.json({
+      program: toDetail(await service.setRetired(workshopOf(res), String(req.params.id), true)),
+    });
   });
 
   router.post('/programs/:id/reinstate', manager, byId, async (req, res) => {
-    res.json({ program: toDetail(await service.setRetired(workshopOf(res), String(req.params.id), false)) });
+    res.json({
+      program: toDetail(await service.setRetired(workshopOf(res), String(req.params.id), false)),
+    });
   });
 
   return router;

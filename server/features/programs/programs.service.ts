@@ -1,6 +1,9 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import { BUILT_IN_PROGRAMS, BUILT_IN_PROGRAM_KEYS } from '../../../shared/programs/built-in-programs.js';
+import {
+  BUILT_IN_PROGRAMS,
+  BUILT_IN_PROGRAM_KEYS,
+} from '../../../shared/programs/built-in-programs.js';
 import type { Program as ProgramDefinition } from '../../../shared/programs/program.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { ConflictError, NotFoundError } from '../../lib/errors.js';
@@ -25,7 +28,10 @@ export function toSummary(program: Program) {
   };
 }
 
-export const toDetail = (program: Program) => ({ ...toSummary(program), definition: program.definition });
+export const toDetail = (program: Program) => ({
+  ...toSummary(program),
+  definition: program.definition,
+});
 
 /**
  * Gives every workshop its row for each built-in program and keeps those rows equal to the code.
@@ -37,9 +43,19 @@ export async function syncBuiltInPrograms(dataSource: DataSource): Promise<void>
     for (const workshop of await manager.getRepository(Workshop).find({ select: { id: true } })) {
       for (const key of BUILT_IN_PROGRAM_KEYS) {
         const definition = BUILT_IN_PROGRAMS[key];
-        const existing = await repo.findOne({ where: { workshopId: workshop.id, builtInKey: key } });
+        const existing = await repo.findOne({
+          where: { workshopId: workshop.id, builtInKey: key },
+        });
         if (!existing) {
-          await repo.insert({ id: randomUUID(), workshopId: workshop.id, builtInKey: key, copiedFromId: null, name: definition.name, definition, retiredAt: null });
+          await repo.insert({
+            id: randomUUID(),
+            workshopId: workshop.id,
+            builtInKey: key,
+            copiedFromId: null,
+            name: definition.name,
+            definition,
+            retiredAt: null,
+          });
         } else if (JSON.stringify(existing.definition) !== JSON.stringify(definition)) {
           await repo.update({ id: existing.id }, { name: definition.name, definition });
         }
@@ -71,15 +87,25 @@ export class ProgramsService {
   async copy(workshopId: string, id: string): Promise<Program> {
     const source = await this.get(workshopId, id);
     const definition: ProgramDefinition = { ...source.definition, name: `${source.name} (copy)` };
-    const copy = Object.assign(new Program(), { id: randomUUID(), workshopId, builtInKey: null, copiedFromId: source.id, name: definition.name, definition, retiredAt: null });
+    const copy = Object.assign(new Program(), {
+      id: randomUUID(),
+      workshopId,
+      builtInKey: null,
+      copiedFromId: source.id,
+      name: definition.name,
+      definition,
+      retiredAt: null,
+    });
     await this.repo.insert(copy);
     return this.get(workshopId, copy.id);
   }
 
   async update(workshopId: string, id: string, definition: ProgramDefinition): Promise<Program> {
     const program = await this.get(workshopId, id);
-    if (program.builtInKey) throw new ConflictError('Built-in programs cannot be edited. Copy it and edit the copy.');
-    if (program.retiredAt) throw new ConflictError('This program is retired. Reinstate it before editing.');
+    if (program.builtInKey)
+      throw new ConflictError('Built-in programs cannot be edited. Copy it and edit the copy.');
+    if (program.retiredAt)
+      throw new ConflictError('This program is retired. Reinstate it before editing.');
     await this.repo.update({ id }, { name: definition.name, definition });
     return this.get(workshopId, id);
   }

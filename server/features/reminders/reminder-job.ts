@@ -37,7 +37,10 @@ export class ReminderJob {
 
   start(): void {
     if (this.timer) return;
-    const tick = () => void this.runOnce().catch((error) => this.deps.logger.error({ err: error }, 'service reminders failed'));
+    const tick = () =>
+      void this.runOnce().catch((error) =>
+        this.deps.logger.error({ err: error }, 'service reminders failed'),
+      );
     this.timer = setInterval(tick, this.deps.intervalMs ?? DEFAULT_REMINDER_INTERVAL_MS);
     this.timer.unref();
     setImmediate(tick);
@@ -64,7 +67,13 @@ export class ReminderJob {
   private async pass() {
     const sent: Array<{ engineId: string; state: string }> = [];
     for (const workshop of await this.deps.dataSource.getRepository(Workshop).find()) {
-      const reminded = new Set((await this.deps.dataSource.getRepository(ServiceReminder).find({ where: { workshopId: workshop.id }, select: { engineId: true } })).map((r) => r.engineId));
+      const reminded = new Set(
+        (
+          await this.deps.dataSource
+            .getRepository(ServiceReminder)
+            .find({ where: { workshopId: workshop.id }, select: { engineId: true } })
+        ).map((r) => r.engineId),
+      );
       for (const due of await this.deps.serviceDue.forWorkshop(workshop.id)) {
         const state = due.firstService?.state;
         if (reminded.has(due.engine.id) || (state !== 'due-soon' && state !== 'overdue')) continue;
@@ -78,23 +87,48 @@ export class ReminderJob {
     const status = due.firstService!;
     const skippers = await skippersOf(this.deps.dataSource, due.engine.vesselId);
     const to = [...new Set([...skippers.map((s) => s.email), workshop.email].filter(Boolean))];
-    const outcome = await this.deps.outbox.send(serviceReminderMail({
-      to, replyTo: workshop.email || undefined, workshopName: workshop.name, vesselName: due.engine.vesselName,
-      engineTitle: `${due.engine.position} engine (${due.engine.maker} ${due.engine.model})`, serialNumber: due.engine.serialNumber,
-      overdue: status.state === 'overdue', dueWords: firstServiceWords(status),
-      hoursWords: `${status.hoursNow.toFixed(1)} h (${status.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
-    }));
+    const outcome = await this.deps.outbox.send(
+      serviceReminderMail({
+        to,
+        replyTo: workshop.email || undefined,
+        workshopName: workshop.name,
+        vesselName: due.engine.vesselName,
+        engineTitle: `${due.engine.position} engine (${due.engine.maker} ${due.engine.model})`,
+        serialNumber: due.engine.serialNumber,
+        overdue: status.state === 'overdue',
+        dueWords: firstServiceWords(status),
+        hoursWords: `${status.hoursNow.toFixed(1)} h (${status.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
+      }),
+    );
     if (!outcome.sent) {
-      this.deps.logger.warn({ engineId: due.engine.id, problem: outcome.problem }, 'service reminder not sent; will try again');
+      this.deps.logger.warn(
+        { engineId: due.engine.id, problem: outcome.problem },
+        'service reminder not sent; will try again',
+      );
       return false;
     }
     const now = this.deps.clock.now();
     await this.deps.dataSource.transaction(async (manager) => {
       await manager.getRepository(ServiceReminder).insert({
-        id: randomUUID(), workshopId: workshop.id, engineId: due.engine.id, kind: 'first-service', state: status.state,
-        dueAtHours: status.dueAtHours, dueOn: status.dueOn, sentAt: now, recipients: outcome.to,
+        id: randomUUID(),
+        workshopId: workshop.id,
+        engineId: due.engine.id,
+        kind: 'first-service',
+        state: status.state,
+        dueAtHours: status.dueAtHours,
+        dueOn: status.dueOn,
+        sentAt: now,
+        recipients: outcome.to,
       });
-      await recordAudit(manager, { workshopId: workshop.id, recordType: 'engine', recordId: due.engine.id, action: 'service-reminder-sent', actor: null, at: now, detail: outcomeWords('First-service reminder', outcome) });
+      await recordAudit(manager, {
+        workshopId: workshop.id,
+        recordType: 'engine',
+        recordId: due.engine.id,
+        action: 'service-reminder-sent',
+        actor: null,
+        at: now,
+        detail: outcomeWords('First-service reminder', outcome),
+      });
     });
     return true;
   }

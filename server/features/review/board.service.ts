@@ -1,9 +1,19 @@
 import type { DataSource } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import { actionGroup, compareForAction, needsAction, type RankedRun } from '../../../shared/review/board-order.js';
+import {
+  actionGroup,
+  compareForAction,
+  needsAction,
+  type RankedRun,
+} from '../../../shared/review/board-order.js';
 import { filterRuns } from '../../../shared/review/board-filter.js';
 import type { BoardQuery } from '../../../shared/review/review.schema.js';
-import { calendarDateIn, engineHoursNow, firstServiceView, type FirstServiceView } from '../../../shared/review/first-service.js';
+import {
+  calendarDateIn,
+  engineHoursNow,
+  firstServiceView,
+  type FirstServiceView,
+} from '../../../shared/review/first-service.js';
 import type { BoardFlagCode } from '../../../shared/review/run-words.js';
 import type { BoardRow, BoardView } from '../../../shared/review/views.js';
 import type { Verdict } from '../../../shared/runs/phase-tally.js';
@@ -14,12 +24,32 @@ import { Workshop } from '../workshops/workshop.entity.js';
 import type { RunSummaries } from './run-summaries.js';
 
 type BoardSqlRow = {
-  id: string; state: RunState; vesselId: string; vesselName: string; engineId: string; position: string; maker: string; model: string; serialNumber: string;
-  hourMeterAtCommissioning: number | null; commissionedOn: string | null; clockSkewMs: number | null; lastEventAt: number | null;
-  submittedAt: string | null; signedOffAt: string | null; createdAt: string; programName: string; serviceHours: number | null; serviceMonths: number | null;
-  verdict: string | null; progress: number | null; breachCount: number | null; openPhaseName: string | null; sessionMs: number | null; hourMeter: number | null;
+  id: string;
+  state: RunState;
+  vesselId: string;
+  vesselName: string;
+  engineId: string;
+  position: string;
+  maker: string;
+  model: string;
+  serialNumber: string;
+  hourMeterAtCommissioning: number | null;
+  commissionedOn: string | null;
+  clockSkewMs: number | null;
+  lastEventAt: number | null;
+  submittedAt: string | null;
+  signedOffAt: string | null;
+  createdAt: string;
+  programName: string;
+  serviceHours: number | null;
+  serviceMonths: number | null;
+  verdict: string | null;
+  progress: number | null;
+  breachCount: number | null;
+  openPhaseName: string | null;
+  sessionMs: number | null;
+  hourMeter: number | null;
 };
-
 
 // One query for the whole board; the program's name and first-service interval come from the
 // summary, so 2,000 frozen programs are never parsed.
@@ -38,14 +68,16 @@ const prepared = new WeakMap<Native, { all: (...params: unknown[]) => unknown[] 
  * 2,000 rows through TypeORM's query path cost several times what SQLite takes to produce them.
  */
 function boardRows(dataSource: DataSource, workshopId: string): BoardSqlRow[] {
-  const native = (dataSource.driver as unknown as { databaseConnection: Native }).databaseConnection;
+  const native = (dataSource.driver as unknown as { databaseConnection: Native })
+    .databaseConnection;
   let statement = prepared.get(native);
   if (!statement) prepared.set(native, (statement = native.prepare(BOARD_SQL)));
   return statement.all(workshopId) as BoardSqlRow[];
 }
 
 /** SQLite keeps TypeORM datetimes as UTC text, "2026-12-01 09:00:00.000". */
-export const sqlDateMs = (text: string | null): number | null => (text === null ? null : Date.parse(`${text.replace(' ', 'T')}Z`));
+export const sqlDateMs = (text: string | null): number | null =>
+  text === null ? null : Date.parse(`${text.replace(' ', 'T')}Z`);
 const iso = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
 
 export class BoardService {
@@ -58,7 +90,9 @@ export class BoardService {
   async board(user: SessionUser, query: BoardQuery): Promise<BoardView> {
     await this.summaries.refresh(user.workshopId);
     const rows = boardRows(this.dataSource, user.workshopId);
-    const workshop = await this.dataSource.getRepository(Workshop).findOneByOrFail({ id: user.workshopId });
+    const workshop = await this.dataSource
+      .getRepository(Workshop)
+      .findOneByOrFail({ id: user.workshopId });
     const today = calendarDateIn(workshop.timezone, this.clock.now());
     const ranked = rows.map((row) => toBoardRow(row, today));
     ranked.sort((a, b) => compareForAction(a.key, b.key));
@@ -66,7 +100,14 @@ export class BoardService {
     const counts = Object.fromEntries(RUN_STATES.map((s) => [s, 0])) as Record<RunState, number>;
     for (const run of runs) counts[run.state]++;
     const matching = filterRuns(runs, query.show, query.q);
-    return { today, counts, actionCount: runs.filter((r) => needsAction(r.group)).length, total: runs.length, matching: matching.length, runs: matching.slice(0, query.limit) };
+    return {
+      today,
+      counts,
+      actionCount: runs.filter((r) => needsAction(r.group)).length,
+      total: runs.length,
+      matching: matching.length,
+      runs: matching.slice(0, query.limit),
+    };
   }
 }
 
@@ -74,26 +115,47 @@ export class BoardService {
 function serviceOf(row: BoardSqlRow, today: string): FirstServiceView | null {
   if (row.hourMeterAtCommissioning === null || row.commissionedOn === null) return null;
   if (row.serviceHours === null && row.serviceMonths === null) return null;
-  const interval = { ...(row.serviceHours !== null ? { hours: row.serviceHours } : {}), ...(row.serviceMonths !== null ? { months: row.serviceMonths } : {}) };
-  const hours = engineHoursNow(row.hourMeterAtCommissioning, row.hourMeter === null ? null : { hourMeter: row.hourMeter }, row.sessionMs ?? 0);
-  return firstServiceView({ hourMeter: row.hourMeterAtCommissioning, date: row.commissionedOn }, interval, hours, today);
+  const interval = {
+    ...(row.serviceHours !== null ? { hours: row.serviceHours } : {}),
+    ...(row.serviceMonths !== null ? { months: row.serviceMonths } : {}),
+  };
+  const hours = engineHoursNow(
+    row.hourMeterAtCommissioning,
+    row.hourMeter === null ? null : { hourMeter: row.hourMeter },
+    row.sessionMs ?? 0,
+  );
+  return firstServiceView(
+    { hourMeter: row.hourMeterAtCommissioning, date: row.commissionedOn },
+    interval,
+    hours,
+    today,
+  );
 }
 
 function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: RankedRun } {
   const submitted = sqlDateMs(row.submittedAt);
   const signedOff = sqlDateMs(row.signedOffAt);
-  const lastActivity = Math.max(row.lastEventAt ?? 0, submitted ?? 0, signedOff ?? 0, sqlDateMs(row.createdAt) ?? 0) || null;
+  const lastActivity =
+    Math.max(row.lastEventAt ?? 0, submitted ?? 0, signedOff ?? 0, sqlDateMs(row.createdAt) ?? 0) ||
+    null;
   const firstService = serviceOf(row, today);
   const flags: BoardFlagCode[] = [];
   if ((row.breachCount ?? 0) > 0) flags.push('breach');
-  if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS) flags.push('clock-skew');
+  if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS)
+    flags.push('clock-skew');
   if (firstService?.state === 'overdue') flags.push('service-overdue');
   if (firstService?.state === 'due-soon') flags.push('service-due-soon');
   const run = {
     id: row.id,
     state: row.state,
     vessel: { id: row.vesselId, name: row.vesselName },
-    engine: { id: row.engineId, position: row.position, maker: row.maker, model: row.model, serialNumber: row.serialNumber },
+    engine: {
+      id: row.engineId,
+      position: row.position,
+      maker: row.maker,
+      model: row.model,
+      serialNumber: row.serialNumber,
+    },
     programName: row.programName,
     progress: row.progress ?? 0,
     verdict: (row.verdict ?? 'incomplete') as Verdict,
@@ -101,7 +163,16 @@ function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: Rank
     currentPhaseName: row.openPhaseName,
     lastActivityAt: iso(lastActivity),
     flags,
-    firstService: firstService && { state: firstService.state, dueAtHours: firstService.dueAtHours, dueOn: firstService.dueOn, hoursNow: firstService.hoursNow, hoursSource: firstService.hoursSource },
+    firstService: firstService && {
+      state: firstService.state,
+      dueAtHours: firstService.dueAtHours,
+      dueOn: firstService.dueOn,
+      hoursNow: firstService.hoursNow,
+      hoursSource: firstService.hoursSource,
+    },
   };
-  return { run: { ...run, group: actionGroup(run) }, key: { state: row.state, flags, lastActivityMs: lastActivity, submittedAtMs: submitted } };
+  return {
+    run: { ...run, group: actionGroup(run) },
+    key: { state: row.state, flags, lastActivityMs: lastActivity, submittedAtMs: submitted },
+  };
 }

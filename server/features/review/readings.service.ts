@@ -2,7 +2,12 @@ import type { DataSource } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import { csvLine } from '../../../shared/review/csv.js';
 import { frozenPhases } from '../../../shared/review/frozen-phases.js';
-import { READING_CSV_HEADER, readingCsvCells, readingRow, type ReadingRow } from '../../../shared/review/readings.js';
+import {
+  READING_CSV_HEADER,
+  readingCsvCells,
+  readingRow,
+  type ReadingRow,
+} from '../../../shared/review/readings.js';
 import type { ReadingsPage } from '../../../shared/review/views.js';
 import type { Reading } from '../../../shared/runs/run-event.schema.js';
 import type { Run } from '../runs/run.entity.js';
@@ -14,7 +19,12 @@ const ORDERED = 'FROM "run_event" WHERE "runId" = ? AND "kind" = \'reading\' ORD
 const CSV_BATCH = 2000;
 
 /** A file name that any system accepts: letters, digits and hyphens. */
-const slug = (text: string) => text.toLowerCase().normalize('NFKD').replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '') || 'run';
+const slug = (text: string) =>
+  text
+    .toLowerCase()
+    .normalize('NFKD')
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '') || 'run';
 
 export class ReadingsService {
   constructor(private readonly dataSource: DataSource) {}
@@ -28,10 +38,21 @@ export class ReadingsService {
   }
 
   /** One page of the run's readings in time order. */
-  async page(user: SessionUser, runId: string, offset: number, limit: number): Promise<ReadingsPage> {
+  async page(
+    user: SessionUser,
+    runId: string,
+    offset: number,
+    limit: number,
+  ): Promise<ReadingsPage> {
     const run = await visibleRun(this.dataSource, user, runId);
-    const [{ total }] = await this.dataSource.query('SELECT COUNT(*) AS "total" FROM "run_event" WHERE "runId" = ? AND "kind" = \'reading\'', [run.id]);
-    const rows: Row[] = await this.dataSource.query(`SELECT "body", "receivedAt" ${ORDERED} LIMIT ? OFFSET ?`, [run.id, limit, offset]);
+    const [{ total }] = await this.dataSource.query(
+      'SELECT COUNT(*) AS "total" FROM "run_event" WHERE "runId" = ? AND "kind" = \'reading\'',
+      [run.id],
+    );
+    const rows: Row[] = await this.dataSource.query(
+      `SELECT "body", "receivedAt" ${ORDERED} LIMIT ? OFFSET ?`,
+      [run.id, limit, offset],
+    );
     return { total: Number(total), offset, limit, readings: this.rowsOf(run, rows) };
   }
 
@@ -50,9 +71,16 @@ export class ReadingsService {
             'SELECT "id", "at", "body", "receivedAt" FROM "run_event" WHERE "runId" = ? AND "kind" = \'reading\' AND ("at" > ? OR ("at" = ? AND "id" > ?)) ORDER BY "at", "id" LIMIT ?',
             [run.id, after.at, after.at, after.id, CSV_BATCH],
           )
-        : await this.dataSource.query(`SELECT "id", "at", "body", "receivedAt" ${ORDERED} LIMIT ?`, [run.id, CSV_BATCH]);
+        : await this.dataSource.query(
+            `SELECT "id", "at", "body", "receivedAt" ${ORDERED} LIMIT ?`,
+            [run.id, CSV_BATCH],
+          );
       if (rows.length === 0) return;
-      write(this.rowsOf(run, rows).map((r) => csvLine(readingCsvCells(r))).join(''));
+      write(
+        this.rowsOf(run, rows)
+          .map((r) => csvLine(readingCsvCells(r)))
+          .join(''),
+      );
       const last = rows[rows.length - 1];
       after = { at: last.at, id: last.id };
       if (rows.length < CSV_BATCH) return;
@@ -62,7 +90,9 @@ export class ReadingsService {
   async csvFileName(user: SessionUser, runId: string): Promise<string> {
     const run = await visibleRun(this.dataSource, user, runId);
     const engine = run.engine!;
-    const vessel = await this.dataSource.query('SELECT "name" FROM "vessel" WHERE "id" = ?', [run.vesselId]);
+    const vessel = await this.dataSource.query('SELECT "name" FROM "vessel" WHERE "id" = ?', [
+      run.vesselId,
+    ]);
     return `${slug(vessel[0]?.name ?? 'vessel')}-${slug(engine.position)}-${slug(engine.serialNumber)}-readings.csv`;
   }
 }

@@ -25,8 +25,16 @@ export interface ReviewDeps {
 export function reviewRoutes({ dataSource, clock, outbox, dataDir }: ReviewDeps): Router {
   const summaries = new RunSummaries(dataSource);
   const router = Router();
-  router.use(reviewRouter(new BoardService(dataSource, summaries, clock), new ReviewService(dataSource, clock), new ReadingsService(dataSource)));
-  router.use(signOffRouter(new SignOffService(dataSource, clock, outbox, new CertificateStore(dataDir))));
+  router.use(
+    reviewRouter(
+      new BoardService(dataSource, summaries, clock),
+      new ReviewService(dataSource, clock),
+      new ReadingsService(dataSource),
+    ),
+  );
+  router.use(
+    signOffRouter(new SignOffService(dataSource, clock, outbox, new CertificateStore(dataDir))),
+  );
   router.use(serviceDueRouter(new ServiceDueService(dataSource, summaries, clock)));
   return router;
 }

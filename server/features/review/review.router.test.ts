@@ -1,6 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addOtherWorkshop, DEMO, FakeClock, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  FakeClock,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 
 let server: TestServer;
 const clock = new FakeClock(new Date('2026-12-01T09:00:00Z'));
@@ -9,42 +16,87 @@ beforeAll(async () => {
 });
 afterAll(() => server.close());
 
-type BoardRow = { id: string; state: string; group: string; vessel: { name: string }; engine: { position: string; serialNumber: string }; progress: number; verdict: string; breachCount: number; flags: string[]; firstService: { state: string; hoursSource: string; dueAtHours: number } | null };
+type BoardRow = {
+  id: string;
+  state: string;
+  group: string;
+  vessel: { name: string };
+  engine: { position: string; serialNumber: string };
+  progress: number;
+  verdict: string;
+  breachCount: number;
+  flags: string[];
+  firstService: { state: string; hoursSource: string; dueAtHours: number } | null;
+};
 
 const staff = () => signedInAgent(server.app, DEMO.technician);
-async function board(query = 'show=all'): Promise<{ runs: BoardRow[]; counts: Record<string, number>; actionCount: number; total: number; matching: number }> {
+async function board(query = 'show=all'): Promise<{
+  runs: BoardRow[];
+  counts: Record<string, number>;
+  actionCount: number;
+  total: number;
+  matching: number;
+}> {
   return (await (await staff()).get(`/api/board?${query}`)).body;
 }
-const runOn = async (vessel: string, position?: string) => (await board()).runs.find((r) => r.vessel.name === vessel && (!position || r.engine.position === position))!;
+const runOn = async (vessel: string, position?: string) =>
+  (await board()).runs.find(
+    (r) => r.vessel.name === vessel && (!position || r.engine.position === position),
+  )!;
 
 describe('the runs board', () => {
   it('shows every run of the workshop, what needs action first', async () => {
     const { runs, counts, total } = await board();
-    expect(counts).toEqual({ planned: 1, 'under-way': 2, submitted: 1, 'signed-off': 1, returned: 0 });
+    expect(counts).toEqual({
+      planned: 1,
+      'under-way': 2,
+      submitted: 1,
+      'signed-off': 1,
+      returned: 0,
+    });
     expect(total).toBe(5);
     expect(runs.map((r) => `${r.vessel.name}/${r.group}`)).toEqual([
-      'Skua/review', 'Cormorant/check', 'Cormorant/check', 'Halcyon Drift/book-service', 'Kittiwake/planned',
+      'Skua/review',
+      'Cormorant/check',
+      'Cormorant/check',
+      'Halcyon Drift/book-service',
+      'Kittiwake/planned',
     ]);
   });
 
   it('lists only what needs action by default, and filters by state and search', async () => {
     const action = await board('');
     expect(action.actionCount).toBe(4);
-    expect(action.runs.map((r) => r.vessel.name)).toEqual(['Skua', 'Cormorant', 'Cormorant', 'Halcyon Drift']);
+    expect(action.runs.map((r) => r.vessel.name)).toEqual([
+      'Skua',
+      'Cormorant',
+      'Cormorant',
+      'Halcyon Drift',
+    ]);
     expect((await board('show=planned')).runs.map((r) => r.vessel.name)).toEqual(['Kittiwake']);
     const search = await board('show=all&q=nv115%20starboard');
-    expect(search.runs.map((r) => `${r.vessel.name} ${r.engine.position}`)).toEqual(['Cormorant starboard']);
+    expect(search.runs.map((r) => `${r.vessel.name} ${r.engine.position}`)).toEqual([
+      'Cormorant starboard',
+    ]);
     const page = await board('show=all&limit=2');
     expect(page).toMatchObject({ matching: 5 });
     expect(page.runs).toHaveLength(2);
     const bad = await (await staff()).get('/api/board?show=sunk&limit=0');
     expect(bad.status).toBe(400);
-    expect(bad.body.errors.map((e: { field: string }) => e.field)).toEqual(['query.show', 'query.limit']);
+    expect(bad.body.errors.map((e: { field: string }) => e.field)).toEqual([
+      'query.show',
+      'query.limit',
+    ]);
   });
 
   it('flags the broken rule, the device clock and the overdue first service', async () => {
     const skua = await runOn('Skua');
-    expect(skua).toMatchObject({ state: 'submitted', verdict: 'breached', breachCount: 1, flags: ['breach'] });
+    expect(skua).toMatchObject({
+      state: 'submitted',
+      verdict: 'breached',
+      breachCount: 1,
+      flags: ['breach'],
+    });
     expect(skua.progress).toBe(1);
     const cormorant = await runOn('Cormorant', 'port');
     expect(cormorant.flags).toEqual(['clock-skew']);
@@ -54,7 +106,11 @@ describe('the runs board', () => {
     // and the demo diesel's logged hour meter is past 22.0 h at the end of its break-in.
     const halcyon = await runOn('Halcyon Drift');
     expect(halcyon.flags).toEqual(['service-overdue']);
-    expect(halcyon.firstService).toMatchObject({ state: 'overdue', dueAtHours: 22, hoursSource: 'logged' });
+    expect(halcyon.firstService).toMatchObject({
+      state: 'overdue',
+      dueAtHours: 22,
+      hoursSource: 'logged',
+    });
   });
 
   it('keeps progress current as new readings arrive from a device', async () => {
@@ -65,11 +121,23 @@ describe('the runs board', () => {
     const t0 = Date.parse('2026-12-01T08:00:00Z') + 27 * 3_600_000; // this phone runs a day ahead
     const events = [
       { kind: 'session-start', id: randomUUID(), at: t0, engineId },
-      ...[0, 1, 2, 3].map((i) => ({ kind: 'reading', id: randomUUID(), at: t0 + i * 540_000, engineId, phaseId, rpm: 3000 + (i % 2) * 600, throttle: 'three-quarter' })),
+      ...[0, 1, 2, 3].map((i) => ({
+        kind: 'reading',
+        id: randomUUID(),
+        at: t0 + i * 540_000,
+        engineId,
+        phaseId,
+        rpm: 3000 + (i % 2) * 600,
+        throttle: 'three-quarter',
+      })),
       { kind: 'session-stop', id: randomUUID(), at: t0 + 36 * 60_000, engineId },
     ];
     const sunniva = await signedInAgent(server.app, DEMO.skipperA);
-    const push = await sunniva.post('/api/sync/push').send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items: events.map((event) => ({ type: 'event', runId: before.id, event })) });
+    const push = await sunniva.post('/api/sync/push').send({
+      deviceId: randomUUID(),
+      sentAt: clock.now().getTime(),
+      items: events.map((event) => ({ type: 'event', runId: before.id, event })),
+    });
     expect(push.status).toBe(200);
     const after = await runOn('Cormorant', 'port');
     // 36 minutes more in band, on a program of 600 minutes in all (10 + 110 + 480, the built-in four-stroke program).
@@ -77,7 +145,9 @@ describe('the runs board', () => {
   });
 
   it('is for staff only and shows another workshop nothing of ours', async () => {
-    expect((await (await signedInAgent(server.app, DEMO.skipperA)).get('/api/board')).status).toBe(403);
+    expect((await (await signedInAgent(server.app, DEMO.skipperA)).get('/api/board')).status).toBe(
+      403,
+    );
     const other = await addOtherWorkshop(server.dataSource);
     const stranger = await signedInAgent(server.app, other.technicianEmail);
     const theirs = (await stranger.get('/api/board')).body;
@@ -94,7 +164,11 @@ describe('the review of a run', () => {
     const review = res.body;
     expect(review.engine.serialNumber).toBe('NV40-26-00233');
     expect(review.account.verdict).toBe('breached');
-    expect(review.charts.map((c: { phaseId: string }) => c.phaseId)).toEqual(['dock-run', 'below-half', 'below-three-quarter']);
+    expect(review.charts.map((c: { phaseId: string }) => c.phaseId)).toEqual([
+      'dock-run',
+      'below-half',
+      'below-three-quarter',
+    ]);
     const last = review.charts[2];
     // Share bands of the built-in program against the engine's rated 6000 rpm: ¾ → 4500 rpm.
     expect(last.band).toEqual({ rpmMin: 0, rpmMax: 4500 });
@@ -102,8 +176,12 @@ describe('the review of a run', () => {
     expect(last.breaches[0]).toMatchObject({ code: 'full-throttle-too-long' });
     expect(last.breaches[0].toX - last.breaches[0].fromX).toBeCloseTo(95 / 60, 2);
     expect(last.points.some((p: { state: string }) => p.state === 'over')).toBe(true);
-    const reasons = review.phases.flatMap((p: { reasons: Array<{ message: string }> }) => p.reasons.map((r) => r.message));
-    expect(reasons).toEqual(['Full throttle was held for 1 min 35 s; this phase allows at most 1 min at a time.']);
+    const reasons = review.phases.flatMap((p: { reasons: Array<{ message: string }> }) =>
+      p.reasons.map((r) => r.message),
+    );
+    expect(reasons).toEqual([
+      'Full throttle was held for 1 min 35 s; this phase allows at most 1 min at a time.',
+    ]);
     expect(review.canDecide).toBe(true);
   });
 
@@ -111,10 +189,20 @@ describe('the review of a run', () => {
     const skua = await runOn('Skua');
     const review = (await (await staff()).get(`/api/runs/${skua.id}/review`)).body;
     const kinds = new Set(review.events.map((e: { kind: string }) => e.kind));
-    expect([...kinds].sort()).toEqual(['alert', 'note', 'phase-advance', 'session-start', 'session-stop']);
-    expect(review.events.find((e: { kind: string }) => e.kind === 'alert').message).toContain('Full throttle');
+    expect([...kinds].sort()).toEqual([
+      'alert',
+      'note',
+      'phase-advance',
+      'session-start',
+      'session-stop',
+    ]);
+    expect(review.events.find((e: { kind: string }) => e.kind === 'alert').message).toContain(
+      'Full throttle',
+    );
     expect(review.run.notes).toContain('Oil checked');
-    expect(review.trail.map((t: { action: string; actorName: string }) => `${t.action} ${t.actorName}`)).toEqual(['run-assigned Ivo Brandt', 'run-submitted Sunniva Okafor']);
+    expect(
+      review.trail.map((t: { action: string; actorName: string }) => `${t.action} ${t.actorName}`),
+    ).toEqual(['run-assigned Ivo Brandt', 'run-submitted Sunniva Okafor']);
   });
 
   it('flags a device clock more than a day off', async () => {
@@ -123,13 +211,24 @@ describe('the review of a run', () => {
     expect(review.run).toMatchObject({ clockSkewFlag: true, clockSkewMs: 27 * 3_600_000 });
   });
 
-  it('shows a skipper their own run without the workshop trail, and nobody else\'s', async () => {
+  it("shows a skipper their own run without the workshop trail, and nobody else's", async () => {
     const skua = await runOn('Skua');
-    const own = (await (await signedInAgent(server.app, DEMO.skipperA)).get(`/api/runs/${skua.id}/review`)).body;
+    const own = (
+      await (await signedInAgent(server.app, DEMO.skipperA)).get(`/api/runs/${skua.id}/review`)
+    ).body;
     expect(own).toMatchObject({ canDecide: false, trail: [] });
-    expect((await (await signedInAgent(server.app, DEMO.skipperB)).get(`/api/runs/${skua.id}/review`)).status).toBe(404);
+    expect(
+      (await (await signedInAgent(server.app, DEMO.skipperB)).get(`/api/runs/${skua.id}/review`))
+        .status,
+    ).toBe(404);
     const other = await addOtherWorkshop(server.dataSource);
-    expect((await (await signedInAgent(server.app, other.technicianEmail)).get(`/api/runs/${skua.id}/review`)).status).toBe(404);
+    expect(
+      (
+        await (
+          await signedInAgent(server.app, other.technicianEmail)
+        ).get(`/api/runs/${skua.id}/review`)
+      ).status,
+    ).toBe(404);
     const bad = await (await staff()).get('/api/runs/not-a-run/review');
     expect(bad.status).toBe(400);
     expect(bad.body.errors[0].field).toBe('params.id');
@@ -146,10 +245,17 @@ describe('readings', () => {
     expect(first.readings).toHaveLength(10);
     const times = [...first.readings, ...second.readings].map((r: { at: number }) => r.at);
     expect(times).toEqual([...times].sort((a, b) => a - b));
-    expect(first.readings[0]).toMatchObject({ phaseName: 'First run at the dock', throttle: 'idle', band: 'in-band', rpmSource: 'tachometer' });
+    expect(first.readings[0]).toMatchObject({
+      phaseName: 'First run at the dock',
+      throttle: 'idle',
+      band: 'in-band',
+      rpmSource: 'tachometer',
+    });
     const bad = await tech.get(`/api/runs/${skua.id}/readings?limit=0`);
     expect(bad.status).toBe(400);
-    expect(bad.body.errors).toEqual([{ field: 'query.limit', message: 'The page size (limit) must be at least 1.' }]);
+    expect(bad.body.errors).toEqual([
+      { field: 'query.limit', message: 'The page size (limit) must be at least 1.' },
+    ]);
   });
 
   it('exports every reading as CSV, one line each under a header', async () => {
@@ -159,11 +265,21 @@ describe('readings', () => {
     const res = await tech.get(`/api/runs/${skua.id}/readings.csv`);
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toBe('text/csv; charset=utf-8');
-    expect(res.headers['content-disposition']).toMatch(/^attachment; filename="?skua-single-nv40-26-00233-readings\.csv"?$/);
+    expect(res.headers['content-disposition']).toMatch(
+      /^attachment; filename="?skua-single-nv40-26-00233-readings\.csv"?$/,
+    );
     const lines = res.text.split('\r\n').filter(Boolean);
-    expect(lines[0]).toBe('device time (UTC),received (UTC),phase,rpm,throttle,band,rpm source,frequency (Hz),speed (kn),speed source,fuel (L/h),hour meter (h),cooling water ok,latitude,longitude,note,reading id');
+    expect(lines[0]).toBe(
+      'device time (UTC),received (UTC),phase,rpm,throttle,band,rpm source,frequency (Hz),speed (kn),speed source,fuel (L/h),hour meter (h),cooling water ok,latitude,longitude,note,reading id',
+    );
     expect(lines).toHaveLength(total + 1);
     expect(lines.filter((l) => l.includes(',full,over,'))).not.toHaveLength(0);
-    expect((await (await signedInAgent(server.app, DEMO.skipperB)).get(`/api/runs/${skua.id}/readings.csv`)).status).toBe(404);
+    expect(
+      (
+        await (
+          await signedInAgent(server.app, DEMO.skipperB)
+        ).get(`/api/runs/${skua.id}/readings.csv`)
+      ).status,
+    ).toBe(404);
   });
 });

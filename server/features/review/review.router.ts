@@ -1,40 +1,71 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { BoardQuerySchema, ReadingsQuerySchema, type BoardQuery, type ReadingsQuery } from '../../../shared/review/review.schema.js';
+import {
+  BoardQuerySchema,
+  ReadingsQuerySchema,
+  type BoardQuery,
+  type ReadingsQuery,
+} from '../../../shared/review/review.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { BoardService } from './board.service.js';
 import type { ReadingsService } from './readings.service.js';
 import type { ReviewService } from './review.service.js';
 
-export const RunIdParamsSchema = z.object({ id: z.uuid({ error: 'The run id in the address is not valid.' }) });
+export const RunIdParamsSchema = z.object({
+  id: z.uuid({ error: 'The run id in the address is not valid.' }),
+});
 
-export function reviewRouter(board: BoardService, review: ReviewService, readings: ReadingsService): Router {
+export function reviewRouter(
+  board: BoardService,
+  review: ReviewService,
+  readings: ReadingsService,
+): Router {
   const router = Router();
 
-  router.get('/board', requireRole('technician', 'manager'), validate({ query: BoardQuerySchema }), async (_req, res) => {
-    res.json(await board.board(currentUser(res), res.locals.query as BoardQuery));
-  });
+  router.get(
+    '/board',
+    requireRole('technician', 'manager'),
+    validate({ query: BoardQuerySchema }),
+    async (_req, res) => {
+      res.json(await board.board(currentUser(res), res.locals.query as BoardQuery));
+    },
+  );
 
-  router.get('/runs/:id/review', requireRole(), validate({ params: RunIdParamsSchema }), async (req, res) => {
-    res.json(await review.review(currentUser(res), String(req.params.id)));
-  });
+  router.get(
+    '/runs/:id/review',
+    requireRole(),
+    validate({ params: RunIdParamsSchema }),
+    async (req, res) => {
+      res.json(await review.review(currentUser(res), String(req.params.id)));
+    },
+  );
 
-  router.get('/runs/:id/readings', requireRole(), validate({ params: RunIdParamsSchema, query: ReadingsQuerySchema }), async (req, res) => {
-    const { offset, limit } = res.locals.query as ReadingsQuery;
-    res.json(await readings.page(currentUser(res), String(req.params.id), offset, limit));
-  });
+  router.get(
+    '/runs/:id/readings',
+    requireRole(),
+    validate({ params: RunIdParamsSchema, query: ReadingsQuerySchema }),
+    async (req, res) => {
+      const { offset, limit } = res.locals.query as ReadingsQuery;
+      res.json(await readings.page(currentUser(res), String(req.params.id), offset, limit));
+    },
+  );
 
-  router.get('/runs/:id/readings.csv', requireRole(), validate({ params: RunIdParamsSchema }), async (req, res) => {
-    const user = currentUser(res);
-    const id = String(req.params.id);
-    const fileName = await readings.csvFileName(user, id);
-    res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-    res.setHeader('Cache-Control', 'no-store');
-    res.attachment(fileName);
-    await readings.exportCsv(user, id, (chunk) => res.write(chunk));
-    res.end();
-  });
+  router.get(
+    '/runs/:id/readings.csv',
+    requireRole(),
+    validate({ params: RunIdParamsSchema }),
+    async (req, res) => {
+      const user = currentUser(res);
+      const id = String(req.params.id);
+      const fileName = await readings.csvFileName(user, id);
+      res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+      res.setHeader('Cache-Control', 'no-store');
+      res.attachment(fileName);
+      await readings.exportCsv(user, id, (chunk) => res.write(chunk));
+      res.end();
+    },
+  );
 
   return router;
 }

@@ -23,31 +23,70 @@ export class ReviewService {
 
   async review(user: SessionUser, runId: string): Promise<RunReviewView> {
     const ctx = await loadRunContext(this.dataSource, user, runId, this.clock.now(), this.figures);
-    const reviews = await this.dataSource.getRepository(RunReview).find({ where: { runId }, order: { decidedAt: 'ASC' } });
-    const certificate = await this.dataSource.getRepository(Certificate).findOne({ where: { runId } });
+    const reviews = await this.dataSource
+      .getRepository(RunReview)
+      .find({ where: { runId }, order: { decidedAt: 'ASC' } });
+    const certificate = await this.dataSource
+      .getRepository(Certificate)
+      .findOne({ where: { runId } });
     const { charts } = ctx;
     const staff = user.role !== 'skipper';
     return {
       run: runPart(ctx),
-      vessel: { id: ctx.vessel.id, name: ctx.vessel.name, hin: ctx.vessel.hin, homePort: ctx.vessel.homePort },
+      vessel: {
+        id: ctx.vessel.id,
+        name: ctx.vessel.name,
+        hin: ctx.vessel.hin,
+        homePort: ctx.vessel.homePort,
+      },
       engine: engineView(ctx),
       skippers: ctx.skippers.map(({ id, name }) => ({ id, name })),
-      account: { verdict: ctx.account.verdict, overallProgress: ctx.account.overallProgress, sessionMs: ctx.account.sessionMs, unassignedMs: ctx.account.unassignedMs },
+      account: {
+        verdict: ctx.account.verdict,
+        overallProgress: ctx.account.overallProgress,
+        sessionMs: ctx.account.sessionMs,
+        unassignedMs: ctx.account.unassignedMs,
+      },
       phases: ctx.phases.map((phase, i) => {
         const a = ctx.account.phases[i];
         const { firstAt, lastAt } = charts[i];
         return {
-          id: phase.id, name: phase.name, performedBy: phase.performedBy, throttleCeiling: phase.throttleCeiling, band: phase.band, rules: phase.rules,
-          requiredMs: a.requiredMs, timeInBandMs: a.timeInBandMs, timeOverMs: a.timeOverMs, timeUnderMs: a.timeUnderMs,
-          longestFullThrottleMs: a.longestFullThrottleMs, progressShare: a.progressShare, verdict: a.verdict, reasons: a.reasons, firstAt, lastAt,
+          id: phase.id,
+          name: phase.name,
+          performedBy: phase.performedBy,
+          throttleCeiling: phase.throttleCeiling,
+          band: phase.band,
+          rules: phase.rules,
+          requiredMs: a.requiredMs,
+          timeInBandMs: a.timeInBandMs,
+          timeOverMs: a.timeOverMs,
+          timeUnderMs: a.timeUnderMs,
+          longestFullThrottleMs: a.longestFullThrottleMs,
+          progressShare: a.progressShare,
+          verdict: a.verdict,
+          reasons: a.reasons,
+          firstAt,
+          lastAt,
         };
       }),
       charts,
       events: ctx.figures.events,
       eventsTotal: ctx.figures.eventsTotal,
       readingCount: ctx.figures.readingCount,
-      reviews: reviews.map((r) => ({ decision: r.decision, comments: r.comments, verdict: r.verdict, reviewerName: r.reviewerName, decidedAt: r.decidedAt.toISOString() })),
-      certificate: certificate ? { number: certificate.number, issuedAt: certificate.issuedAt.toISOString(), downloadUrl: `/api/runs/${runId}/certificate` } : null,
+      reviews: reviews.map((r) => ({
+        decision: r.decision,
+        comments: r.comments,
+        verdict: r.verdict,
+        reviewerName: r.reviewerName,
+        decidedAt: r.decidedAt.toISOString(),
+      })),
+      certificate: certificate
+        ? {
+            number: certificate.number,
+            issuedAt: certificate.issuedAt.toISOString(),
+            downloadUrl: `/api/runs/${runId}/certificate`,
+          }
+        : null,
       firstService: ctx.firstService,
       trail: staff ? await runTrail(this.dataSource, ctx.run) : [],
       canDecide: staff && ctx.run.state === 'submitted',
@@ -75,7 +114,14 @@ function runPart({ run }: RunContext) {
 
 function engineView({ engine }: RunContext) {
   return {
-    id: engine.id, position: engine.position, maker: engine.maker, model: engine.model, serialNumber: engine.serialNumber,
-    ratedRpmMin: engine.ratedRpmMin, ratedRpmMax: engine.ratedRpmMax, hourMeterAtCommissioning: engine.hourMeterAtCommissioning, commissionedOn: engine.commissionedOn,
+    id: engine.id,
+    position: engine.position,
+    maker: engine.maker,
+    model: engine.model,
+    serialNumber: engine.serialNumber,
+    ratedRpmMin: engine.ratedRpmMin,
+    ratedRpmMax: engine.ratedRpmMax,
+    hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
+    commissionedOn: engine.commissionedOn,
   };
 }

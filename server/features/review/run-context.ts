@@ -1,7 +1,12 @@
 import { In, IsNull, type DataSource } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { ResolvedPhase } from '../../../shared/programs/resolve-band.js';
-import { calendarDateIn, engineHoursNow, firstServiceView, type FirstServiceView } from '../../../shared/review/first-service.js';
+import {
+  calendarDateIn,
+  engineHoursNow,
+  firstServiceView,
+  type FirstServiceView,
+} from '../../../shared/review/first-service.js';
 import { frozenPhases } from '../../../shared/review/frozen-phases.js';
 import type { PhaseChart } from '../../../shared/review/chart-series.js';
 import type { RunAccount } from '../../../shared/runs/run-accounting.js';
@@ -31,37 +36,79 @@ export interface RunContext {
 }
 
 /** The run if the user may see it (staff: their workshop's; a skipper: linked vessels'), else 404. */
-export async function visibleRun(dataSource: DataSource, user: SessionUser, runId: string): Promise<Run> {
-  const run = await dataSource.getRepository(Run).findOne({ where: { id: runId, workshopId: user.workshopId }, relations: { engine: true } });
+export async function visibleRun(
+  dataSource: DataSource,
+  user: SessionUser,
+  runId: string,
+): Promise<Run> {
+  const run = await dataSource
+    .getRepository(Run)
+    .findOne({ where: { id: runId, workshopId: user.workshopId }, relations: { engine: true } });
   const visible = await visibleVesselIds(dataSource, user);
-  if (!run || (visible !== 'all' && !visible.includes(run.vesselId))) throw new NotFoundError('run', runId);
+  if (!run || (visible !== 'all' && !visible.includes(run.vesselId)))
+    throw new NotFoundError('run', runId);
   return run;
 }
 
 export async function skippersOf(dataSource: DataSource, vesselId: string) {
   const links = await dataSource.getRepository(VesselSkipper).find({ where: { vesselId } });
   if (links.length === 0) return [];
-  const users = await dataSource.getRepository(User).find({ where: { id: In(links.map((l) => l.userId)), archivedAt: IsNull() }, order: { name: 'ASC' } });
+  const users = await dataSource.getRepository(User).find({
+    where: { id: In(links.map((l) => l.userId)), archivedAt: IsNull() },
+    order: { name: 'ASC' },
+  });
   return users.map((u) => ({ id: u.id, name: u.name, email: u.email }));
 }
 
 /** The run with its figures: from `cache` when given (the review page), worked out afresh otherwise (a sign-off). */
-export async function loadRunContext(dataSource: DataSource, user: SessionUser, runId: string, now: Date, cache?: RunFiguresCache): Promise<RunContext> {
+export async function loadRunContext(
+  dataSource: DataSource,
+  user: SessionUser,
+  runId: string,
+  now: Date,
+  cache?: RunFiguresCache,
+): Promise<RunContext> {
   const run = await visibleRun(dataSource, user, runId);
   const engine = run.engine!;
   const vessel = await dataSource.getRepository(Vessel).findOneByOrFail({ id: run.vesselId });
   const workshop = await dataSource.getRepository(Workshop).findOneByOrFail({ id: run.workshopId });
   const phases = frozenPhases(run.program, run.bands);
-  const figures = cache ? await cache.get(run, phases) : await computeRunFigures(dataSource, run, phases);
+  const figures = cache
+    ? await cache.get(run, phases)
+    : await computeRunFigures(dataSource, run, phases);
   return {
-    run, engine, vessel, workshop, phases, account: figures.account, charts: figures.charts, figures,
+    run,
+    engine,
+    vessel,
+    workshop,
+    phases,
+    account: figures.account,
+    charts: figures.charts,
+    figures,
     skippers: await skippersOf(dataSource, vessel.id),
-    firstService: firstServiceOf(run, engine, figures.meter, figures.account.sessionMs, calendarDateIn(workshop.timezone, now)),
+    firstService: firstServiceOf(
+      run,
+      engine,
+      figures.meter,
+      figures.account.sessionMs,
+      calendarDateIn(workshop.timezone, now),
+    ),
   };
 }
 
-function firstServiceOf(run: Run, engine: Engine, meter: { hourMeter: number } | null, sessionMs: number, today: string): FirstServiceView | null {
+function firstServiceOf(
+  run: Run,
+  engine: Engine,
+  meter: { hourMeter: number } | null,
+  sessionMs: number,
+  today: string,
+): FirstServiceView | null {
   if (engine.hourMeterAtCommissioning === null || engine.commissionedOn === null) return null;
   const hours = engineHoursNow(engine.hourMeterAtCommissioning, meter, sessionMs);
-  return firstServiceView({ hourMeter: engine.hourMeterAtCommissioning, date: engine.commissionedOn }, run.program.firstService, hours, today);
+  return firstServiceView(
+    { hourMeter: engine.hourMeterAtCommissioning, date: engine.commissionedOn },
+    run.program.firstService,
+    hours,
+    today,
+  );
 }

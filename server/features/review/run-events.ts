@@ -25,7 +25,9 @@ const METERS_SQL = (n: number) =>
 const statements = new WeakMap<Native, Map<string, Statement>>();
 
 function prepared(db: Db, sql: string): Statement {
-  const driver = ('connection' in db && db.connection !== undefined ? db.connection.driver : (db as DataSource).driver) as unknown as { databaseConnection: Native };
+  const driver = ('connection' in db && db.connection !== undefined
+    ? db.connection.driver
+    : (db as DataSource).driver) as unknown as { databaseConnection: Native };
   const native = driver.databaseConnection;
   let cache = statements.get(native);
   if (!cache) statements.set(native, (cache = new Map()));
@@ -36,10 +38,24 @@ function prepared(db: Db, sql: string): Statement {
 
 const CHUNK = 400;
 
-type EventRow = [string, string, string, number, string, string | null, number | null, string | null, number, string | null];
+type EventRow = [
+  string,
+  string,
+  string,
+  number,
+  string,
+  string | null,
+  number | null,
+  string | null,
+  number,
+  string | null,
+];
 
 /** Each run's events (any order) and the newest change number among them. */
-export async function loadRunEvents(db: Db, runIds: readonly string[]): Promise<Map<string, { events: RunEvent[]; maxSeq: number }>> {
+export async function loadRunEvents(
+  db: Db,
+  runIds: readonly string[],
+): Promise<Map<string, { events: RunEvent[]; maxSeq: number }>> {
   const found = new Map(runIds.map((id) => [id, { events: [] as RunEvent[], maxSeq: 0 }]));
   for (let from = 0; from < runIds.length; from += CHUNK) {
     const chunk = runIds.slice(from, from + CHUNK);
@@ -48,7 +64,15 @@ export async function loadRunEvents(db: Db, runIds: readonly string[]): Promise<
       const entry = found.get(runId)!;
       entry.events.push(
         kind === 'reading'
-          ? { kind: 'reading', id, at, engineId, phaseId: phaseId ?? '', rpm: rpm ?? 0, throttle: (throttle ?? 'idle') as ThrottlePosition }
+          ? {
+              kind: 'reading',
+              id,
+              at,
+              engineId,
+              phaseId: phaseId ?? '',
+              rpm: rpm ?? 0,
+              throttle: (throttle ?? 'idle') as ThrottlePosition,
+            }
           : (JSON.parse(body ?? '{}') as RunEvent),
       );
       if (seq > entry.maxSeq) entry.maxSeq = seq;
@@ -58,11 +82,16 @@ export async function loadRunEvents(db: Db, runIds: readonly string[]): Promise<
 }
 
 /** The newest hour meter logged with a reading, per run. */
-export async function latestHourMeters(db: Db, runIds: readonly string[]): Promise<Map<string, { hourMeter: number; at: number }>> {
+export async function latestHourMeters(
+  db: Db,
+  runIds: readonly string[],
+): Promise<Map<string, { hourMeter: number; at: number }>> {
   const latest = new Map<string, { hourMeter: number; at: number }>();
   for (let from = 0; from < runIds.length; from += CHUNK) {
     const chunk = runIds.slice(from, from + CHUNK);
-    for (const [runId, at, hourMeter] of prepared(db, METERS_SQL(chunk.length)).all(...chunk) as Array<[string, number, number | null]>) {
+    for (const [runId, at, hourMeter] of prepared(db, METERS_SQL(chunk.length)).all(
+      ...chunk,
+    ) as Array<[string, number, number | null]>) {
       if (hourMeter === null) continue;
       const seen = latest.get(runId);
       if (!seen || at > seen.at) latest.set(runId, { hourMeter, at });
@@ -73,6 +102,8 @@ export async function latestHourMeters(db: Db, runIds: readonly string[]): Promi
 
 /** How many events a run has; events are only ever added, so a new count means new events. */
 export function countRunEvents(db: Db, runId: string): number {
-  const [[count]] = prepared(db, 'SELECT COUNT(*) FROM "run_event" WHERE "runId" = ?').all(runId) as Array<[number]>;
+  const [[count]] = prepared(db, 'SELECT COUNT(*) FROM "run_event" WHERE "runId" = ?').all(
+    runId,
+  ) as Array<[number]>;
   return count;
 }

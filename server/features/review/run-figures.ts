@@ -26,15 +26,28 @@ function loggedEvents(ordered: readonly RunEvent[]): { events: LoggedEvent[]; to
   const events: LoggedEvent[] = [];
   for (const e of ordered) {
     if (e.kind === 'reading') continue;
-    if (e.kind === 'phase-advance') events.push({ kind: e.kind, id: e.id, at: e.at, phaseId: e.phaseId });
-    else if (e.kind === 'alert') events.push({ kind: e.kind, id: e.id, at: e.at, phaseId: e.phaseId ?? null, code: e.code, message: e.message });
+    if (e.kind === 'phase-advance')
+      events.push({ kind: e.kind, id: e.id, at: e.at, phaseId: e.phaseId });
+    else if (e.kind === 'alert')
+      events.push({
+        kind: e.kind,
+        id: e.id,
+        at: e.at,
+        phaseId: e.phaseId ?? null,
+        code: e.code,
+        message: e.message,
+      });
     else if (e.kind === 'note') events.push({ kind: e.kind, id: e.id, at: e.at, text: e.text });
     else events.push({ kind: e.kind, id: e.id, at: e.at });
   }
   return { events: events.slice(-MAX_LISTED_EVENTS), total: events.length };
 }
 
-export async function computeRunFigures(dataSource: DataSource, run: Run, phases: ResolvedPhase[]): Promise<RunFigures> {
+export async function computeRunFigures(
+  dataSource: DataSource,
+  run: Run,
+  phases: ResolvedPhase[],
+): Promise<RunFigures> {
   const { events } = (await loadRunEvents(dataSource, [run.id])).get(run.id)!;
   const ordered = orderEvents(events, run.engineId);
   const { account } = accountOrdered(ordered, phases);
@@ -60,7 +73,10 @@ export async function computeRunFigures(dataSource: DataSource, run: Run, phases
 export class RunFiguresCache {
   private readonly kept = new Map<string, RunFigures>();
 
-  constructor(private readonly dataSource: DataSource, private readonly capacity = 16) {}
+  constructor(
+    private readonly dataSource: DataSource,
+    private readonly capacity = 16,
+  ) {}
 
   async get(run: Run, phases: ResolvedPhase[]): Promise<RunFigures> {
     const count = countRunEvents(this.dataSource, run.id);

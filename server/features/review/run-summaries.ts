@@ -40,7 +40,10 @@ export class RunSummaries {
       'SELECT "runId", "seq" FROM "run_event" WHERE "seq" > ? AND "workshopId" = ? ORDER BY "seq"',
       [mark, workshopId],
     );
-    const changed = newer.reduce((latest, e) => latest.set(e.runId, e.seq), new Map<string, number>());
+    const changed = newer.reduce(
+      (latest, e) => latest.set(e.runId, e.seq),
+      new Map<string, number>(),
+    );
     const missing: Array<{ id: string }> = await db.query(
       'SELECT "r"."id" FROM "run" "r" LEFT JOIN "run_summary" "s" ON "s"."runId" = "r"."id" WHERE "r"."workshopId" = ? AND "s"."runId" IS NULL',
       [workshopId],
@@ -49,7 +52,9 @@ export class RunSummaries {
     // A batch at a time, each its own transaction, letting other requests in between: the first
     // visit after a large import accounts thousands of runs.
     for (let from = 0; from < stale.length; from += BATCH) {
-      await this.dataSource.transaction((manager) => this.summarise(manager, stale.slice(from, from + BATCH)));
+      await this.dataSource.transaction((manager) =>
+        this.summarise(manager, stale.slice(from, from + BATCH)),
+      );
       if (from + BATCH < stale.length) await new Promise((resolve) => setImmediate(resolve));
     }
     const newest = Math.max(mark, ...changed.values());
@@ -63,7 +68,10 @@ export class RunSummaries {
   }
 
   private async mark(manager: EntityManager, workshopId: string): Promise<number> {
-    const rows: Array<{ eventSeq: number }> = await manager.query('SELECT "eventSeq" FROM "run_summary_mark" WHERE "workshopId" = ?', [workshopId]);
+    const rows: Array<{ eventSeq: number }> = await manager.query(
+      'SELECT "eventSeq" FROM "run_summary_mark" WHERE "workshopId" = ?',
+      [workshopId],
+    );
     return rows[0]?.eventSeq ?? 0;
   }
 
@@ -88,9 +96,24 @@ export class RunSummaries {
            "serviceMonths" = excluded."serviceMonths", "verdict" = excluded."verdict", "progress" = excluded."progress",
            "breachCount" = excluded."breachCount", "openPhaseName" = excluded."openPhaseName", "sessionMs" = excluded."sessionMs",
            "hourMeter" = excluded."hourMeter", "hourMeterAt" = excluded."hourMeterAt"`,
-        [run.id, run.workshopId, maxSeq, program.name, program.firstService.hours ?? null, program.firstService.months ?? null, account.verdict, account.overallProgress,
-          account.phases.reduce((n, p) => n + p.reasons.filter((r) => r.code !== 'short-of-time').length, 0),
-          open < 0 ? null : program.phases[open].name, account.sessionMs, meter?.hourMeter ?? null, meter?.at ?? null],
+        [
+          run.id,
+          run.workshopId,
+          maxSeq,
+          program.name,
+          program.firstService.hours ?? null,
+          program.firstService.months ?? null,
+          account.verdict,
+          account.overallProgress,
+          account.phases.reduce(
+            (n, p) => n + p.reasons.filter((r) => r.code !== 'short-of-time').length,
+            0,
+          ),
+          open < 0 ? null : program.phases[open].name,
+          account.sessionMs,
+          meter?.hourMeter ?? null,
+          meter?.at ?? null,
+        ],
       );
     }
   }

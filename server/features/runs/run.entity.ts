@@ -1,4 +1,13 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryColumn,
+  UpdateDateColumn,
+} from 'typeorm';
 import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import type { Program as ProgramDefinition } from '../../../shared/programs/program.schema.js';
 import type { RunState } from '../../../shared/runs/run.schema.js';

@@ -5,7 +5,9 @@ import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { RunsService } from './runs.service.js';
 
-const IdParamsSchema = z.object({ id: z.uuid({ error: 'The run id in the address is not valid.' }) });
+const IdParamsSchema = z.object({
+  id: z.uuid({ error: 'The run id in the address is not valid.' }),
+});
 
 export function runsRouter(service: RunsService): Router {
   const router = Router();
@@ -18,10 +20,15 @@ export function runsRouter(service: RunsService): Router {
     res.json({ run: await service.get(currentUser(res), String(req.params.id)) });
   });
 
-  router.post('/runs', requireRole('technician', 'manager'), validate({ body: AssignProgramInputSchema }), async (req, res) => {
-    const run = await service.assign(currentUser(res), req.body);
-    res.status(201).json({ run: await service.get(currentUser(res), run.id) });
-  });
+  router.post(
+    '/runs',
+    requireRole('technician', 'manager'),
+    validate({ body: AssignProgramInputSchema }),
+    async (req, res) => {
+      const run = await service.assign(currentUser(res), req.body);
+      res.status(201).json({ run: await service.get(currentUser(res), run.id) });
+    },
+  );
 
   return router;
 }

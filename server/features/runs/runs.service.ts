@@ -19,56 +19,111 @@ export class RunsService {
   /** Freezes a copy of the program, with its bands resolved for this engine, into a new planned run. */
   async assign(user: SessionUser, input: AssignProgramInput): Promise<Run> {
     return this.dataSource.transaction(async (manager) => {
-      const engine = await manager.getRepository(Engine).findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
-      if (!engine || engine.archivedAt) throw new ValidationError([{ field: 'engineId', message: 'This engine is not in your workshop.' }]);
-      const program = await manager.getRepository(Program).findOne({ where: { id: input.programId, workshopId: user.workshopId } });
-      if (!program) throw new ValidationError([{ field: 'programId', message: 'This program is not in your workshop.' }]);
-      if (program.retiredAt) throw new ValidationError([{ field: 'programId', message: `"${program.name}" is retired and cannot be assigned.` }]);
+      const engine = await manager
+        .getRepository(Engine)
+        .findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
+      if (!engine || engine.archivedAt)
+        throw new ValidationError([
+          { field: 'engineId', message: 'This engine is not in your workshop.' },
+        ]);
+      const program = await manager
+        .getRepository(Program)
+        .findOne({ where: { id: input.programId, workshopId: user.workshopId } });
+      if (!program)
+        throw new ValidationError([
+          { field: 'programId', message: 'This program is not in your workshop.' },
+        ]);
+      if (program.retiredAt)
+        throw new ValidationError([
+          { field: 'programId', message: `"${program.name}" is retired and cannot be assigned.` },
+        ]);
       const check = checkProgramForEngine(program.definition, engine);
-      if (!check.ok) throw new ValidationError(check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })), 'The program does not fit this engine.');
+      if (!check.ok)
+        throw new ValidationError(
+          check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })),
+          'The program does not fit this engine.',
+        );
       await this.refuseSecondOpenRun(manager, engine.id);
       const bands: Record<string, RpmBand> = {};
-      for (const phase of program.definition.phases) bands[phase.id] = resolvePhaseBand(phase, engine);
+      for (const phase of program.definition.phases)
+        bands[phase.id] = resolvePhaseBand(phase, engine);
       const run = Object.assign(new Run(), {
-        id: randomUUID(), workshopId: user.workshopId, engineId: engine.id, vesselId: engine.vesselId, programId: program.id,
-        program: structuredClone(program.definition), bands, state: 'planned', assignedById: user.id, submittedAt: null, signedOffAt: null,
-        currentPhaseId: null, notes: '', clockSkewMs: null, lastEventAt: null, seq: await reserveChangeSeq(manager),
+        id: randomUUID(),
+        workshopId: user.workshopId,
+        engineId: engine.id,
+        vesselId: engine.vesselId,
+        programId: program.id,
+        program: structuredClone(program.definition),
+        bands,
+        state: 'planned',
+        assignedById: user.id,
+        submittedAt: null,
+        signedOffAt: null,
+        currentPhaseId: null,
+        notes: '',
+        clockSkewMs: null,
+        lastEventAt: null,
+        seq: await reserveChangeSeq(manager),
       });
       await manager.getRepository(Run).insert(run);
-      await recordAudit(manager, { workshopId: user.workshopId, recordType: 'run', recordId: run.id, action: 'run-assigned', actor: { id: user.id, name: user.name }, at: new Date(), detail: program.definition.name });
+      await recordAudit(manager, {
+        workshopId: user.workshopId,
+        recordType: 'run',
+        recordId: run.id,
+        action: 'run-assigned',
+        actor: { id: user.id, name: user.name },
+        at: new Date(),
+        detail: program.definition.name,
+      });
       return run;
     });
   }
 
   private async refuseSecondOpenRun(manager: EntityManager, engineId: string) {
-    const open = await manager.getRepository(Run).exists({ where: { engineId, state: In([...OPEN_RUN_STATES]) } });
+    const open = await manager
+      .getRepository(Run)
+      .exists({ where: { engineId, state: In([...OPEN_RUN_STATES]) } });
     if (open) {
-      throw new ConflictError('This engine already has a break-in run that is not signed off. Finish or sign off that one first.', [
-        { field: 'engineId', message: 'This engine already has an open break-in run.' },
-      ]);
+      throw new ConflictError(
+        'This engine already has a break-in run that is not signed off. Finish or sign off that one first.',
+        [{ field: 'engineId', message: 'This engine already has an open break-in run.' }],
+      );
     }
   }
 
   async list(user: SessionUser) {
     const where = await visibleRunsWhere(this.dataSource, user);
-    const runs = await this.dataSource.getRepository(Run).find({ where, relations: { engine: true }, order: { updatedAt: 'DESC' } });
-    const vessels = await this.dataSource.getRepository(Vessel).find({ where: { id: In([...new Set(runs.map((r) => r.vesselId))]) } });
+    const runs = await this.dataSource
+      .getRepository(Run)
+      .find({ where, relations: { engine: true }, order: { updatedAt: 'DESC' } });
+    const vessels = await this.dataSource
+      .getRepository(Vessel)
+      .find({ where: { id: In([...new Set(runs.map((r) => r.vesselId))]) } });
     const vesselName = new Map(vessels.map((v) => [v.id, v.name]));
     return runs.map((run) => toRunView(run, vesselName.get(run.vesselId) ?? ''));
   }
 
   /** A run the user may see, or 404 (never 403, so ids of other workshops are not confirmed). */
   async get(user: SessionUser, id: string) {
-    const run = await this.dataSource.getRepository(Run).findOne({ where: { id, workshopId: user.workshopId }, relations: { engine: true } });
+    const run = await this.dataSource
+      .getRepository(Run)
+      .findOne({ where: { id, workshopId: user.workshopId }, relations: { engine: true } });
     const visible = await visibleVesselIds(this.dataSource, user);
-    if (!run || (visible !== 'all' && !visible.includes(run.vesselId))) throw new NotFoundError('run', id);
-    const vessel = await this.dataSource.getRepository(Vessel).findOneOrFail({ where: { id: run.vesselId } });
+    if (!run || (visible !== 'all' && !visible.includes(run.vesselId)))
+      throw new NotFoundError('run', id);
+    const vessel = await this.dataSource
+      .getRepository(Vessel)
+      .findOneOrFail({ where: { id: run.vesselId } });
     return toRunDetail(run, vessel.name);
   }
 }
 
 /** Everything a device needs to run and judge the break-in offline: the view plus the frozen program and bands. */
-export const toRunDetail = (run: Run, vesselName: string) => ({ ...toRunView(run, vesselName), program: run.program, bands: run.bands });
+export const toRunDetail = (run: Run, vesselName: string) => ({
+  ...toRunView(run, vesselName),
+  program: run.program,
+  bands: run.bands,
+});
 
 function toRunView(run: Run, vesselName: string) {
   const engine = run.engine!;
@@ -76,7 +131,15 @@ function toRunView(run: Run, vesselName: string) {
     id: run.id,
     state: run.state,
     vessel: { id: run.vesselId, name: vesselName },
-    engine: { id: engine.id, position: engine.position, maker: engine.maker, model: engine.model, serialNumber: engine.serialNumber, ratedRpmMin: engine.ratedRpmMin, ratedRpmMax: engine.ratedRpmMax },
+    engine: {
+      id: engine.id,
+      position: engine.position,
+      maker: engine.maker,
+      model: engine.model,
+      serialNumber: engine.serialNumber,
+      ratedRpmMin: engine.ratedRpmMin,
+      ratedRpmMax: engine.ratedRpmMax,
+    },
     programId: run.programId,
     programName: run.program.name,
     phaseCount: run.program.phases.length,

@@ -10,7 +10,12 @@ const isoOrNull = (ms: number | null) => (ms === null ? null : new Date(ms).toIS
 export function certificateContent(
   ctx: RunContext,
   charts: PhaseChart[],
-  decision: { number: string; issuedAt: Date; comments: string; technician: { name: string; role: string } },
+  decision: {
+    number: string;
+    issuedAt: Date;
+    comments: string;
+    technician: { name: string; role: string };
+  },
 ): CertificateContent {
   const { run, engine, vessel, workshop, account } = ctx;
   return {
@@ -22,17 +27,30 @@ export function certificateContent(
     vessel: { name: vessel.name, hin: vessel.hin, homePort: vessel.homePort },
     skippers: ctx.skippers.map((s) => s.name),
     engine: {
-      position: engine.position, maker: engine.maker, model: engine.model, serialNumber: engine.serialNumber,
-      ratedRpmMin: engine.ratedRpmMin, ratedRpmMax: engine.ratedRpmMax,
-      hourMeterAtCommissioning: engine.hourMeterAtCommissioning, commissionedOn: engine.commissionedOn,
+      position: engine.position,
+      maker: engine.maker,
+      model: engine.model,
+      serialNumber: engine.serialNumber,
+      ratedRpmMin: engine.ratedRpmMin,
+      ratedRpmMax: engine.ratedRpmMax,
+      hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
+      commissionedOn: engine.commissionedOn,
     },
     program: { name: run.program.name, source: run.program.source },
     phases: ctx.phases.map((phase, i) => {
       const a = account.phases[i];
       return {
-        name: phase.name, performedBy: phase.performedBy, band: phase.band, throttleCeiling: phase.throttleCeiling,
-        requiredMinutes: minutes(a.requiredMs), inBandMinutes: minutes(a.timeInBandMs), overMinutes: minutes(a.timeOverMs), underMinutes: minutes(a.timeUnderMs),
-        verdict: a.verdict, firstAt: isoOrNull(charts[i].firstAt), lastAt: isoOrNull(charts[i].lastAt),
+        name: phase.name,
+        performedBy: phase.performedBy,
+        band: phase.band,
+        throttleCeiling: phase.throttleCeiling,
+        requiredMinutes: minutes(a.requiredMs),
+        inBandMinutes: minutes(a.timeInBandMs),
+        overMinutes: minutes(a.timeOverMs),
+        underMinutes: minutes(a.timeUnderMs),
+        verdict: a.verdict,
+        firstAt: isoOrNull(charts[i].firstAt),
+        lastAt: isoOrNull(charts[i].lastAt),
         reasons: a.reasons.map((r) => r.message),
       };
     }),
@@ -41,7 +59,12 @@ export function certificateContent(
     technician: decision.technician,
     submittedAt: run.submittedAt?.toISOString() ?? null,
     firstService: ctx.firstService
-      ? { dueAtHours: ctx.firstService.dueAtHours, dueOn: ctx.firstService.dueOn, hoursNow: ctx.firstService.hoursNow, hoursSource: ctx.firstService.hoursSource }
+      ? {
+          dueAtHours: ctx.firstService.dueAtHours,
+          dueOn: ctx.firstService.dueOn,
+          hoursNow: ctx.firstService.hoursNow,
+          hoursSource: ctx.firstService.hoursSource,
+        }
       : null,
   };
 }

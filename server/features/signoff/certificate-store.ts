@@ -15,7 +15,8 @@ export class CertificateStore {
   private absolute(relative: string): string {
     const full = path.resolve(this.dataDir, relative);
     // A stored path can never reach outside the data folder.
-    if (!full.startsWith(path.resolve(this.dataDir) + path.sep)) throw new Error(`certificate path outside the data folder: ${relative}`);
+    if (!full.startsWith(path.resolve(this.dataDir) + path.sep))
+      throw new Error(`certificate path outside the data folder: ${relative}`);
     return full;
   }
 

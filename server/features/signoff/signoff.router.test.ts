@@ -2,7 +2,12 @@ import { randomUUID } from 'node:crypto';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { assignRun } from '../../../tests/helpers/runs.js';
-import { addOtherWorkshop, DEMO, FakeClock, signedInAgent } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  FakeClock,
+  signedInAgent,
+} from '../../../tests/helpers/test-server.js';
 import { startMailTestServer, type MailTestServer } from '../mail/mail-test-server.js';
 import { Run } from '../runs/run.entity.js';
 
@@ -14,14 +19,20 @@ beforeAll(async () => {
 afterAll(() => server.close());
 
 const staff = () => signedInAgent(server.app, DEMO.technician);
-const runOf = async (vessel: string) => (await (await staff()).get('/api/board?show=all')).body.runs.find((r: { vessel: { name: string } }) => r.vessel.name === vessel);
+const runOf = async (vessel: string) =>
+  (await (await staff()).get('/api/board?show=all')).body.runs.find(
+    (r: { vessel: { name: string } }) => r.vessel.name === vessel,
+  );
 
 async function pdfOf(agent: Awaited<ReturnType<typeof staff>>, runId: string) {
-  const res = await agent.get(`/api/runs/${runId}/certificate`).buffer(true).parse((r, done) => {
-    const chunks: Buffer[] = [];
-    r.on('data', (c: Buffer) => chunks.push(c));
-    r.on('end', () => done(null, Buffer.concat(chunks)));
-  });
+  const res = await agent
+    .get(`/api/runs/${runId}/certificate`)
+    .buffer(true)
+    .parse((r, done) => {
+      const chunks: Buffer[] = [];
+      r.on('data', (c: Buffer) => chunks.push(c));
+      r.on('end', () => done(null, Buffer.concat(chunks)));
+    });
   return res;
 }
 
@@ -38,21 +49,48 @@ describe('signing off a submitted run', () => {
   it('refuses a skipper (403) and another workshop (404), changing nothing', async () => {
     const skua = await runOf('Skua');
     const sunniva = await signedInAgent(server.app, DEMO.skipperA);
-    const refused = await sunniva.post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'confirm', comments: 'Looks fine to me.' });
+    const refused = await sunniva
+      .post(`/api/runs/${skua.id}/sign-off`)
+      .send({ decision: 'confirm', comments: 'Looks fine to me.' });
     expect(refused.status).toBe(403);
     const other = await addOtherWorkshop(server.dataSource);
     const stranger = await signedInAgent(server.app, other.technicianEmail);
-    expect((await stranger.post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'confirm', comments: 'x' })).status).toBe(404);
-    expect((await server.dataSource.getRepository(Run).findOneByOrFail({ id: skua.id })).state).toBe('submitted');
+    expect(
+      (
+        await stranger
+          .post(`/api/runs/${skua.id}/sign-off`)
+          .send({ decision: 'confirm', comments: 'x' })
+      ).status,
+    ).toBe(404);
+    expect(
+      (await server.dataSource.getRepository(Run).findOneByOrFail({ id: skua.id })).state,
+    ).toBe('submitted');
   });
 
   it('asks why when confirming a run with a broken rule, naming the field', async () => {
     const skua = await runOf('Skua');
-    const res = await (await staff()).post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'confirm' });
+    const res = await (
+      await staff()
+    )
+      .post(`/api/runs/${skua.id}/sign-off`)
+      .send({ decision: 'confirm' });
     expect(res.status).toBe(400);
-    expect(res.body.errors).toEqual([{ field: 'comments', message: 'This run is not judged complete by the computation: say why you confirm it anyway (comments).' }]);
-    const bad = await (await staff()).post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'approve' });
-    expect(bad.body.errors[0]).toEqual({ field: 'decision', message: 'Choose whether to confirm the run or return it to the skipper (decision).' });
+    expect(res.body.errors).toEqual([
+      {
+        field: 'comments',
+        message:
+          'This run is not judged complete by the computation: say why you confirm it anyway (comments).',
+      },
+    ]);
+    const bad = await (
+      await staff()
+    )
+      .post(`/api/runs/${skua.id}/sign-off`)
+      .send({ decision: 'approve' });
+    expect(bad.body.errors[0]).toEqual({
+      field: 'decision',
+      message: 'Choose whether to confirm the run or return it to the skipper (decision).',
+    });
   });
 
   // Numbers: the demo's signed-off run holds 0001; the Luhn check digits (ISO/IEC 7812-1 Annex B) of 20260001 and 20260002 are 1 and 9, worked by hand.
@@ -60,9 +98,15 @@ describe('signing off a submitted run', () => {
     const skua = await runOf('Skua');
     const before = await server.dataSource.getRepository(Run).findOneByOrFail({ id: skua.id });
     const tech = await staff();
-    const res = await tech.post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'confirm', comments: 'One long burst clearing ferry wash; acceptable.' });
+    const res = await tech
+      .post(`/api/runs/${skua.id}/sign-off`)
+      .send({ decision: 'confirm', comments: 'One long burst clearing ferry wash; acceptable.' });
     expect(res.status).toBe(200);
-    expect(res.body).toMatchObject({ state: 'signed-off', certificate: { number: 'TMW-2026-0002-9', downloadUrl: `/api/runs/${skua.id}/certificate` }, mail: { sent: true, to: ['sunniva@skipper.example'] } });
+    expect(res.body).toMatchObject({
+      state: 'signed-off',
+      certificate: { number: 'TMW-2026-0002-9', downloadUrl: `/api/runs/${skua.id}/certificate` },
+      mail: { sent: true, to: ['sunniva@skipper.example'] },
+    });
     const after = await server.dataSource.getRepository(Run).findOneByOrFail({ id: skua.id });
     expect(after.signedOffAt?.toISOString()).toBe('2026-12-01T09:00:00.000Z');
     expect(after.seq).toBeGreaterThan(before.seq);
@@ -70,19 +114,42 @@ describe('signing off a submitted run', () => {
     const mail = await server.catcher.waitFor((m) => m.subject.includes('TMW-2026-0002-9'));
     expect(mail.to).toEqual(['sunniva@skipper.example']);
     expect(mail.text).toContain('Ivo Brandt of Tidewright Marine Works has reviewed the break-in');
-    expect(mail.attachments).toEqual([expect.objectContaining({ filename: 'break-in-certificate-TMW-2026-0002-9.pdf', contentType: 'application/pdf' })]);
+    expect(mail.attachments).toEqual([
+      expect.objectContaining({
+        filename: 'break-in-certificate-TMW-2026-0002-9.pdf',
+        contentType: 'application/pdf',
+      }),
+    ]);
 
-    const again = await tech.post(`/api/runs/${skua.id}/sign-off`).send({ decision: 'return', comments: 'Changed my mind.' });
+    const again = await tech
+      .post(`/api/runs/${skua.id}/sign-off`)
+      .send({ decision: 'return', comments: 'Changed my mind.' });
     expect(again.status).toBe(409);
-    expect(again.body.detail).toBe('This run is already signed off; a signed-off run cannot be changed.');
+    expect(again.body.detail).toBe(
+      'This run is already signed off; a signed-off run cannot be changed.',
+    );
     // The skipper's phone can no longer add to it either (the sync endpoint refuses a frozen run).
     const engineId = (await tech.get(`/api/runs/${skua.id}/review`)).body.engine.id;
-    const late = { type: 'event', runId: skua.id, event: { kind: 'note', id: randomUUID(), at: clock.now().getTime(), engineId, text: 'One more thing.' } };
-    const push = await (await signedInAgent(server.app, DEMO.skipperA)).post('/api/sync/push').send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items: [late] });
+    const late = {
+      type: 'event',
+      runId: skua.id,
+      event: {
+        kind: 'note',
+        id: randomUUID(),
+        at: clock.now().getTime(),
+        engineId,
+        text: 'One more thing.',
+      },
+    };
+    const push = await (
+      await signedInAgent(server.app, DEMO.skipperA)
+    )
+      .post('/api/sync/push')
+      .send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items: [late] });
     expect(push.body.results[0]).toMatchObject({ status: 'rejected' });
   });
 
-  it('gives the certificate to the workshop and the vessel\'s skipper, with serial, verdict and due service in it', async () => {
+  it("gives the certificate to the workshop and the vessel's skipper, with serial, verdict and due service in it", async () => {
     const skua = await runOf('Skua');
     const download = await pdfOf(await staff(), skua.id);
     expect(download.status).toBe(200);
@@ -95,12 +162,28 @@ describe('signing off a submitted run', () => {
     expect(text).toContain('at 20.3 h on the hour meter or on 23 Dec 2026, whichever comes first');
     expect(text).toContain('One long burst clearing ferry wash; acceptable.');
     expect((await pdfOf(await signedInAgent(server.app, DEMO.skipperA), skua.id)).status).toBe(200);
-    expect((await (await signedInAgent(server.app, DEMO.skipperB)).get(`/api/runs/${skua.id}/certificate`)).status).toBe(404);
-    const trail = (await (await staff()).get(`/api/runs/${skua.id}/review`)).body.trail.map((t: { action: string }) => t.action);
-    expect(trail).toEqual(['run-assigned', 'run-submitted', 'run-signed-off', 'certificate-issued', 'mail-sent', 'certificate-downloaded', 'certificate-downloaded']);
+    expect(
+      (
+        await (
+          await signedInAgent(server.app, DEMO.skipperB)
+        ).get(`/api/runs/${skua.id}/certificate`)
+      ).status,
+    ).toBe(404);
+    const trail = (await (await staff()).get(`/api/runs/${skua.id}/review`)).body.trail.map(
+      (t: { action: string }) => t.action,
+    );
+    expect(trail).toEqual([
+      'run-assigned',
+      'run-submitted',
+      'run-signed-off',
+      'certificate-issued',
+      'mail-sent',
+      'certificate-downloaded',
+      'certificate-downloaded',
+    ]);
   });
 
-  it('writes the seeded run\'s certificate from its frozen content when first asked for it', async () => {
+  it("writes the seeded run's certificate from its frozen content when first asked for it", async () => {
     const halcyon = await runOf('Halcyon Drift');
     const tomas = await signedInAgent(server.app, DEMO.skipperB);
     const download = await pdfOf(tomas, halcyon.id);
@@ -130,29 +213,69 @@ describe('returning a run', () => {
     const t0 = Date.parse('2026-12-01T07:00:00Z');
     const events = [
       { kind: 'session-start', id: randomUUID(), at: t0, engineId },
-      { kind: 'reading', id: randomUUID(), at: t0, engineId, phaseId: 'dock-run', rpm: 850, throttle: 'idle' },
+      {
+        kind: 'reading',
+        id: randomUUID(),
+        at: t0,
+        engineId,
+        phaseId: 'dock-run',
+        rpm: 850,
+        throttle: 'idle',
+      },
       { kind: 'session-stop', id: randomUUID(), at: t0 + 4 * 60_000, engineId },
     ];
     const sunniva = await signedInAgent(server.app, DEMO.skipperA);
-    const items = [...events.map((event) => ({ type: 'event', runId: run.id, event })), { type: 'run-patch', id: randomUUID(), runId: run.id, at: t0 + 300_000, submit: true }];
-    expect((await sunniva.post('/api/sync/push').send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items })).status).toBe(200);
+    const items = [
+      ...events.map((event) => ({ type: 'event', runId: run.id, event })),
+      { type: 'run-patch', id: randomUUID(), runId: run.id, at: t0 + 300_000, submit: true },
+    ];
+    expect(
+      (
+        await sunniva
+          .post('/api/sync/push')
+          .send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items })
+      ).status,
+    ).toBe(200);
 
     clock.advance(3_600_000);
     const tech = await staff();
     const missing = await tech.post(`/api/runs/${run.id}/sign-off`).send({ decision: 'return' });
-    expect(missing.body.errors).toEqual([{ field: 'comments', message: 'Write what the skipper should do (comments) when you return a run.' }]);
-    const res = await tech.post(`/api/runs/${run.id}/sign-off`).send({ decision: 'return', comments: 'Only four minutes logged. Finish the dock run and the phases after it.' });
+    expect(missing.body.errors).toEqual([
+      {
+        field: 'comments',
+        message: 'Write what the skipper should do (comments) when you return a run.',
+      },
+    ]);
+    const res = await tech.post(`/api/runs/${run.id}/sign-off`).send({
+      decision: 'return',
+      comments: 'Only four minutes logged. Finish the dock run and the phases after it.',
+    });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ state: 'returned', certificate: null, mail: { sent: true } });
-    const mail = await server.catcher.waitFor((m) => m.subject.startsWith('Break-in returned: Blue Tern'));
+    const mail = await server.catcher.waitFor((m) =>
+      m.subject.startsWith('Break-in returned: Blue Tern'),
+    );
     expect(mail.text).toContain('Only four minutes logged.');
     expect(mail.text).toContain('In band for 4 min of the 10 min required; 6 min to go.');
     expect(mail.text).toContain('kill-switch lanyard');
 
-    const confirmNow = await tech.post(`/api/runs/${run.id}/sign-off`).send({ decision: 'confirm', comments: 'x' });
+    const confirmNow = await tech
+      .post(`/api/runs/${run.id}/sign-off`)
+      .send({ decision: 'confirm', comments: 'x' });
     expect(confirmNow.status).toBe(409);
     const review = (await tech.get(`/api/runs/${run.id}/review`)).body;
-    expect(review.reviews).toEqual([expect.objectContaining({ decision: 'returned', reviewerName: 'Ivo Brandt', verdict: 'incomplete' })]);
-    expect(review.trail.map((t: { action: string }) => t.action)).toEqual(['run-assigned', 'run-submitted', 'run-returned', 'mail-sent']);
+    expect(review.reviews).toEqual([
+      expect.objectContaining({
+        decision: 'returned',
+        reviewerName: 'Ivo Brandt',
+        verdict: 'incomplete',
+      }),
+    ]);
+    expect(review.trail.map((t: { action: string }) => t.action)).toEqual([
+      'run-assigned',
+      'run-submitted',
+      'run-returned',
+      'mail-sent',
+    ]);
   });
 });

@@ -9,17 +9,27 @@ export function signOffRouter(service: SignOffService): Router {
   const router = Router();
 
   // Staff decide; a skipper is refused (403) even for their own run.
-  router.post('/runs/:id/sign-off', requireRole('technician', 'manager'), validate({ params: RunIdParamsSchema, body: SignOffInputSchema }), async (req, res) => {
-    res.json(await service.decide(currentUser(res), String(req.params.id), req.body));
-  });
+  router.post(
+    '/runs/:id/sign-off',
+    requireRole('technician', 'manager'),
+    validate({ params: RunIdParamsSchema, body: SignOffInputSchema }),
+    async (req, res) => {
+      res.json(await service.decide(currentUser(res), String(req.params.id), req.body));
+    },
+  );
 
-  router.get('/runs/:id/certificate', requireRole(), validate({ params: RunIdParamsSchema }), async (req, res) => {
-    const { fileName, pdf } = await service.certificate(currentUser(res), String(req.params.id));
-    res.setHeader('Content-Type', 'application/pdf');
-    res.setHeader('Cache-Control', 'private, no-store');
-    res.attachment(fileName);
-    res.send(pdf);
-  });
+  router.get(
+    '/runs/:id/certificate',
+    requireRole(),
+    validate({ params: RunIdParamsSchema }),
+    async (req, res) => {
+      const { fileName, pdf } = await service.certificate(currentUser(res), String(req.params.id));
+      res.setHeader('Content-Type', 'application/pdf');
+      res.setHeader('Cache-Control', 'private, no-store');
+      res.attachment(fileName);
+      res.send(pdf);
+    },
+  );
 
   return router;
 }

@@ -31,12 +31,15 @@ type Reviewer = { id: string; name: string; role: string };
 /** Only a submitted run can be decided on; a signed-off one never changes again. */
 function refuseUnlessSubmitted(run: Run) {
   if (run.state === 'signed-off') {
-    throw new ConflictError('This run is already signed off; a signed-off run cannot be changed.', [{ field: 'decision', message: 'This run is already signed off.' }]);
+    throw new ConflictError('This run is already signed off; a signed-off run cannot be changed.', [
+      { field: 'decision', message: 'This run is already signed off.' },
+    ]);
   }
   if (run.state !== 'submitted') {
-    throw new ConflictError(`Only a run submitted for review can be confirmed or returned; this one is "${RUN_STATE_WORDS[run.state]}".`, [
-      { field: 'decision', message: 'This run has not been submitted for review.' },
-    ]);
+    throw new ConflictError(
+      `Only a run submitted for review can be confirmed or returned; this one is "${RUN_STATE_WORDS[run.state]}".`,
+      [{ field: 'decision', message: 'This run has not been submitted for review.' }],
+    );
   }
 }
 
@@ -57,24 +60,72 @@ export class SignOffService {
     const person = await this.dataSource.getRepository(User).findOneByOrFail({ id: user.id });
     const reviewer: Reviewer = { id: person.id, name: person.name, role: person.role };
     const now = this.clock.now();
-    const decided = input.decision === 'confirm' ? await this.confirm(ctx, reviewer, input.comments, now) : await this.returnToSkipper(ctx, reviewer, input.comments, now);
-    const mail = await mailDecision(this.outbox, ctx, reviewer, input.comments, decided.certificate);
-    await this.dataSource.transaction((manager) =>
-      recordAudit(manager, { workshopId: ctx.run.workshopId, recordType: 'run', recordId: ctx.run.id, action: mail.sent ? 'mail-sent' : 'mail-failed', actor: null, at: this.clock.now(), detail: mail.words }),
+    const decided =
+      input.decision === 'confirm'
+        ? await this.confirm(ctx, reviewer, input.comments, now)
+        : await this.returnToSkipper(ctx, reviewer, input.comments, now);
+    const mail = await mailDecision(
+      this.outbox,
+      ctx,
+      reviewer,
+      input.comments,
+      decided.certificate,
     );
-    return { state: decided.state, certificate: decided.certificate && { number: decided.certificate.number, downloadUrl: `/api/runs/${runId}/certificate` }, mail: mail.outcome };
+    await this.dataSource.transaction((manager) =>
+      recordAudit(manager, {
+        workshopId: ctx.run.workshopId,
+        recordType: 'run',
+        recordId: ctx.run.id,
+        action: mail.sent ? 'mail-sent' : 'mail-failed',
+        actor: null,
+        at: this.clock.now(),
+        detail: mail.words,
+      }),
+    );
+    return {
+      state: decided.state,
+      certificate: decided.certificate && {
+        number: decided.certificate.number,
+        downloadUrl: `/api/runs/${runId}/certificate`,
+      },
+      mail: mail.outcome,
+    };
   }
 
-  private async markRun(manager: EntityManager, ctx: RunContext, state: 'signed-off' | 'returned', now: Date) {
+  private async markRun(
+    manager: EntityManager,
+    ctx: RunContext,
+    state: 'signed-off' | 'returned',
+    now: Date,
+  ) {
     refuseUnlessSubmitted(await manager.getRepository(Run).findOneByOrFail({ id: ctx.run.id }));
     const seq = await reserveChangeSeq(manager);
-    await manager.getRepository(Run).update({ id: ctx.run.id }, state === 'signed-off' ? { state, signedOffAt: now, seq } : { state, seq });
+    await manager
+      .getRepository(Run)
+      .update(
+        { id: ctx.run.id },
+        state === 'signed-off' ? { state, signedOffAt: now, seq } : { state, seq },
+      );
   }
 
-  private async addReview(manager: EntityManager, ctx: RunContext, reviewer: Reviewer, decision: 'confirmed' | 'returned', comments: string, now: Date) {
+  private async addReview(
+    manager: EntityManager,
+    ctx: RunContext,
+    reviewer: Reviewer,
+    decision: 'confirmed' | 'returned',
+    comments: string,
+    now: Date,
+  ) {
     await manager.getRepository(RunReview).insert({
-      id: randomUUID(), runId: ctx.run.id, workshopId: ctx.run.workshopId, decision, comments, verdict: ctx.account.verdict,
-      reviewerId: reviewer.id, reviewerName: reviewer.name, decidedAt: now,
+      id: randomUUID(),
+      runId: ctx.run.id,
+      workshopId: ctx.run.workshopId,
+      decision,
+      comments,
+      verdict: ctx.account.verdict,
+      reviewerId: reviewer.id,
+      reviewerName: reviewer.name,
+      decidedAt: now,
     });
   }
 
@@ -88,12 +139,34 @@ export class SignOffService {
         await this.markRun(manager, ctx, 'signed-off', now);
         await this.addReview(manager, ctx, reviewer, 'confirmed', comments, now);
         const number = await this.nextNumber(manager, ctx, now);
-        const content = certificateContent(ctx, ctx.charts, { number, issuedAt: now, comments, technician: { name: reviewer.name, role: reviewer.role } });
+        const content = certificateContent(ctx, ctx.charts, {
+          number,
+          issuedAt: now,
+          comments,
+          technician: { name: reviewer.name, role: reviewer.role },
+        });
         const pdf = renderCertificate(content);
         this.store.write(relative, pdf);
         written = true;
-        await manager.getRepository(Certificate).insert({ id, runId: ctx.run.id, workshopId: ctx.run.workshopId, number, issuedAt: now, issuedById: reviewer.id, content, filePath: relative, storedAt: now, byteSize: pdf.length });
-        const audit = { workshopId: ctx.run.workshopId, recordType: 'run' as const, recordId: ctx.run.id, actor: reviewer, at: now };
+        await manager.getRepository(Certificate).insert({
+          id,
+          runId: ctx.run.id,
+          workshopId: ctx.run.workshopId,
+          number,
+          issuedAt: now,
+          issuedById: reviewer.id,
+          content,
+          filePath: relative,
+          storedAt: now,
+          byteSize: pdf.length,
+        });
+        const audit = {
+          workshopId: ctx.run.workshopId,
+          recordType: 'run' as const,
+          recordId: ctx.run.id,
+          actor: reviewer,
+          at: now,
+        };
         await recordAudit(manager, { ...audit, action: 'run-signed-off', detail: comments });
         await recordAudit(manager, { ...audit, action: 'certificate-issued', detail: number });
         return { state: 'signed-off' as const, certificate: { number, pdf } };
@@ -108,7 +181,15 @@ export class SignOffService {
     return this.dataSource.transaction(async (manager) => {
       await this.markRun(manager, ctx, 'returned', now);
       await this.addReview(manager, ctx, reviewer, 'returned', comments, now);
-      await recordAudit(manager, { workshopId: ctx.run.workshopId, recordType: 'run', recordId: ctx.run.id, action: 'run-returned', actor: reviewer, at: now, detail: comments });
+      await recordAudit(manager, {
+        workshopId: ctx.run.workshopId,
+        recordType: 'run',
+        recordId: ctx.run.id,
+        action: 'run-returned',
+        actor: reviewer,
+        at: now,
+        detail: comments,
+      });
       return { state: 'returned' as const, certificate: null };
     });
   }
@@ -117,19 +198,35 @@ export class SignOffService {
   private async nextNumber(manager: EntityManager, ctx: RunContext, now: Date): Promise<string> {
     const initials = workshopInitials(ctx.workshop.name);
     const year = Number(now.toISOString().slice(0, 4));
-    const [{ n }] = await manager.query('SELECT COUNT(*) AS "n" FROM "certificate" WHERE "workshopId" = ? AND "number" LIKE ?', [ctx.run.workshopId, `${initials}-${year}-%`]);
+    const [{ n }] = await manager.query(
+      'SELECT COUNT(*) AS "n" FROM "certificate" WHERE "workshopId" = ? AND "number" LIKE ?',
+      [ctx.run.workshopId, `${initials}-${year}-%`],
+    );
     return certificateNumber({ initials, year, sequence: Number(n) + 1 });
   }
 
   /** The certificate PDF for anyone who may see the run; each download goes into the trail. */
   async certificate(user: SessionUser, runId: string): Promise<{ fileName: string; pdf: Buffer }> {
     const run = await visibleRun(this.dataSource, user, runId);
-    const certificate = await this.dataSource.getRepository(Certificate).findOne({ where: { runId: run.id } });
-    if (!certificate) throw new NotFoundError('certificate for this run (it is not signed off yet)');
-    const pdf = this.store.read(certificate.filePath) ?? (await writeCertificateFile(this.dataSource, this.store, certificate, this.clock.now()));
+    const certificate = await this.dataSource
+      .getRepository(Certificate)
+      .findOne({ where: { runId: run.id } });
+    if (!certificate)
+      throw new NotFoundError('certificate for this run (it is not signed off yet)');
+    const pdf =
+      this.store.read(certificate.filePath) ??
+      (await writeCertificateFile(this.dataSource, this.store, certificate, this.clock.now()));
     const person = await this.dataSource.getRepository(User).findOneByOrFail({ id: user.id });
     await this.dataSource.transaction((manager) =>
-      recordAudit(manager, { workshopId: run.workshopId, recordType: 'run', recordId: run.id, action: 'certificate-downloaded', actor: { id: person.id, name: person.name }, at: this.clock.now(), detail: certificate.number }),
+      recordAudit(manager, {
+        workshopId: run.workshopId,
+        recordType: 'run',
+        recordId: run.id,
+        action: 'certificate-downloaded',
+        actor: { id: person.id, name: person.name },
+        at: this.clock.now(),
+        detail: certificate.number,
+      }),
     );
     return { fileName: `break-in-certificate-${certificate.number}.pdf`, pdf };
   }

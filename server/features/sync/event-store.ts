@@ -1,12 +1,26 @@
 import type { EntityManager } from 'typeorm';
 
 /** The better-sqlite3 statements this module needs (typed narrowly: the driver exposes `any`). */
-type Statement = { run: (...params: unknown[]) => { changes: number }; get: (...params: unknown[]) => unknown };
+type Statement = {
+  run: (...params: unknown[]) => { changes: number };
+  get: (...params: unknown[]) => unknown;
+};
 type NativeDatabase = { prepare: (sql: string) => Statement };
 
 export type EventRowValues = [
-  id: string, runId: string, workshopId: string, engineId: string, kind: string, at: number, receivedAt: number,
-  authorId: string, phaseId: string | null, rpm: number | null, throttle: string | null, body: string, seq: number,
+  id: string,
+  runId: string,
+  workshopId: string,
+  engineId: string,
+  kind: string,
+  at: number,
+  receivedAt: number,
+  authorId: string,
+  phaseId: string | null,
+  rpm: number | null,
+  throttle: string | null,
+  body: string,
+  seq: number,
 ];
 
 const INSERT_SQL =

@@ -1,8 +1,20 @@
 import { randomUUID } from 'node:crypto';
 import { In } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { assignRun, readingFor, sessionEventFor, type RunDetail } from '../../../tests/helpers/runs.js';
-import { addOtherWorkshop, DEMO, FakeClock, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  assignRun,
+  readingFor,
+  sessionEventFor,
+  type RunDetail,
+} from '../../../tests/helpers/runs.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  FakeClock,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 import { RunEventRow } from '../runs/run-event.entity.js';
 import { Run } from '../runs/run.entity.js';
 
@@ -23,20 +35,36 @@ afterAll(() => server.close());
 
 const deviceA = randomUUID();
 const deviceB = randomUUID();
-const eventCount = (runId: string) => server.dataSource.getRepository(RunEventRow).countBy({ runId });
+const eventCount = (runId: string) =>
+  server.dataSource.getRepository(RunEventRow).countBy({ runId });
 const skipper = () => signedInAgent(server.app, DEMO.skipperA);
 const push = async (items: unknown[], deviceId = deviceA, sentAt = clock.now().getTime()) =>
   (await skipper()).post('/api/sync/push').send({ deviceId, sentAt, items });
 
 describe('push', () => {
   it('stores the valid items of a batch and rejects the invalid ones with a reason naming the field', async () => {
-    const good = [sessionEventFor(gannet, 'session-start', T0), readingFor(gannet, T0 + 1000, 3000)];
+    const good = [
+      sessionEventFor(gannet, 'session-start', T0),
+      readingFor(gannet, T0 + 1000, 3000),
+    ];
     const badRpm = readingFor(gannet, T0 + 2000, -50);
-    const badPhase = { ...readingFor(gannet, T0 + 3000, 3000), event: { ...readingFor(gannet, T0 + 3000, 3000).event, phaseId: 'no-such-phase' } };
+    const badPhase = {
+      ...readingFor(gannet, T0 + 3000, 3000),
+      event: { ...readingFor(gannet, T0 + 3000, 3000).event, phaseId: 'no-such-phase' },
+    };
     const res = await push([...good, badRpm, badPhase]);
     expect(res.status).toBe(200);
-    expect(res.body.results.map((r: { status: string }) => r.status)).toEqual(['stored', 'stored', 'rejected', 'rejected']);
-    expect(res.body.results[2]).toMatchObject({ id: badRpm.event.id, field: 'event.rpm', reason: 'The engine speed (rpm) cannot be negative.' });
+    expect(res.body.results.map((r: { status: string }) => r.status)).toEqual([
+      'stored',
+      'stored',
+      'rejected',
+      'rejected',
+    ]);
+    expect(res.body.results[2]).toMatchObject({
+      id: badRpm.event.id,
+      field: 'event.rpm',
+      reason: 'The engine speed (rpm) cannot be negative.',
+    });
     expect(res.body.results[3]).toMatchObject({ field: 'event.phaseId' });
     expect(await eventCount(gannet.id)).toBe(2);
     const run = await server.dataSource.getRepository(Run).findOneByOrFail({ id: gannet.id });
@@ -44,23 +72,41 @@ describe('push', () => {
   });
 
   it('changes nothing when the same batch arrives three times', async () => {
-    const batch = Array.from({ length: 20 }, (_, i) => readingFor(gannet, T0 + 60_000 + i * 5000, 2800 + i * 10));
+    const batch = Array.from({ length: 20 }, (_, i) =>
+      readingFor(gannet, T0 + 60_000 + i * 5000, 2800 + i * 10),
+    );
     const before = await eventCount(gannet.id);
     const first = await push(batch);
-    const rowsAfterFirst = await server.dataSource.getRepository(RunEventRow).find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
+    const rowsAfterFirst = await server.dataSource
+      .getRepository(RunEventRow)
+      .find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
     const second = await push(batch);
     const third = await push(batch);
     expect(first.body.results.every((r: { status: string }) => r.status === 'stored')).toBe(true);
-    for (const again of [second, third]) expect(again.body.results.every((r: { status: string }) => r.status === 'duplicate')).toBe(true);
-    const rowsAfterThird = await server.dataSource.getRepository(RunEventRow).find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
+    for (const again of [second, third])
+      expect(again.body.results.every((r: { status: string }) => r.status === 'duplicate')).toBe(
+        true,
+      );
+    const rowsAfterThird = await server.dataSource
+      .getRepository(RunEventRow)
+      .find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
     expect(rowsAfterThird).toEqual(rowsAfterFirst);
     expect(rowsAfterThird).toHaveLength(before + 20);
   });
 
   it('keeps interleaved batches from two devices on a twin installation apart and complete', async () => {
-    const twinBatch = (offset: number) => [port, starboard].flatMap((run) => [0, 1, 2].map((i) => readingFor(run, T0 + offset + i * 1000, 3100)));
-    const results = await Promise.all([push(twinBatch(0), deviceA), push(twinBatch(10_000), deviceB), push(twinBatch(20_000), deviceA), push(twinBatch(30_000), deviceB)]);
-    for (const res of results) expect(res.body.results.every((r: { status: string }) => r.status === 'stored')).toBe(true);
+    const twinBatch = (offset: number) =>
+      [port, starboard].flatMap((run) =>
+        [0, 1, 2].map((i) => readingFor(run, T0 + offset + i * 1000, 3100)),
+      );
+    const results = await Promise.all([
+      push(twinBatch(0), deviceA),
+      push(twinBatch(10_000), deviceB),
+      push(twinBatch(20_000), deviceA),
+      push(twinBatch(30_000), deviceB),
+    ]);
+    for (const res of results)
+      expect(res.body.results.every((r: { status: string }) => r.status === 'stored')).toBe(true);
     expect(await eventCount(port.id)).toBe(12);
     expect(await eventCount(starboard.id)).toBe(12);
     const wrongEngine = readingFor(port, T0 + 40_000, 3000);
@@ -72,7 +118,9 @@ describe('push', () => {
   it('records the server time of arrival beside the device time and flags a device clock a day off', async () => {
     const reading = readingFor(port, T0 + 50_000, 3000);
     await push([reading], deviceA, clock.now().getTime() + 3 * 86_400_000);
-    const row = await server.dataSource.getRepository(RunEventRow).findOneByOrFail({ id: reading.event.id });
+    const row = await server.dataSource
+      .getRepository(RunEventRow)
+      .findOneByOrFail({ id: reading.event.id });
     expect(row.at).toBe(T0 + 50_000);
     expect(row.receivedAt).toBe(clock.now().getTime());
     const run = await server.dataSource.getRepository(Run).findOneByOrFail({ id: port.id });
@@ -82,30 +130,71 @@ describe('push', () => {
   it('submits a run once, refuses new readings while it is with the workshop, and still confirms copies it has', async () => {
     const earlier = readingFor(starboard, T0 + 60_000, 3000);
     expect((await push([earlier])).body.results[0].status).toBe('stored');
-    const submit = { type: 'run-patch', id: randomUUID(), runId: starboard.id, at: T0 + 70_000, submit: true, notes: 'Ran both engines together.' };
+    const submit = {
+      type: 'run-patch',
+      id: randomUUID(),
+      runId: starboard.id,
+      at: T0 + 70_000,
+      submit: true,
+      notes: 'Ran both engines together.',
+    };
     expect((await push([submit])).body.results[0].status).toBe('stored');
     expect((await push([submit])).body.results[0].status).toBe('duplicate');
     const run = await server.dataSource.getRepository(Run).findOneByOrFail({ id: starboard.id });
     expect(run).toMatchObject({ state: 'submitted', notes: 'Ran both engines together.' });
     const late = await push([earlier, readingFor(starboard, T0 + 80_000, 3000)]);
     expect(late.body.results[0].status).toBe('duplicate');
-    expect(late.body.results[1]).toMatchObject({ status: 'rejected', reason: expect.stringContaining('with the workshop for review') });
+    expect(late.body.results[1]).toMatchObject({
+      status: 'rejected',
+      reason: expect.stringContaining('with the workshop for review'),
+    });
   });
 
   it('rejects pushes to a signed-off run with a clear reason and alters nothing stored', async () => {
-    await server.dataSource.getRepository(Run).update({ id: gannet.id }, { state: 'signed-off', signedOffAt: new Date('2026-12-01T08:30:00Z') });
-    const before = await server.dataSource.getRepository(RunEventRow).find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
-    const res = await push([readingFor(gannet, T0 + 90_000, 3000), { type: 'run-patch', id: randomUUID(), runId: gannet.id, at: T0, notes: 'late note' }]);
-    expect(res.body.results[0]).toMatchObject({ status: 'rejected', reason: 'This run was signed off by the workshop on 2026-12-01; nothing more can be added to it.' });
-    expect(res.body.results[1]).toMatchObject({ status: 'rejected', reason: 'This run was signed off by the workshop; it can no longer be changed.' });
-    expect(await server.dataSource.getRepository(RunEventRow).find({ where: { runId: gannet.id }, order: { id: 'ASC' } })).toEqual(before);
-    expect((await server.dataSource.getRepository(Run).findOneByOrFail({ id: gannet.id })).notes).toBe('');
+    await server.dataSource
+      .getRepository(Run)
+      .update(
+        { id: gannet.id },
+        { state: 'signed-off', signedOffAt: new Date('2026-12-01T08:30:00Z') },
+      );
+    const before = await server.dataSource
+      .getRepository(RunEventRow)
+      .find({ where: { runId: gannet.id }, order: { id: 'ASC' } });
+    const res = await push([
+      readingFor(gannet, T0 + 90_000, 3000),
+      { type: 'run-patch', id: randomUUID(), runId: gannet.id, at: T0, notes: 'late note' },
+    ]);
+    expect(res.body.results[0]).toMatchObject({
+      status: 'rejected',
+      reason:
+        'This run was signed off by the workshop on 2026-12-01; nothing more can be added to it.',
+    });
+    expect(res.body.results[1]).toMatchObject({
+      status: 'rejected',
+      reason: 'This run was signed off by the workshop; it can no longer be changed.',
+    });
+    expect(
+      await server.dataSource
+        .getRepository(RunEventRow)
+        .find({ where: { runId: gannet.id }, order: { id: 'ASC' } }),
+    ).toEqual(before);
+    expect(
+      (await server.dataSource.getRepository(Run).findOneByOrFail({ id: gannet.id })).notes,
+    ).toBe('');
   });
 
   it('names the envelope field of a malformed batch', async () => {
-    const res = await (await skipper()).post('/api/sync/push').send({ deviceId: 'phone', sentAt: -1, items: [] });
+    const res = await (
+      await skipper()
+    )
+      .post('/api/sync/push')
+      .send({ deviceId: 'phone', sentAt: -1, items: [] });
     expect(res.status).toBe(400);
-    expect(res.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['deviceId', 'items', 'sentAt']);
+    expect(res.body.errors.map((e: { field: string }) => e.field).sort()).toEqual([
+      'deviceId',
+      'items',
+      'sentAt',
+    ]);
   });
 });
 
@@ -115,7 +204,9 @@ describe('pull', () => {
     const first = (await tech.get('/api/sync/pull?cursor=0')).body;
     const ids = first.events.map((e: { event: { id: string } }) => e.event.id);
     expect(new Set(ids).size).toBe(ids.length);
-    expect(first.runs.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining([gannet.id, port.id, starboard.id]));
+    expect(first.runs.map((r: { id: string }) => r.id)).toEqual(
+      expect.arrayContaining([gannet.id, port.id, starboard.id]),
+    );
     const none = (await tech.get(`/api/sync/pull?cursor=${first.cursor}`)).body;
     expect(none.events).toEqual([]);
     expect(none.runs).toEqual([]);
@@ -139,7 +230,9 @@ describe('pull', () => {
     }
     expect(new Set(seen).size).toBe(seen.length);
     const visible = (await tech.get('/api/sync/pull?cursor=0&limit=1')).body.runIds;
-    expect(seen.length).toBe(await server.dataSource.getRepository(RunEventRow).countBy({ runId: In(visible) }));
+    expect(seen.length).toBe(
+      await server.dataSource.getRepository(RunEventRow).countBy({ runId: In(visible) }),
+    );
   });
 
   it('gives a workshop device only the runs still being logged', async () => {
@@ -151,16 +244,24 @@ describe('pull', () => {
     const runIds = new Set(body.events.map((e: { runId: string }) => e.runId));
     expect(runIds.has(port.id)).toBe(true);
     expect(runIds.has(gannet.id) || runIds.has(starboard.id)).toBe(false);
-    const states = (await server.dataSource.getRepository(Run).findBy({ id: In([...runIds] as string[]) })).map((r) => r.state);
-    expect(states.every((state) => ['planned', 'under-way', 'returned'].includes(state))).toBe(true);
+    const states = (
+      await server.dataSource.getRepository(Run).findBy({ id: In([...runIds] as string[]) })
+    ).map((r) => r.state);
+    expect(states.every((state) => ['planned', 'under-way', 'returned'].includes(state))).toBe(
+      true,
+    );
   });
 });
 
 describe('tenancy', () => {
-  it('answers 404 to a skipper pushing to another skipper\'s run and stores nothing', async () => {
+  it("answers 404 to a skipper pushing to another skipper's run and stores nothing", async () => {
     const before = await eventCount(port.id);
     const tomas = await signedInAgent(server.app, DEMO.skipperB);
-    const res = await tomas.post('/api/sync/push').send({ deviceId: deviceB, sentAt: clock.now().getTime(), items: [readingFor(port, T0 + 200_000, 3000)] });
+    const res = await tomas.post('/api/sync/push').send({
+      deviceId: deviceB,
+      sentAt: clock.now().getTime(),
+      items: [readingFor(port, T0 + 200_000, 3000)],
+    });
     expect(res.status).toBe(404);
     expect(await eventCount(port.id)).toBe(before);
     const pulled = (await tomas.get('/api/sync/pull?cursor=0')).body;
@@ -172,7 +273,11 @@ describe('tenancy', () => {
     const other = await addOtherWorkshop(server.dataSource);
     const stranger = await signedInAgent(server.app, other.technicianEmail);
     const before = await eventCount(port.id);
-    const res = await stranger.post('/api/sync/push').send({ deviceId: deviceB, sentAt: clock.now().getTime(), items: [readingFor(port, T0 + 300_000, 3000)] });
+    const res = await stranger.post('/api/sync/push').send({
+      deviceId: deviceB,
+      sentAt: clock.now().getTime(),
+      items: [readingFor(port, T0 + 300_000, 3000)],
+    });
     expect(res.status).toBe(404);
     expect(await eventCount(port.id)).toBe(before);
     const pulled = (await stranger.get('/api/sync/pull?cursor=0')).body;

@@ -10,14 +10,25 @@ const PUSH_BODY_LIMIT = '4mb';
 export function syncRouter(service: SyncService): Router {
   const router = Router();
 
-  router.post('/sync/push', express.json({ limit: PUSH_BODY_LIMIT }), requireRole(), validate({ body: PushBatchSchema }), async (req, res) => {
-    res.json(await service.push(currentUser(res), req.body));
-  });
+  router.post(
+    '/sync/push',
+    express.json({ limit: PUSH_BODY_LIMIT }),
+    requireRole(),
+    validate({ body: PushBatchSchema }),
+    async (req, res) => {
+      res.json(await service.push(currentUser(res), req.body));
+    },
+  );
 
-  router.get('/sync/pull', requireRole(), validate({ query: PullQuerySchema }), async (_req, res) => {
-    const { cursor, limit } = res.locals.query as { cursor: number; limit: number };
-    res.json(await service.pull(currentUser(res), cursor, limit));
-  });
+  router.get(
+    '/sync/pull',
+    requireRole(),
+    validate({ query: PullQuerySchema }),
+    async (_req, res) => {
+      const { cursor, limit } = res.locals.query as { cursor: number; limit: number };
+      res.json(await service.pull(currentUser(res), cursor, limit));
+    },
+  );
 
   return router;
 }

@@ -1,6 +1,12 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import { CLOCK_SKEW_FLAG_MS, PushItemSchema, type PushBatch, type PushItem, type PushResult } from '../../../shared/sync/sync.schema.js';
+import {
+  CLOCK_SKEW_FLAG_MS,
+  PushItemSchema,
+  type PushBatch,
+  type PushItem,
+  type PushResult,
+} from '../../../shared/sync/sync.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { NotFoundError } from '../../lib/errors.js';
 import { fieldErrors } from '../../middleware/validate.js';
@@ -28,8 +34,18 @@ function checkItems(items: unknown[]): Checked[] {
     const parsed = PushItemSchema.safeParse(raw);
     if (parsed.success) return { index, item: parsed.data };
     const [first] = fieldErrors(parsed.error);
-    const id = typeof raw === 'object' && raw !== null ? String((raw as { id?: unknown; event?: { id?: unknown } }).event?.id ?? (raw as { id?: unknown }).id ?? `#${index}`) : `#${index}`;
-    return { index, rejected: { id, status: 'rejected', reason: first.message, field: first.field } };
+    const id =
+      typeof raw === 'object' && raw !== null
+        ? String(
+            (raw as { id?: unknown; event?: { id?: unknown } }).event?.id ??
+              (raw as { id?: unknown }).id ??
+              `#${index}`,
+          )
+        : `#${index}`;
+    return {
+      index,
+      rejected: { id, status: 'rejected', reason: first.message, field: first.field },
+    };
   });
 }
 
@@ -46,21 +62,50 @@ export class SyncService {
    * a run it may no longer see or one newly shared with it.
    */
   async pull(user: SessionUser, cursor: number, limit: number) {
-    const where = { ...(await visibleRunsWhere(this.dataSource, user)), ...(user.role === 'skipper' ? {} : { state: In([...STAFF_DEVICE_STATES]) }) };
-    const visible = await this.dataSource.getRepository(Run).find({ where, select: { id: true, seq: true } });
-    const events = await this.changedEvents(user, visible.map((r) => r.id), cursor, limit);
+    const where = {
+      ...(await visibleRunsWhere(this.dataSource, user)),
+      ...(user.role === 'skipper' ? {} : { state: In([...STAFF_DEVICE_STATES]) }),
+    };
+    const visible = await this.dataSource
+      .getRepository(Run)
+      .find({ where, select: { id: true, seq: true } });
+    const events = await this.changedEvents(
+      user,
+      visible.map((r) => r.id),
+      cursor,
+      limit,
+    );
     const more = events.length === limit;
-    const latest = (await this.dataSource.getRepository(ChangeCounter).findOneByOrFail({ name: 'changes' })).value;
+    const latest = (
+      await this.dataSource.getRepository(ChangeCounter).findOneByOrFail({ name: 'changes' })
+    ).value;
     const nextCursor = more ? events[events.length - 1].seq : latest;
-    const changedIds = visible.filter((r) => cursor === 0 || (r.seq > cursor && r.seq <= nextCursor)).map((r) => r.id);
-    const runs = changedIds.length === 0 ? [] : await this.dataSource.getRepository(Run).find({ where: { id: In(changedIds) }, relations: { engine: true } });
-    const names = new Map((await this.dataSource.getRepository(Vessel).find({ where: { workshopId: user.workshopId }, select: { id: true, name: true } })).map((v) => [v.id, v.name]));
+    const changedIds = visible
+      .filter((r) => cursor === 0 || (r.seq > cursor && r.seq <= nextCursor))
+      .map((r) => r.id);
+    const runs =
+      changedIds.length === 0
+        ? []
+        : await this.dataSource
+            .getRepository(Run)
+            .find({ where: { id: In(changedIds) }, relations: { engine: true } });
+    const names = new Map(
+      (
+        await this.dataSource
+          .getRepository(Vessel)
+          .find({ where: { workshopId: user.workshopId }, select: { id: true, name: true } })
+      ).map((v) => [v.id, v.name]),
+    );
     return {
       cursor: nextCursor,
       more,
       runIds: visible.map((r) => r.id),
       runs: runs.map((run) => toRunDetail(run, names.get(run.vesselId) ?? '')),
-      events: events.map(({ runId, receivedAt, body }) => ({ runId, receivedAt, event: JSON.parse(body) })),
+      events: events.map(({ runId, receivedAt, body }) => ({
+        runId,
+        receivedAt,
+        event: JSON.parse(body),
+      })),
       vessels: await this.vessels.listFor(user),
     };
   }
@@ -77,32 +122,57 @@ export class SyncService {
       );
     }
     const marks = runIds.map(() => '?').join(', ');
-    return this.dataSource.query<Row[]>(`SELECT "runId", "receivedAt", "body", "seq" FROM "run_event" WHERE "runId" IN (${marks}) AND "seq" > ? ORDER BY "seq" LIMIT ?`, [...runIds, cursor, limit]);
+    return this.dataSource.query<Row[]>(
+      `SELECT "runId", "receivedAt", "body", "seq" FROM "run_event" WHERE "runId" IN (${marks}) AND "seq" > ? ORDER BY "seq" LIMIT ?`,
+      [...runIds, cursor, limit],
+    );
   }
 
   /**
    * Applies a batch in one transaction. Runs the user may not see make the whole batch a 404
    * (nothing stored, nothing confirmed about other people's runs).
    */
-  async push(user: SessionUser, batch: PushBatch): Promise<{ results: PushResult[]; serverTime: number }> {
+  async push(
+    user: SessionUser,
+    batch: PushBatch,
+  ): Promise<{ results: PushResult[]; serverTime: number }> {
     const checked = checkItems(batch.items);
     const valid = checked.filter((c): c is { index: number; item: PushItem } => 'item' in c);
     const runs = await this.loadVisibleRuns(user, [...new Set(valid.map((c) => c.item.runId))]);
     const now = this.clock.now().getTime();
     const skewMs = batch.sentAt - now;
     const applied = await this.dataSource.transaction(async (manager) => {
-      const result = await applyItems(manager, { user, runs, items: valid.map((c) => c.item), now });
-      await this.saveTouchedRuns(manager, result, Math.abs(skewMs) > CLOCK_SKEW_FLAG_MS ? skewMs : null);
+      const result = await applyItems(manager, {
+        user,
+        runs,
+        items: valid.map((c) => c.item),
+        now,
+      });
+      await this.saveTouchedRuns(
+        manager,
+        result,
+        Math.abs(skewMs) > CLOCK_SKEW_FLAG_MS ? skewMs : null,
+      );
       return result;
     });
     const byIndex = new Map(valid.map((c, i) => [c.index, applied.results[i]]));
-    return { results: checked.map((c) => ('rejected' in c ? c.rejected : byIndex.get(c.index)!)), serverTime: now };
+    return {
+      results: checked.map((c) => ('rejected' in c ? c.rejected : byIndex.get(c.index)!)),
+      serverTime: now,
+    };
   }
 
   private async loadVisibleRuns(user: SessionUser, runIds: string[]): Promise<Map<string, Run>> {
-    const runs = runIds.length === 0 ? [] : await this.dataSource.getRepository(Run).find({ where: { id: In(runIds), workshopId: user.workshopId } });
+    const runs =
+      runIds.length === 0
+        ? []
+        : await this.dataSource
+            .getRepository(Run)
+            .find({ where: { id: In(runIds), workshopId: user.workshopId } });
     const visible = await visibleVesselIds(this.dataSource, user);
-    const allowed = new Map(runs.filter((r) => visible === 'all' || visible.includes(r.vesselId)).map((r) => [r.id, r]));
+    const allowed = new Map(
+      runs.filter((r) => visible === 'all' || visible.includes(r.vesselId)).map((r) => [r.id, r]),
+    );
     const missing = runIds.find((id) => !allowed.has(id));
     if (missing) throw new NotFoundError('run', missing);
     return allowed;
@@ -111,12 +181,21 @@ export class SyncService {
   /** Touched runs get a new change number so other devices and the workshop pull the change. */
   private async saveTouchedRuns(manager: EntityManager, applied: Applied, skewMs: number | null) {
     for (const run of applied.touched) {
-      if (skewMs !== null && Math.abs(skewMs) > Math.abs(run.clockSkewMs ?? 0)) run.clockSkewMs = skewMs;
+      if (skewMs !== null && Math.abs(skewMs) > Math.abs(run.clockSkewMs ?? 0))
+        run.clockSkewMs = skewMs;
       run.seq = await reserveChangeSeq(manager);
-      await manager.getRepository(Run).update({ id: run.id }, {
-        state: run.state, submittedAt: run.submittedAt, currentPhaseId: run.currentPhaseId, notes: run.notes,
-        clockSkewMs: run.clockSkewMs, lastEventAt: run.lastEventAt, seq: run.seq,
-      });
+      await manager.getRepository(Run).update(
+        { id: run.id },
+        {
+          state: run.state,
+          submittedAt: run.submittedAt,
+          currentPhaseId: run.currentPhaseId,
+          notes: run.notes,
+          clockSkewMs: run.clockSkewMs,
+          lastEventAt: run.lastEventAt,
+          seq: run.seq,
+        },
+      );
     }
   }
 }

@@ -8,35 +8,65 @@ import { inviteMail } from '../mail/mail-templates.js';
 import type { Outbox } from '../mail/outbox.js';
 import type { UsersService } from './users.service.js';
 
-const TokenParamsSchema = z.object({ token: z.string().min(20, { error: 'The invite link is incomplete.' }).max(200) });
+const TokenParamsSchema = z.object({
+  token: z.string().min(20, { error: 'The invite link is incomplete.' }).max(200),
+});
 
-export function usersRouter(service: UsersService, auth: AuthService, publicOrigin: string | undefined, outbox: Outbox): Router {
+export function usersRouter(
+  service: UsersService,
+  auth: AuthService,
+  publicOrigin: string | undefined,
+  outbox: Outbox,
+): Router {
   const router = Router();
-  const inviteLink = (req: Request, token: string) => `${publicOrigin ?? `${req.protocol}://${req.get('host')}`}/invite/${token}`;
+  const inviteLink = (req: Request, token: string) =>
+    `${publicOrigin ?? `${req.protocol}://${req.get('host')}`}/invite/${token}`;
 
   router.get('/users', requireRole('manager'), async (_req, res) => {
     res.json(await service.listTeam(currentUser(res).workshopId));
   });
 
-  router.post('/invites', requireRole('manager'), validate({ body: InviteInputSchema }), async (req, res) => {
-    const inviter = currentUser(res);
-    const { invite, token } = await service.createInvite(inviter, req.body);
-    const link = inviteLink(req, token);
-    // The invite stands even when the e-mail cannot go: the link is in the answer to pass on by hand.
-    const mail = await outbox.send(inviteMail({
-      to: invite.email, workshopName: inviter.workshopName, inviterName: inviter.name, role: invite.role, link, expiresOn: invite.expiresAt.toISOString().slice(0, 10),
-    }));
-    res.status(201).json({
-      invite: { id: invite.id, email: invite.email, role: invite.role, expiresAt: invite.expiresAt.toISOString() },
-      link,
-      mail,
-    });
-  });
+  router.post(
+    '/invites',
+    requireRole('manager'),
+    validate({ body: InviteInputSchema }),
+    async (req, res) => {
+      const inviter = currentUser(res);
+      const { invite, token } = await service.createInvite(inviter, req.body);
+      const link = inviteLink(req, token);
+      // The invite stands even when the e-mail cannot go: the link is in the answer to pass on by hand.
+      const mail = await outbox.send(
+        inviteMail({
+          to: invite.email,
+          workshopName: inviter.workshopName,
+          inviterName: inviter.name,
+          role: invite.role,
+          link,
+          expiresOn: invite.expiresAt.toISOString().slice(0, 10),
+        }),
+      );
+      res.status(201).json({
+        invite: {
+          id: invite.id,
+          email: invite.email,
+          role: invite.role,
+          expiresAt: invite.expiresAt.toISOString(),
+        },
+        link,
+        mail,
+      });
+    },
+  );
 
   // Public: the invite page shows whom the link is for before the password is set.
   router.get('/invites/:token', validate({ params: TokenParamsSchema }), async (req, res) => {
     const invite = await auth.findOpenInvite(String(req.params.token));
-    res.json({ email: invite.email, role: invite.role, workshopName: invite.workshop?.name ?? '', expiresAt: invite.expiresAt.toISOString() });
+    res.json({
+      email: invite.email,
+      role: invite.role,
+      workshopName: invite.workshop?.name ?? '',
+      expiresAt: invite.expiresAt.toISOString(),
+    });
   });
 
   return router;

@@ -21,7 +21,9 @@ export class SkipperLinksService {
       order: { name: 'ASC' },
     });
     if (skippers.length === 0) return [];
-    const links = await this.dataSource.getRepository(VesselSkipper).find({ where: { userId: In(skippers.map((s) => s.id)) } });
+    const links = await this.dataSource
+      .getRepository(VesselSkipper)
+      .find({ where: { userId: In(skippers.map((s) => s.id)) } });
     return skippers.map((s) => ({
       id: s.id,
       name: s.name,
@@ -35,11 +37,17 @@ export class SkipperLinksService {
     await this.dataSource.transaction(async (manager) => {
       const vessel = await findVisibleVessel(manager, user, vesselId);
       refuseArchived(vessel);
-      const skipper = await manager.getRepository(User).findOne({ where: { id: skipperId, workshopId: user.workshopId, archivedAt: IsNull() } });
+      const skipper = await manager
+        .getRepository(User)
+        .findOne({ where: { id: skipperId, workshopId: user.workshopId, archivedAt: IsNull() } });
       if (!skipper || skipper.role !== 'skipper') {
-        throw new ValidationError([{ field: 'userId', message: 'Choose a skipper of your workshop.' }]);
+        throw new ValidationError([
+          { field: 'userId', message: 'Choose a skipper of your workshop.' },
+        ]);
       }
-      await manager.getRepository(VesselSkipper).upsert({ vesselId, userId: skipperId }, ['vesselId', 'userId']);
+      await manager
+        .getRepository(VesselSkipper)
+        .upsert({ vesselId, userId: skipperId }, ['vesselId', 'userId']);
     });
     return this.vessels.get(user, vesselId);
   }

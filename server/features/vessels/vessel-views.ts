@@ -5,7 +5,8 @@ import type { Vessel } from './vessel.entity.js';
 const POSITION_ORDER = ['port', 'centre', 'starboard', 'single', 'inboard'];
 
 /** Port to starboard, as the engines sit across the transom. */
-export const byPosition = (a: Engine, b: Engine) => POSITION_ORDER.indexOf(a.position) - POSITION_ORDER.indexOf(b.position);
+export const byPosition = (a: Engine, b: Engine) =>
+  POSITION_ORDER.indexOf(a.position) - POSITION_ORDER.indexOf(b.position);
 
 export function toEngineView(engine: Engine): EngineView {
   const { createdAt, updatedAt, archivedAt, vessel: _v, workshopId: _w, ...fields } = engine;
@@ -29,7 +30,10 @@ export function toVesselView(vessel: Vessel): VesselView {
     skippers: (vessel.skippers ?? [])
       .map((s) => ({ id: s.userId, name: s.user?.name ?? '' }))
       .sort((a, b) => a.name.localeCompare(b.name)),
-    engines: (vessel.engines ?? []).filter((e) => !e.archivedAt).sort(byPosition).map(toEngineView),
+    engines: (vessel.engines ?? [])
+      .filter((e) => !e.archivedAt)
+      .sort(byPosition)
+      .map(toEngineView),
     archivedAt: vessel.archivedAt?.toISOString() ?? null,
     updatedAt: vessel.updatedAt.toISOString(),
   };
@@ -54,5 +58,7 @@ export function vesselMatches(view: VesselView, q: string): boolean {
 export function engineMatches(engine: Engine, vesselName: string, q: string): boolean {
   if (!q) return true;
   const needle = folded(q);
-  return [engine.maker, engine.model, engine.serialNumber, engine.position, vesselName].some((text) => folded(text).includes(needle));
+  return [engine.maker, engine.model, engine.serialNumber, engine.position, vesselName].some(
+    (text) => folded(text).includes(needle),
+  );
 }

@@ -1,6 +1,12 @@
 import supertest from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { addOtherWorkshop, DEMO, signedInAgent, startTestServer, type TestServer } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  signedInAgent,
+  startTestServer,
+  type TestServer,
+} from '../../../tests/helpers/test-server.js';
 import { Run } from '../runs/run.entity.js';
 import { User } from '../users/user.entity.js';
 import { Vessel } from './vessel.entity.js';
@@ -13,11 +19,19 @@ beforeAll(async () => {
 });
 afterAll(() => server.close());
 
-const vesselId = async (name: string) => (await server.dataSource.getRepository(Vessel).findOneByOrFail({ name })).id;
-const userId = async (email: string) => (await server.dataSource.getRepository(User).findOneByOrFail({ email })).id;
+const vesselId = async (name: string) =>
+  (await server.dataSource.getRepository(Vessel).findOneByOrFail({ name })).id;
+const userId = async (email: string) =>
+  (await server.dataSource.getRepository(User).findOneByOrFail({ email })).id;
 const names = (body: { vessels: Array<{ name: string }> }) => body.vessels.map((v) => v.name);
 
-const newVessel = { name: 'Storm Petrel', hin: 'spx12345d626', type: 'rib', lengthM: 6.5, homePort: 'Kestrel Harbour' };
+const newVessel = {
+  name: 'Storm Petrel',
+  hin: 'spx12345d626',
+  type: 'rib',
+  lengthM: 6.5,
+  homePort: 'Kestrel Harbour',
+};
 
 describe('GET /api/vessels', () => {
   it('keeps the shape the homes and the on-deck screen read, engines port to starboard', async () => {
@@ -28,10 +42,32 @@ describe('GET /api/vessels', () => {
     expect(names(res.body)).toEqual(expect.arrayContaining(['Blue Tern', 'Gannet']));
     expect(names(res.body)).not.toContain('Halcyon Drift');
     const blueTern = res.body.vessels.find((v: { name: string }) => v.name === 'Blue Tern');
-    expect(Object.keys(blueTern)).toEqual(expect.arrayContaining(['id', 'name', 'hin', 'type', 'lengthM', 'homePort', 'skippers', 'engines']));
-    expect(blueTern.skippers).toEqual([{ id: await userId(DEMO.skipperA), name: 'Sunniva Okafor' }]);
-    expect(blueTern.engines.map((e: { position: string }) => e.position)).toEqual(['port', 'starboard']);
-    expect(blueTern.engines[0]).toMatchObject({ serialNumber: 'NV150-26-01127', ratedRpmMin: 5000, ratedRpmMax: 6000, tachSource: 'charging-coil', poles: 12 });
+    expect(Object.keys(blueTern)).toEqual(
+      expect.arrayContaining([
+        'id',
+        'name',
+        'hin',
+        'type',
+        'lengthM',
+        'homePort',
+        'skippers',
+        'engines',
+      ]),
+    );
+    expect(blueTern.skippers).toEqual([
+      { id: await userId(DEMO.skipperA), name: 'Sunniva Okafor' },
+    ]);
+    expect(blueTern.engines.map((e: { position: string }) => e.position)).toEqual([
+      'port',
+      'starboard',
+    ]);
+    expect(blueTern.engines[0]).toMatchObject({
+      serialNumber: 'NV150-26-01127',
+      ratedRpmMin: 5000,
+      ratedRpmMax: 6000,
+      tachSource: 'charging-coil',
+      poles: 12,
+    });
   });
 
   it('searches by name, home port, skipper and engine serial', async () => {
@@ -47,7 +83,12 @@ describe('GET /api/vessels', () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
     const res = await tech.get('/api/vessels?status=sunk');
     expect(res.status).toBe(400);
-    expect(res.body.errors).toEqual([{ field: 'query.status', message: 'The status filter (status) must be active, archived or all.' }]);
+    expect(res.body.errors).toEqual([
+      {
+        field: 'query.status',
+        message: 'The status filter (status) must be active, archived or all.',
+      },
+    ]);
   });
 
   it('answers 401 to a visitor', async () => {
@@ -60,7 +101,13 @@ describe('creating, editing and archiving vessels', () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
     const created = await tech.post('/api/vessels').send(newVessel);
     expect(created.status).toBe(201);
-    expect(created.body.vessel).toMatchObject({ name: 'Storm Petrel', hin: 'SPX12345D626', engines: [], skippers: [], archivedAt: null });
+    expect(created.body.vessel).toMatchObject({
+      name: 'Storm Petrel',
+      hin: 'SPX12345D626',
+      engines: [],
+      skippers: [],
+      archivedAt: null,
+    });
     const read = await tech.get(`/api/vessels/${created.body.vessel.id}`);
     expect(read.body.vessel.name).toBe('Storm Petrel');
   });
@@ -74,13 +121,21 @@ describe('creating, editing and archiving vessels', () => {
       { field: 'type', message: 'Choose the vessel type from the list.' },
       { field: 'lengthM', message: 'Length must be above 0 m.' },
     ]);
-    expect(await server.dataSource.getRepository(Vessel).countBy({ type: 'submarine' as never })).toBe(0);
+    expect(
+      await server.dataSource.getRepository(Vessel).countBy({ type: 'submarine' as never }),
+    ).toBe(0);
   });
 
   it('lets a manager edit a vessel', async () => {
     const manager = await signedInAgent(server.app, DEMO.manager);
     const id = await vesselId('Gannet');
-    const res = await manager.put(`/api/vessels/${id}`).send({ name: 'Gannet', hin: 'TDW40217K526', type: 'workboat', lengthM: 5.9, homePort: 'Slipway 4' });
+    const res = await manager.put(`/api/vessels/${id}`).send({
+      name: 'Gannet',
+      hin: 'TDW40217K526',
+      type: 'workboat',
+      lengthM: 5.9,
+      homePort: 'Slipway 4',
+    });
     expect(res.status).toBe(200);
     expect(res.body.vessel).toMatchObject({ lengthM: 5.9, homePort: 'Slipway 4' });
     expect(res.body.vessel.engines).toHaveLength(1);
@@ -88,33 +143,58 @@ describe('creating, editing and archiving vessels', () => {
 
   it('archives instead of deleting, hides the vessel from the everyday list, and restores it', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
-    const { body } = await tech.post('/api/vessels').send({ ...newVessel, name: 'Old Cormorant', hin: '' });
+    const { body } = await tech
+      .post('/api/vessels')
+      .send({ ...newVessel, name: 'Old Cormorant', hin: '' });
     const archived = await tech.post(`/api/vessels/${body.vessel.id}/archive`);
     expect(archived.status).toBe(200);
     expect(archived.body.vessel.archivedAt).not.toBeNull();
     expect(names((await tech.get('/api/vessels')).body)).not.toContain('Old Cormorant');
     expect(names((await tech.get('/api/vessels?status=archived')).body)).toEqual(['Old Cormorant']);
-    const edit = await tech.put(`/api/vessels/${body.vessel.id}`).send({ ...newVessel, name: 'Renamed' });
+    const edit = await tech
+      .put(`/api/vessels/${body.vessel.id}`)
+      .send({ ...newVessel, name: 'Renamed' });
     expect(edit.status).toBe(409);
     expect(edit.body.detail).toBe('Old Cormorant is archived. Restore it before changing it.');
-    expect((await tech.post(`/api/vessels/${body.vessel.id}/restore`)).body.vessel.archivedAt).toBeNull();
-    expect(await server.dataSource.getRepository(Vessel).existsBy({ id: body.vessel.id })).toBe(true);
+    expect(
+      (await tech.post(`/api/vessels/${body.vessel.id}/restore`)).body.vessel.archivedAt,
+    ).toBeNull();
+    expect(await server.dataSource.getRepository(Vessel).existsBy({ id: body.vessel.id })).toBe(
+      true,
+    );
   });
 
   it('refuses to archive a vessel whose engine has a break-in open', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
-    const { body } = await tech.post('/api/vessels').send({ ...newVessel, name: 'Guillemot', hin: '' });
+    const { body } = await tech
+      .post('/api/vessels')
+      .send({ ...newVessel, name: 'Guillemot', hin: '' });
     const engine = await tech.post('/api/engines').send({
-      vesselId: body.vessel.id, position: 'single', installation: 'outboard', maker: 'Kestrel', model: 'K40', serialNumber: 'GUI-1',
-      fuel: 'petrol', cycle: 'four-stroke', ratedRpmMin: 5000, ratedRpmMax: 6000, // typical four-stroke outboard range (common practice)
+      vesselId: body.vessel.id,
+      position: 'single',
+      installation: 'outboard',
+      maker: 'Kestrel',
+      model: 'K40',
+      serialNumber: 'GUI-1',
+      fuel: 'petrol',
+      cycle: 'four-stroke',
+      ratedRpmMin: 5000,
+      ratedRpmMax: 6000, // typical four-stroke outboard range (common practice)
     });
-    const programs = (await tech.get('/api/programs')).body.programs as Array<{ id: string; builtInKey: string | null }>;
+    const programs = (await tech.get('/api/programs')).body.programs as Array<{
+      id: string;
+      builtInKey: string | null;
+    }>;
     const fourStroke = programs.find((p) => p.builtInKey === 'four-stroke-outboard')!;
-    const assigned = await tech.post('/api/runs').send({ engineId: engine.body.engine.id, programId: fourStroke.id });
+    const assigned = await tech
+      .post('/api/runs')
+      .send({ engineId: engine.body.engine.id, programId: fourStroke.id });
     expect(assigned.status).toBe(201);
     const res = await tech.post(`/api/vessels/${body.vessel.id}/archive`);
     expect(res.status).toBe(409);
-    expect(res.body.detail).toBe('Guillemot has an engine with a break-in run that is not signed off. Finish or sign off that run first.');
+    expect(res.body.detail).toBe(
+      'Guillemot has an engine with a break-in run that is not signed off. Finish or sign off that run first.',
+    );
     const engineArchive = await tech.post(`/api/engines/${engine.body.engine.id}/archive`);
     expect(engineArchive.status).toBe(409);
     await server.dataSource.getRepository(Run).delete({ id: assigned.body.run.id });
@@ -127,7 +207,9 @@ describe('roles and tenancy', () => {
     const skipper = await signedInAgent(server.app, DEMO.skipperB);
     expect((await skipper.get(`/api/vessels/${await vesselId('Halcyon Drift')}`)).status).toBe(200);
     expect((await skipper.get(`/api/vessels/${await vesselId('Gannet')}`)).status).toBe(404);
-    const edit = await skipper.put(`/api/vessels/${await vesselId('Halcyon Drift')}`).send({ ...newVessel, name: 'Mine now' });
+    const edit = await skipper
+      .put(`/api/vessels/${await vesselId('Halcyon Drift')}`)
+      .send({ ...newVessel, name: 'Mine now' });
     expect(edit.status).toBe(403);
     expect((await skipper.post('/api/vessels').send(newVessel)).status).toBe(403);
     expect((await skipper.get('/api/skippers')).status).toBe(403);
@@ -140,7 +222,9 @@ describe('roles and tenancy', () => {
     expect((await other.get(`/api/vessels/${id}`)).status).toBe(404);
     expect((await other.put(`/api/vessels/${id}`).send(newVessel)).status).toBe(404);
     expect((await other.post(`/api/vessels/${id}/archive`)).status).toBe(404);
-    expect((await other.put(`/api/vessels/${id}/skippers/${await userId(DEMO.skipperA)}`)).status).toBe(404);
+    expect(
+      (await other.put(`/api/vessels/${id}/skippers/${await userId(DEMO.skipperA)}`)).status,
+    ).toBe(404);
   });
 });
 
@@ -150,27 +234,40 @@ describe('linking skippers', () => {
     const tomas = await userId(DEMO.skipperB);
     const gannet = await vesselId('Gannet');
     const skippers = (await tech.get('/api/skippers')).body.skippers;
-    expect(skippers.map((s: { name: string }) => s.name)).toEqual(expect.arrayContaining(['Sunniva Okafor', 'Tomas Reyes']));
+    expect(skippers.map((s: { name: string }) => s.name)).toEqual(
+      expect.arrayContaining(['Sunniva Okafor', 'Tomas Reyes']),
+    );
     const tomasRow = skippers.find((s: { id: string }) => s.id === tomas);
     expect(tomasRow.vesselIds).toContain(await vesselId('Halcyon Drift'));
     expect(tomasRow.vesselIds).not.toContain(gannet);
 
     const linked = await tech.put(`/api/vessels/${gannet}/skippers/${tomas}`);
     expect(linked.status).toBe(200);
-    expect(linked.body.vessel.skippers.map((s: { name: string }) => s.name)).toEqual(['Sunniva Okafor', 'Tomas Reyes']);
+    expect(linked.body.vessel.skippers.map((s: { name: string }) => s.name)).toEqual([
+      'Sunniva Okafor',
+      'Tomas Reyes',
+    ]);
     expect((await tech.put(`/api/vessels/${gannet}/skippers/${tomas}`)).status).toBe(200);
     const skipper = await signedInAgent(server.app, DEMO.skipperB);
-    expect(names((await skipper.get('/api/vessels')).body)).toEqual(expect.arrayContaining(['Gannet', 'Halcyon Drift']));
+    expect(names((await skipper.get('/api/vessels')).body)).toEqual(
+      expect.arrayContaining(['Gannet', 'Halcyon Drift']),
+    );
 
     const unlinked = await tech.delete(`/api/vessels/${gannet}/skippers/${tomas}`);
-    expect(unlinked.body.vessel.skippers.map((s: { name: string }) => s.name)).toEqual(['Sunniva Okafor']);
+    expect(unlinked.body.vessel.skippers.map((s: { name: string }) => s.name)).toEqual([
+      'Sunniva Okafor',
+    ]);
     expect(names((await skipper.get('/api/vessels')).body)).not.toContain('Gannet');
   });
 
   it('links only skippers of the same workshop, naming the field', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
-    const res = await tech.put(`/api/vessels/${await vesselId('Gannet')}/skippers/${await userId(DEMO.manager)}`);
+    const res = await tech.put(
+      `/api/vessels/${await vesselId('Gannet')}/skippers/${await userId(DEMO.manager)}`,
+    );
     expect(res.status).toBe(400);
-    expect(res.body.errors).toEqual([{ field: 'userId', message: 'Choose a skipper of your workshop.' }]);
+    expect(res.body.errors).toEqual([
+      { field: 'userId', message: 'Choose a skipper of your workshop.' },
+    ]);
   });
 });

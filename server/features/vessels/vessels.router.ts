@@ -1,41 +1,79 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { SkipperLinkParamsSchema, VesselInputSchema, VesselListQuerySchema, type VesselListQuery } from '../../../shared/vessels/vessel.schema.js';
+import {
+  SkipperLinkParamsSchema,
+  VesselInputSchema,
+  VesselListQuerySchema,
+  type VesselListQuery,
+} from '../../../shared/vessels/vessel.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { SkipperLinksService } from './skipper-links.service.js';
 import type { VesselsService } from './vessels.service.js';
 
-const IdParamsSchema = z.object({ id: z.uuid({ error: 'The vessel id in the address is not valid.' }) });
+const IdParamsSchema = z.object({
+  id: z.uuid({ error: 'The vessel id in the address is not valid.' }),
+});
 const staff = requireRole('technician', 'manager');
 
 export function vesselsRouter(service: VesselsService, links: SkipperLinksService): Router {
   const router = Router();
 
   // Skippers and the on-deck screen read this list too: its shape only ever grows.
-  router.get('/vessels', requireRole(), validate({ query: VesselListQuerySchema }), async (_req, res) => {
-    res.json({ vessels: await service.listFor(currentUser(res), res.locals.query as VesselListQuery) });
-  });
+  router.get(
+    '/vessels',
+    requireRole(),
+    validate({ query: VesselListQuerySchema }),
+    async (_req, res) => {
+      res.json({
+        vessels: await service.listFor(currentUser(res), res.locals.query as VesselListQuery),
+      });
+    },
+  );
 
   router.post('/vessels', staff, validate({ body: VesselInputSchema }), async (req, res) => {
     res.status(201).json({ vessel: await service.create(currentUser(res), req.body) });
   });
 
-  router.get('/vessels/:id', requireRole(), validate({ params: IdParamsSchema }), async (req, res) => {
-    res.json({ vessel: await service.get(currentUser(res), String(req.params.id)) });
-  });
+  router.get(
+    '/vessels/:id',
+    requireRole(),
+    validate({ params: IdParamsSchema }),
+    async (req, res) => {
+      res.json({ vessel: await service.get(currentUser(res), String(req.params.id)) });
+    },
+  );
 
-  router.put('/vessels/:id', staff, validate({ params: IdParamsSchema, body: VesselInputSchema }), async (req, res) => {
-    res.json({ vessel: await service.update(currentUser(res), String(req.params.id), req.body) });
-  });
+  router.put(
+    '/vessels/:id',
+    staff,
+    validate({ params: IdParamsSchema, body: VesselInputSchema }),
+    async (req, res) => {
+      res.json({ vessel: await service.update(currentUser(res), String(req.params.id), req.body) });
+    },
+  );
 
-  router.post('/vessels/:id/archive', staff, validate({ params: IdParamsSchema }), async (req, res) => {
-    res.json({ vessel: await service.setArchived(currentUser(res), String(req.params.id), true) });
-  });
+  router.post(
+    '/vessels/:id/archive',
+    staff,
+    validate({ params: IdParamsSchema }),
+    async (req, res) => {
+      res.json({
+        vessel: await service.setArchived(currentUser(res), String(req.params.id), true),
+      });
+    },
+  );
 
-  router.post('/vessels/:id/restore', staff, validate({ params: IdParamsSchema }), async (req, res) => {
-    res.json({ vessel: await service.setArchived(currentUser(res), String(req.params.id), false) });
-  });
+  router.post(
+    '/vessels/:id/restore',
+    staff,
+    validate({ params: IdParamsSchema }),
+    async (req, res) => {
+      res.json({
+        vessel: await service.setArchived(currentUser(res), String(req.params.id), false),
+      });
+    },
+  );
 
   mountSkipperLinks(router, links);
   return router;
@@ -46,11 +84,33 @@ function mountSkipperLinks(router: Router, links: SkipperLinksService) {
     res.json({ skippers: await links.listSkippers(currentUser(res)) });
   });
 
-  router.put('/vessels/:id/skippers/:userId', staff, validate({ params: SkipperLinkParamsSchema }), async (req, res) => {
-    res.json({ vessel: await links.link(currentUser(res), String(req.params.id), String(req.params.userId)) });
-  });
+  router.put(
+    '/vessels/:id/skippers/:userId',
+    staff,
+    validate({ params: SkipperLinkParamsSchema }),
+    async (req, res) => {
+      res.json({
+        vessel: await links.link(
+          currentUser(res),
+          String(req.params.id),
+          String(req.params.userId),
+        ),
+      });
+    },
+  );
 
-  router.delete('/vessels/:id/skippers/:userId', staff, validate({ params: SkipperLinkParamsSchema }), async (req, res) => {
-    res.json({ vessel: await links.unlink(currentUser(res), String(req.params.id), String(req.params.userId)) });
-  });
+  router.delete(
+    '/vessels/:id/skippers/:userId',
+    staff,
+    validate({ params: SkipperLinkParamsSchema }),
+    async (req, res) => {
+      res.json({
+        vessel: await links.unlink(
+          currentUser(res),
+          String(req.params.id),
+          String(req.params.userId),
+        ),
+      });
+    },
+  );
 }

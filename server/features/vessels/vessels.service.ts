@@ -1,9 +1,20 @@
 import { randomUUID } from 'node:crypto';
-import { In, IsNull, Not, type DataSource, type EntityManager, type FindOptionsWhere } from 'typeorm';
+import {
+  In,
+  IsNull,
+  Not,
+  type DataSource,
+  type EntityManager,
+  type FindOptionsWhere,
+} from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import { OPEN_RUN_STATES } from '../../../shared/runs/run.schema.js';
 import type { VesselView } from '../../../shared/vessels/vessel-view.js';
-import { VesselListQuerySchema, type VesselInput, type VesselListQuery } from '../../../shared/vessels/vessel.schema.js';
+import {
+  VesselListQuerySchema,
+  type VesselInput,
+  type VesselListQuery,
+} from '../../../shared/vessels/vessel.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { systemClock } from '../../lib/clock.js';
 import { ConflictError } from '../../lib/errors.js';
@@ -13,7 +24,11 @@ import { toVesselView, vesselMatches } from './vessel-views.js';
 import { Vessel } from './vessel.entity.js';
 
 const archivedWhere = (status: VesselListQuery['status']) =>
-  status === 'active' ? { archivedAt: IsNull() } : status === 'archived' ? { archivedAt: Not(IsNull()) } : {};
+  status === 'active'
+    ? { archivedAt: IsNull() }
+    : status === 'archived'
+      ? { archivedAt: Not(IsNull()) }
+      : {};
 
 export class VesselsService {
   constructor(
@@ -25,11 +40,19 @@ export class VesselsService {
    * Staff see every vessel of their workshop (archived ones when asked); a skipper only the
    * vessels linked to them that are in use.
    */
-  async listFor(user: SessionUser, query: VesselListQuery = VesselListQuerySchema.parse({})): Promise<VesselView[]> {
+  async listFor(
+    user: SessionUser,
+    query: VesselListQuery = VesselListQuerySchema.parse({}),
+  ): Promise<VesselView[]> {
     const status = user.role === 'skipper' ? 'active' : query.status;
-    const where: FindOptionsWhere<Vessel> = { workshopId: user.workshopId, ...archivedWhere(status) };
+    const where: FindOptionsWhere<Vessel> = {
+      workshopId: user.workshopId,
+      ...archivedWhere(status),
+    };
     if (user.role === 'skipper') where.skippers = { userId: user.id };
-    const ids = (await this.dataSource.getRepository(Vessel).find({ select: { id: true }, where })).map((v) => v.id);
+    const ids = (
+      await this.dataSource.getRepository(Vessel).find({ select: { id: true }, where })
+    ).map((v) => v.id);
     if (ids.length === 0) return [];
     const vessels = await this.dataSource.getRepository(Vessel).find({
       where: { id: In(ids) },
@@ -46,7 +69,9 @@ export class VesselsService {
 
   async create(user: SessionUser, input: VesselInput): Promise<VesselView> {
     const id = randomUUID();
-    await this.dataSource.getRepository(Vessel).insert({ id, workshopId: user.workshopId, ...input, archivedAt: null });
+    await this.dataSource
+      .getRepository(Vessel)
+      .insert({ id, workshopId: user.workshopId, ...input, archivedAt: null });
     return this.view(this.dataSource.manager, id);
   }
 
@@ -64,25 +89,40 @@ export class VesselsService {
     return this.dataSource.transaction(async (manager) => {
       const vessel = await findVisibleVessel(manager, user, id);
       if (archived && !vessel.archivedAt) {
-        await refuseOpenRuns(manager, { vesselId: id }, `${vessel.name} has an engine with a break-in run that is not signed off. Finish or sign off that run first.`);
+        await refuseOpenRuns(
+          manager,
+          { vesselId: id },
+          `${vessel.name} has an engine with a break-in run that is not signed off. Finish or sign off that run first.`,
+        );
       }
-      await manager.getRepository(Vessel).update({ id }, { archivedAt: archived ? (vessel.archivedAt ?? this.clock.now()) : null });
+      await manager
+        .getRepository(Vessel)
+        .update({ id }, { archivedAt: archived ? (vessel.archivedAt ?? this.clock.now()) : null });
       return this.view(manager, id);
     });
   }
 
   private async view(manager: EntityManager, id: string): Promise<VesselView> {
-    const vessel = await manager.getRepository(Vessel).findOneOrFail({ where: { id }, relations: { engines: true, skippers: { user: true } } });
+    const vessel = await manager
+      .getRepository(Vessel)
+      .findOneOrFail({ where: { id }, relations: { engines: true, skippers: { user: true } } });
     return toVesselView(vessel);
   }
 }
 
 export function refuseArchived(vessel: Vessel) {
-  if (vessel.archivedAt) throw new ConflictError(`${vessel.name} is archived. Restore it before changing it.`);
+  if (vessel.archivedAt)
+    throw new ConflictError(`${vessel.name} is archived. Restore it before changing it.`);
 }
 
 /** A record with a break-in still open cannot be archived: the run would lose its place. */
-export async function refuseOpenRuns(manager: EntityManager, where: { vesselId: string } | { engineId: string }, detail: string) {
-  const open = await manager.getRepository(Run).exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
+export async function refuseOpenRuns(
+  manager: EntityManager,
+  where: { vesselId: string } | { engineId: string },
+  detail: string,
+) {
+  const open = await manager
+    .getRepository(Run)
+    .exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
   if (open) throw new ConflictError(detail);
 }

@@ -20,7 +20,12 @@ export class Workshop {
 
   /** Unit preferences as JSON: { speed, volume, power, temperature }. */
   @Column('simple-json')
-  units: { speed: 'kn' | 'km/h' | 'mph'; volume: 'L' | 'US gal'; power: 'kW' | 'hp'; temperature: 'C' | 'F' };
+  units: {
+    speed: 'kn' | 'km/h' | 'mph';
+    volume: 'L' | 'US gal';
+    power: 'kW' | 'hp';
+    temperature: 'C' | 'F';
+  };
 
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;

@@ -8,7 +8,9 @@ export function workshopsRouter(dataSource: DataSource): Router {
   const router = Router();
   // Staff only: a skipper sees the workshop's name through their session, not its settings.
   router.get('/workshop', requireRole('technician', 'manager'), async (_req, res) => {
-    const workshop = await dataSource.getRepository(Workshop).findOne({ where: { id: currentUser(res).workshopId } });
+    const workshop = await dataSource
+      .getRepository(Workshop)
+      .findOne({ where: { id: currentUser(res).workshopId } });
     if (!workshop) throw new NotFoundError('workshop');
     res.json({ workshop: { ...workshop, createdAt: workshop.createdAt.toISOString() } });
   });

@@ -10,14 +10,22 @@ afterEach(() => {
 });
 
 const token = 'tok_0123456789abcdefghij';
-const preview = { email: 'ada@example.com', role: 'skipper', workshopName: 'Quayside Marine Works', expiresAt: '2026-06-01T12:00:00Z' };
+const preview = {
+  email: 'ada@example.com',
+  role: 'skipper',
+  workshopName: 'Quayside Marine Works',
+  expiresAt: '2026-06-01T12:00:00Z',
+};
 
 const renderInvite = () =>
-  renderRoutes([
-    { path: '/invite/:token', element: <AcceptInviteRoute /> },
-    { path: '/', element: <h1>Home page</h1> },
-    { path: '/sign-in', element: <h1>Sign-in page</h1> },
-  ], { at: `/invite/${token}` });
+  renderRoutes(
+    [
+      { path: '/invite/:token', element: <AcceptInviteRoute /> },
+      { path: '/', element: <h1>Home page</h1> },
+      { path: '/sign-in', element: <h1>Sign-in page</h1> },
+    ],
+    { at: `/invite/${token}` },
+  );
 
 describe('accept invite page', () => {
   it('names the workshop and role, checks the password length, then signs in', async () => {
@@ -34,7 +42,9 @@ describe('accept invite page', () => {
     await user.type(screen.getByLabelText('Your name'), 'Ada Harbour');
     await user.type(screen.getByLabelText('Password'), 'short');
     await user.click(screen.getByRole('button', { name: 'Set password and sign in' }));
-    expect(await screen.findByText('Use at least 10 characters for the password.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Use at least 10 characters for the password.'),
+    ).toBeInTheDocument();
     expect(calls.some((c) => c.method === 'POST')).toBe(false);
 
     await user.clear(screen.getByLabelText('Password'));
@@ -43,14 +53,20 @@ describe('accept invite page', () => {
 
     expect(await screen.findByRole('heading', { name: 'Home page' })).toBeInTheDocument();
     expect(calls.at(-1)).toEqual({
-      method: 'POST', path: '/api/auth/accept-invite', body: { token, name: 'Ada Harbour', password: 'tide turns at noon' },
+      method: 'POST',
+      path: '/api/auth/accept-invite',
+      body: { token, name: 'Ada Harbour', password: 'tide turns at noon' },
     });
   });
 
   it('explains an expired or used link', async () => {
-    stubFetch({ [`GET /api/invites/${token}`]: problem(410, 'Gone', 'This invite was already used.') });
+    stubFetch({
+      [`GET /api/invites/${token}`]: problem(410, 'Gone', 'This invite was already used.'),
+    });
     renderInvite();
-    expect(await screen.findByRole('alert')).toHaveTextContent('This invite link has expired or was already used');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'This invite link has expired or was already used',
+    );
     expect(screen.queryByLabelText('Your name')).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Go to sign in' })).toHaveAttribute('href', '/sign-in');
   });

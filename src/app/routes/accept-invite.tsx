@@ -12,12 +12,21 @@ const roleLabel = { skipper: 'skipper', technician: 'technician', manager: 'mana
 
 function deadLinkMessage(error: unknown): { title: string; detail: string } {
   if (isApiError(error) && error.status === 410) {
-    return { title: 'This invite link has expired or was already used', detail: 'Ask your workshop to send a new invite.' };
+    return {
+      title: 'This invite link has expired or was already used',
+      detail: 'Ask your workshop to send a new invite.',
+    };
   }
   if (isApiError(error) && error.status === 404) {
-    return { title: 'This invite link is not valid', detail: 'Check that the whole link was copied, or ask your workshop for a new invite.' };
+    return {
+      title: 'This invite link is not valid',
+      detail: 'Check that the whole link was copied, or ask your workshop for a new invite.',
+    };
   }
-  return { title: 'Could not check the invite', detail: isApiError(error) ? error.message : 'Try again in a moment.' };
+  return {
+    title: 'Could not check the invite',
+    detail: isApiError(error) ? error.message : 'Try again in a moment.',
+  };
 }
 
 export function AcceptInviteRoute() {
@@ -31,16 +40,21 @@ export function AcceptInviteRoute() {
       {preview.isPending && <Loading label="Checking the invite link…" />}
       {preview.isError && (
         <div className="flex flex-col gap-4">
-          <Alert title={deadLinkMessage(preview.error).title}>{deadLinkMessage(preview.error).detail}</Alert>
-          <ButtonLink to="/sign-in" variant="secondary">Go to sign in</ButtonLink>
+          <Alert title={deadLinkMessage(preview.error).title}>
+            {deadLinkMessage(preview.error).detail}
+          </Alert>
+          <ButtonLink to="/sign-in" variant="secondary">
+            Go to sign in
+          </ButtonLink>
         </div>
       )}
       {preview.data && (
         <div className="flex flex-col gap-5">
           <p>
-            <strong>{preview.data.workshopName}</strong> invites you as a <strong>{roleLabel[preview.data.role]}</strong>.
-            You will sign in with <strong className="break-all">{preview.data.email}</strong>.
-            The invite is valid until {formatDate(preview.data.expiresAt)}.
+            <strong>{preview.data.workshopName}</strong> invites you as a{' '}
+            <strong>{roleLabel[preview.data.role]}</strong>. You will sign in with{' '}
+            <strong className="break-all">{preview.data.email}</strong>. The invite is valid until{' '}
+            {formatDate(preview.data.expiresAt)}.
           </p>
           <AcceptInviteForm token={token} onAccepted={() => navigate('/', { replace: true })} />
         </div>

@@ -15,16 +15,27 @@ function ChecklistPage({ engineId }: { engineId: string }) {
   const checklist = useChecklist(engineId);
   const refreshFleet = useInvalidateFleet();
   if (engine.isPending || checklist.isPending) return <Loading label="Loading the checklist…" />;
-  if (engine.isError) return <LoadError error={engine.error} what="the engine" onRetry={() => engine.refetch()} />;
-  if (checklist.isError) return <LoadError error={checklist.error} what="the checklist" onRetry={() => checklist.refetch()} />;
+  if (engine.isError)
+    return <LoadError error={engine.error} what="the engine" onRetry={() => engine.refetch()} />;
+  if (checklist.isError)
+    return (
+      <LoadError error={checklist.error} what="the checklist" onRetry={() => checklist.refetch()} />
+    );
   const e = engine.data;
   return (
     <div className="flex flex-col gap-5">
       <title>{`Checklist · ${engineName(e)} · Ringseat`}</title>
-      <Link to={`/engines/${e.id}`} className="flex min-h-touch items-center self-start underline underline-offset-4">← {engineName(e)}</Link>
+      <Link
+        to={`/engines/${e.id}`}
+        className="flex min-h-touch items-center self-start underline underline-offset-4"
+      >
+        ← {engineName(e)}
+      </Link>
       <div>
         <h1 className="text-3xl font-bold">Commissioning checklist</h1>
-        <p className="text-lg">{e.vessel.name} · {engineName(e)} · <span className="figures">{e.serialNumber}</span></p>
+        <p className="text-lg">
+          {e.vessel.name} · {engineName(e)} · <span className="figures">{e.serialNumber}</span>
+        </p>
       </div>
       <CommissioningCautions />
       <ChecklistForm checklist={checklist.data} engine={e} onChanged={() => void refreshFleet()} />
@@ -32,7 +43,10 @@ function ChecklistPage({ engineId }: { engineId: string }) {
         {checklist.data.id ? (
           <AttachmentPanel recordType="checklist" recordId={checklist.data.id} canAdd />
         ) : (
-          <p>Save the checklist once, then add photos of the hour meter, the tachometer and the installation here.</p>
+          <p>
+            Save the checklist once, then add photos of the hour meter, the tachometer and the
+            installation here.
+          </p>
         )}
       </Card>
     </div>

@@ -23,12 +23,21 @@ function DetailsCard({ engine }: { engine: EngineRow }) {
   return (
     <Card title="Engine record">
       {editing ? (
-        <EngineForm engine={engine} vesselId={engine.vesselId} vessels={vessels.data?.map(({ id, name }) => ({ id, name }))}
-          onSaved={() => setEditing(false)} onCancel={() => setEditing(false)} />
+        <EngineForm
+          engine={engine}
+          vesselId={engine.vesselId}
+          vessels={vessels.data?.map(({ id, name }) => ({ id, name }))}
+          onSaved={() => setEditing(false)}
+          onCancel={() => setEditing(false)}
+        />
       ) : (
         <div className="flex flex-col gap-4">
           <EngineFacts engine={engine} />
-          {!engine.archivedAt && <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>Edit engine</Button>}
+          {!engine.archivedAt && (
+            <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>
+              Edit engine
+            </Button>
+          )}
         </div>
       )}
     </Card>
@@ -39,12 +48,18 @@ function EnginePage({ id }: { id: string }) {
   const engine = useEngine(id);
   const archive = useArchiveEngine();
   if (engine.isPending) return <Loading label="Loading the engine…" />;
-  if (engine.isError) return <LoadError error={engine.error} what="the engine" onRetry={() => engine.refetch()} />;
+  if (engine.isError)
+    return <LoadError error={engine.error} what="the engine" onRetry={() => engine.refetch()} />;
   const e = engine.data;
   return (
     <div className="flex flex-col gap-5">
       <title>{`${engineName(e)} · Ringseat`}</title>
-      <Link to={`/vessels/${e.vessel.id}`} className="flex min-h-touch items-center self-start underline underline-offset-4">← {e.vessel.name}</Link>
+      <Link
+        to={`/vessels/${e.vessel.id}`}
+        className="flex min-h-touch items-center self-start underline underline-offset-4"
+      >
+        ← {e.vessel.name}
+      </Link>
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="text-3xl font-bold">{engineName(e)}</h1>
         <ArchivedPill archivedAt={e.archivedAt} />
@@ -56,16 +71,29 @@ function EnginePage({ id }: { id: string }) {
           {e.checklist?.completedAt && <span>Completed {formatDate(e.checklist.completedAt)}</span>}
         </div>
         <ButtonLink to={`/engines/${e.id}/checklist`} className="mt-3">
-          {e.checklist?.completedAt ? 'View the checklist' : e.checklist ? 'Continue the checklist' : 'Start the checklist'}
+          {e.checklist?.completedAt
+            ? 'View the checklist'
+            : e.checklist
+              ? 'Continue the checklist'
+              : 'Start the checklist'}
         </ButtonLink>
       </Card>
       <DetailsCard engine={e} />
-      {!e.archivedAt && <Card title="Assign break-in program" aria-label="Assign break-in program"><AssignProgram engineId={e.id} /></Card>}
+      {!e.archivedAt && (
+        <Card title="Assign break-in program" aria-label="Assign break-in program">
+          <AssignProgram engineId={e.id} />
+        </Card>
+      )}
       <Card title="Photos and documents">
         <AttachmentPanel recordType="engine" recordId={e.id} canAdd={!e.archivedAt} />
       </Card>
-      <ArchiveControl what="this engine" archived={Boolean(e.archivedAt)} pending={archive.isPending} error={archive.error}
-        onChange={(archived) => archive.mutate({ id: e.id, archived })} />
+      <ArchiveControl
+        what="this engine"
+        archived={Boolean(e.archivedAt)}
+        pending={archive.isPending}
+        error={archive.error}
+        onChange={(archived) => archive.mutate({ id: e.id, archived })}
+      />
     </div>
   );
 }

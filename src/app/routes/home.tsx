@@ -17,11 +17,17 @@ function SkipperHome() {
       <title>Your vessels · Ringseat</title>
       <h1 className="text-3xl font-bold">Your vessels</h1>
       {vessels.isPending && <Loading label="Loading your vessels…" />}
-      {vessels.isError && <LoadError error={vessels.error} what="your vessels" onRetry={() => vessels.refetch()} />}
-      {vessels.data?.length === 0 && (
-        <p className="text-lg">No vessel is linked to you yet. Your workshop links your boat when it sets up the engine.</p>
+      {vessels.isError && (
+        <LoadError error={vessels.error} what="your vessels" onRetry={() => vessels.refetch()} />
       )}
-      {vessels.data?.map((vessel) => <VesselCard key={vessel.id} vessel={vessel} />)}
+      {vessels.data?.length === 0 && (
+        <p className="text-lg">
+          No vessel is linked to you yet. Your workshop links your boat when it sets up the engine.
+        </p>
+      )}
+      {vessels.data?.map((vessel) => (
+        <VesselCard key={vessel.id} vessel={vessel} />
+      ))}
       <CautionCard />
     </div>
   );
@@ -35,8 +41,12 @@ function WorkshopHome() {
       <h1 className="text-3xl font-bold">Workshop</h1>
       <h2 className="text-xl font-bold">Vessels and engines</h2>
       {vessels.isPending && <Loading label="Loading the workshop's vessels…" />}
-      {vessels.isError && <LoadError error={vessels.error} what="the vessels" onRetry={() => vessels.refetch()} />}
-      {vessels.data?.length === 0 && <p>No vessels yet. Vessels and their engines appear here once they are added.</p>}
+      {vessels.isError && (
+        <LoadError error={vessels.error} what="the vessels" onRetry={() => vessels.refetch()} />
+      )}
+      {vessels.data?.length === 0 && (
+        <p>No vessels yet. Vessels and their engines appear here once they are added.</p>
+      )}
       {vessels.data && vessels.data.length > 0 && (
         <>
           {/* A table on wide screens, cards on phones: display:none keeps the hidden one out of the accessibility tree. */}
@@ -44,7 +54,9 @@ function WorkshopHome() {
             <FleetTable vessels={vessels.data} />
           </div>
           <div className="flex flex-col gap-4 sm:hidden">
-            {vessels.data.map((vessel) => <VesselCard key={vessel.id} vessel={vessel} showSkippers />)}
+            {vessels.data.map((vessel) => (
+              <VesselCard key={vessel.id} vessel={vessel} showSkippers />
+            ))}
           </div>
         </>
       )}

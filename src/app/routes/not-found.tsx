@@ -11,10 +11,12 @@ export function NotFoundRoute() {
       <title>Page not found · Ringseat</title>
       <h1 className="text-3xl font-bold">Page not found</h1>
       <p>
-        Ringseat has no page at <code className="figures break-all">{pathname}</code>. The link may be
-        mistyped, or the page may have moved.
+        Ringseat has no page at <code className="figures break-all">{pathname}</code>. The link may
+        be mistyped, or the page may have moved.
       </p>
-      <ButtonLink to="/" className="self-start">{home}</ButtonLink>
+      <ButtonLink to="/" className="self-start">
+        {home}
+      </ButtonLink>
     </div>
   );
 }

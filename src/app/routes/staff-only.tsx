@@ -9,8 +9,13 @@ export function StaffOnly({ title, children }: { title: string; children: ReactN
   return (
     <div className="flex max-w-xl flex-col gap-4">
       <h1 className="text-3xl font-bold">{title}</h1>
-      <p>This page is for the workshop&rsquo;s staff. Your own vessels and their engines are on your start page.</p>
-      <ButtonLink to="/" variant="secondary" className="self-start">Go to your vessels</ButtonLink>
+      <p>
+        This page is for the workshop&rsquo;s staff. Your own vessels and their engines are on your
+        start page.
+      </p>
+      <ButtonLink to="/" variant="secondary" className="self-start">
+        Go to your vessels
+      </ButtonLink>
     </div>
   );
 }

@@ -14,7 +14,9 @@ export function TeamRoute() {
       <div className="flex flex-col gap-4">
         <h1 className="text-3xl font-bold">Team</h1>
         <p>Only the workshop&rsquo;s managers can see and invite people.</p>
-        <ButtonLink to="/" variant="secondary" className="self-start">Back to the start</ButtonLink>
+        <ButtonLink to="/" variant="secondary" className="self-start">
+          Back to the start
+        </ButtonLink>
       </div>
     );
   }
@@ -33,13 +35,19 @@ function ManagerTeam() {
       <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
         <div className="flex min-w-0 flex-col gap-6">
           <section className="flex flex-col gap-3" aria-labelledby="people-heading">
-            <h2 id="people-heading" className="text-xl font-bold">People</h2>
+            <h2 id="people-heading" className="text-xl font-bold">
+              People
+            </h2>
             {team.isPending && <Loading label="Loading people…" />}
-            {team.isError && <LoadError error={team.error} what="the team" onRetry={() => team.refetch()} />}
+            {team.isError && (
+              <LoadError error={team.error} what="the team" onRetry={() => team.refetch()} />
+            )}
             {team.data && <PeopleTable users={team.data.users} />}
           </section>
           <section className="flex flex-col gap-3" aria-labelledby="invites-heading">
-            <h2 id="invites-heading" className="text-xl font-bold">Pending invites</h2>
+            <h2 id="invites-heading" className="text-xl font-bold">
+              Pending invites
+            </h2>
             {team.data && <PendingInvites invites={team.data.invites} />}
           </section>
         </div>

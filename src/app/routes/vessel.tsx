@@ -25,7 +25,10 @@ function VesselFacts({ vessel }: { vessel: VesselView }) {
   return (
     <dl className="grid gap-x-6 gap-y-1 sm:grid-cols-[auto_1fr]">
       {facts.map(([label, value]) => (
-        <div key={label} className="contents"><dt className="text-muted">{label}</dt><dd className={label === 'HIN' ? 'figures' : undefined}>{value}</dd></div>
+        <div key={label} className="contents">
+          <dt className="text-muted">{label}</dt>
+          <dd className={label === 'HIN' ? 'figures' : undefined}>{value}</dd>
+        </div>
       ))}
     </dl>
   );
@@ -38,16 +41,25 @@ function EnginesCard({ vessel }: { vessel: VesselView }) {
   return (
     <Card title="Engines">
       {engines.isPending && <Loading label="Loading engines…" />}
-      {engines.isError && <LoadError error={engines.error} what="the engines" onRetry={() => engines.refetch()} />}
+      {engines.isError && (
+        <LoadError error={engines.error} what="the engines" onRetry={() => engines.refetch()} />
+      )}
       {engines.data && <EnginesList engines={engines.data} showVessel={false} />}
-      {!vessel.archivedAt && (adding ? (
-        <div className="mt-4 flex flex-col gap-3 border-t-2 border-line pt-4">
-          <h3 className="text-lg font-bold">New engine on {vessel.name}</h3>
-          <EngineForm vesselId={vessel.id} onSaved={(e) => navigate(`/engines/${e.id}`)} onCancel={() => setAdding(false)} />
-        </div>
-      ) : (
-        <Button className="mt-4" onClick={() => setAdding(true)}>Add an engine</Button>
-      ))}
+      {!vessel.archivedAt &&
+        (adding ? (
+          <div className="mt-4 flex flex-col gap-3 border-t-2 border-line pt-4">
+            <h3 className="text-lg font-bold">New engine on {vessel.name}</h3>
+            <EngineForm
+              vesselId={vessel.id}
+              onSaved={(e) => navigate(`/engines/${e.id}`)}
+              onCancel={() => setAdding(false)}
+            />
+          </div>
+        ) : (
+          <Button className="mt-4" onClick={() => setAdding(true)}>
+            Add an engine
+          </Button>
+        ))}
     </Card>
   );
 }
@@ -57,30 +69,51 @@ function VesselPage({ id }: { id: string }) {
   const archive = useArchiveVessel();
   const [editing, setEditing] = useState(false);
   if (vessel.isPending) return <Loading label="Loading the vessel…" />;
-  if (vessel.isError) return <LoadError error={vessel.error} what="the vessel" onRetry={() => vessel.refetch()} />;
+  if (vessel.isError)
+    return <LoadError error={vessel.error} what="the vessel" onRetry={() => vessel.refetch()} />;
   const v = vessel.data;
   return (
     <div className="flex flex-col gap-5">
       <title>{`${v.name} · Ringseat`}</title>
-      <Link to="/vessels" className="flex min-h-touch items-center self-start underline underline-offset-4">← All vessels</Link>
+      <Link
+        to="/vessels"
+        className="flex min-h-touch items-center self-start underline underline-offset-4"
+      >
+        ← All vessels
+      </Link>
       <div className="flex flex-wrap items-center gap-3">
         <h1 className="text-3xl font-bold">{v.name}</h1>
         <ArchivedPill archivedAt={v.archivedAt} />
       </div>
       <Card title="Vessel">
         {editing ? (
-          <VesselForm vessel={v} onSaved={() => setEditing(false)} onCancel={() => setEditing(false)} />
+          <VesselForm
+            vessel={v}
+            onSaved={() => setEditing(false)}
+            onCancel={() => setEditing(false)}
+          />
         ) : (
           <div className="flex flex-col gap-4">
             <VesselFacts vessel={v} />
-            {!v.archivedAt && <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>Edit vessel</Button>}
+            {!v.archivedAt && (
+              <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>
+                Edit vessel
+              </Button>
+            )}
           </div>
         )}
       </Card>
       <EnginesCard vessel={v} />
-      <Card title="Skippers"><SkipperLinks vessel={v} /></Card>
-      <ArchiveControl what={v.name} archived={Boolean(v.archivedAt)} pending={archive.isPending} error={archive.error}
-        onChange={(archived) => archive.mutate({ id: v.id, archived })} />
+      <Card title="Skippers">
+        <SkipperLinks vessel={v} />
+      </Card>
+      <ArchiveControl
+        what={v.name}
+        archived={Boolean(v.archivedAt)}
+        pending={archive.isPending}
+        error={archive.error}
+        onChange={(archived) => archive.mutate({ id: v.id, archived })}
+      />
     </div>
   );
 }

@@ -21,7 +21,10 @@ function renderHeader(role: Role) {
 }
 
 const navLinkNames = () =>
-  screen.getAllByRole('link').filter((link) => link.closest('nav')).map((link) => link.textContent);
+  screen
+    .getAllByRole('link')
+    .filter((link) => link.closest('nav'))
+    .map((link) => link.textContent);
 
 describe('AppHeader', () => {
   it('shows a manager Workshop and Team', () => {

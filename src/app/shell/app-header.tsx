@@ -10,13 +10,20 @@ export function AppHeader({ user }: { user: SessionUser }) {
   const signOut = useSignOut();
   const navigate = useNavigate();
   return (
-    <SiteHeader user={user}
-      home={(className, content) => <Link to="/" className={className}>{content}</Link>}
+    <SiteHeader
+      user={user}
+      home={(className, content) => (
+        <Link to="/" className={className}>
+          {content}
+        </Link>
+      )}
       nav={<MainNav role={user.role} />}
       signOut={{
         pending: signOut.isPending,
         error: signOut.isError ? errorMessage(signOut.error) : null,
-        onSignOut: () => signOut.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) }),
-      }} />
+        onSignOut: () =>
+          signOut.mutate(undefined, { onSuccess: () => navigate('/sign-in', { replace: true }) }),
+      }}
+    />
   );
 }

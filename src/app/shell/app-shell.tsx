@@ -20,7 +20,8 @@ export function AppShell() {
     if (me.data === null) void clearUserData().catch(() => undefined);
   }, [me.data]);
 
-  if (me.data === null) return <Navigate to={signInPath(location.pathname + location.search)} replace />;
+  if (me.data === null)
+    return <Navigate to={signInPath(location.pathname + location.search)} replace />;
   if (me.data === undefined) {
     if (me.isError) throw me.error;
     return <Splash />;

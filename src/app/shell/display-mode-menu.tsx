@@ -35,33 +35,58 @@ export function DisplayModeMenu() {
   };
 
   return (
-    <div ref={rootRef} className="relative"
+    <div
+      ref={rootRef}
+      className="relative"
       onKeyDown={(event) => {
         if (event.key === 'Escape' && open) {
           setOpen(false);
           buttonRef.current?.focus();
         }
-      }}>
-      <button ref={buttonRef} type="button" aria-expanded={open} aria-controls={panelId}
-        title={`Display mode: ${modes[mode].label}`} onClick={() => setOpen((was) => !was)}
-        className={buttonClass('secondary', 'px-2 sm:px-3')}>
+      }}
+    >
+      <button
+        ref={buttonRef}
+        type="button"
+        aria-expanded={open}
+        aria-controls={panelId}
+        title={`Display mode: ${modes[mode].label}`}
+        onClick={() => setOpen((was) => !was)}
+        className={buttonClass('secondary', 'px-2 sm:px-3')}
+      >
         <Current />
         <span className="sr-only sm:not-sr-only">Display mode</span>
       </button>
       {open && (
-        <div id={panelId} role="group" aria-label="Choose display mode"
-          className="fixed inset-x-2 top-16 z-30 flex flex-col gap-1 rounded-lg border-2 border-ink bg-surface p-2 sm:absolute sm:inset-x-auto sm:right-0 sm:top-full sm:mt-2 sm:w-72">
+        <div
+          id={panelId}
+          role="group"
+          aria-label="Choose display mode"
+          className="fixed inset-x-2 top-16 z-30 flex flex-col gap-1 rounded-lg border-2 border-ink bg-surface p-2 sm:absolute sm:inset-x-auto sm:right-0 sm:top-full sm:mt-2 sm:w-72"
+        >
           {DISPLAY_MODES.map((value) => {
             const { label, note, Icon } = modes[value];
             return (
-              <button key={value} type="button" aria-pressed={mode === value} onClick={() => choose(value)}
-                aria-label={label} aria-describedby={`${panelId}-${value}`}
-                className={cx('flex min-h-touch items-center gap-3 rounded-md border-2 px-3 py-2 text-left',
-                  mode === value ? 'border-ink bg-sunk font-bold' : 'border-transparent hover:border-line')}>
+              <button
+                key={value}
+                type="button"
+                aria-pressed={mode === value}
+                onClick={() => choose(value)}
+                aria-label={label}
+                aria-describedby={`${panelId}-${value}`}
+                className={cx(
+                  'flex min-h-touch items-center gap-3 rounded-md border-2 px-3 py-2 text-left',
+                  mode === value
+                    ? 'border-ink bg-sunk font-bold'
+                    : 'border-transparent hover:border-line',
+                )}
+              >
                 <Icon />
                 <span className="flex flex-col">
                   <span>{label}</span>
-                  <span id={`${panelId}-${value}`} className="text-sm font-normal text-muted">{note}</span>
+                  <span id={`${panelId}-${value}`} className="text-sm font-normal text-muted">
+                    {note}
+                  </span>
                 </span>
               </button>
             );

@@ -13,5 +13,15 @@ function describe(error: unknown): { title: string; detail: string } {
 /** The error element of every route: says what happened and always offers a way back. */
 export function RouteError() {
   const { title, detail } = describe(useRouteError());
-  return <ProblemPanel title={title} detail={detail} back={<Link to="/" className={buttonClass('secondary')}>Back to the start</Link>} />;
+  return (
+    <ProblemPanel
+      title={title}
+      detail={detail}
+      back={
+        <Link to="/" className={buttonClass('secondary')}>
+          Back to the start
+        </Link>
+      }
+    />
+  );
 }

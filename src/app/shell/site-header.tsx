@@ -31,7 +31,13 @@ export function SiteHeader({ user, home, nav, signOut }: SiteHeaderProps) {
   return (
     <header className="border-b-2 border-line bg-surface">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2 sm:flex-nowrap sm:px-5">
-        {home('flex min-h-touch items-center gap-2 text-xl font-bold no-underline', <><RingMark /><span>Ringseat</span></>)}
+        {home(
+          'flex min-h-touch items-center gap-2 text-xl font-bold no-underline',
+          <>
+            <RingMark />
+            <span>Ringseat</span>
+          </>,
+        )}
         <div className="order-last w-full min-w-0 leading-tight sm:order-none sm:w-auto sm:border-l-2 sm:border-line sm:pl-4">
           <p className="truncate font-semibold">{user.workshopName}</p>
           <p className="truncate text-sm text-muted">
@@ -43,7 +49,13 @@ export function SiteHeader({ user, home, nav, signOut }: SiteHeaderProps) {
           <SyncRunner />
           <SyncPill />
           <DisplayModeMenu />
-          <Button variant="secondary" className="px-3" pending={signOut.pending} title={signOut.error ?? undefined} onClick={signOut.onSignOut}>
+          <Button
+            variant="secondary"
+            className="px-3"
+            pending={signOut.pending}
+            title={signOut.error ?? undefined}
+            onClick={signOut.onSignOut}
+          >
             <ExitIcon />
             <span>Sign out</span>
           </Button>

@@ -24,7 +24,16 @@ interface ButtonProps extends ComponentProps<'button'> {
   pendingLabel?: string;
 }
 
-export function Button({ variant = 'primary', pending, pendingLabel, className, children, disabled, type = 'button', ...rest }: ButtonProps) {
+export function Button({
+  variant = 'primary',
+  pending,
+  pendingLabel,
+  className,
+  children,
+  disabled,
+  type = 'button',
+  ...rest
+}: ButtonProps) {
   return (
     <button
       type={type}

@@ -1,2 +1,3 @@
 /** Joins class names, skipping empty ones. */
-export const cx = (...names: Array<string | false | null | undefined>) => names.filter(Boolean).join(' ');
+export const cx = (...names: Array<string | false | null | undefined>) =>
+  names.filter(Boolean).join(' ');

@@ -45,7 +45,11 @@ export const controlClass =
   'min-h-touch w-full rounded-md border-2 border-line bg-surface px-3 text-ink ' +
   'aria-[invalid=true]:border-danger focus-visible:border-ink';
 
-type TextFieldProps = Omit<ComponentProps<'input'>, 'id'> & { label: string; hint?: ReactNode; error?: string };
+type TextFieldProps = Omit<ComponentProps<'input'>, 'id'> & {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+};
 
 export function TextField({ label, hint, error, className, ...input }: TextFieldProps) {
   return (
@@ -55,19 +59,42 @@ export function TextField({ label, hint, error, className, ...input }: TextField
   );
 }
 
-type SelectFieldProps = Omit<ComponentProps<'select'>, 'id'> & { label: string; hint?: ReactNode; error?: string };
+type SelectFieldProps = Omit<ComponentProps<'select'>, 'id'> & {
+  label: string;
+  hint?: ReactNode;
+  error?: string;
+};
 
-export function SelectField({ label, hint, error, className, children, ...select }: SelectFieldProps) {
+export function SelectField({
+  label,
+  hint,
+  error,
+  className,
+  children,
+  ...select
+}: SelectFieldProps) {
   return (
     <Field label={label} hint={hint} error={error}>
       {(control) => (
         // The native arrow is drawn grey in dark schemes; ours follows the display mode.
         <div className="relative">
-          <select {...control} {...select} className={cx(controlClass, 'appearance-none pr-10', className)}>
+          <select
+            {...control}
+            {...select}
+            className={cx(controlClass, 'appearance-none pr-10', className)}
+          >
             {children}
           </select>
-          <svg viewBox="0 0 24 24" aria-hidden="true" className="pointer-events-none absolute right-3 top-1/2 size-5 -translate-y-1/2"
-            fill="none" stroke="currentColor" strokeWidth="2.5" strokeLinecap="round" strokeLinejoin="round">
+          <svg
+            viewBox="0 0 24 24"
+            aria-hidden="true"
+            className="pointer-events-none absolute right-3 top-1/2 size-5 -translate-y-1/2"
+            fill="none"
+            stroke="currentColor"
+            strokeWidth="2.5"
+            strokeLinecap="round"
+            strokeLinejoin="round"
+          >
             <path d="M6 9l6 6 6-6" />
           </svg>
         </div>

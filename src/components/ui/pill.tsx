@@ -10,9 +10,23 @@ const tones: Record<Tone, string> = {
 };
 
 /** A short label for a state. Tone is a shape as well as a colour, so it also reads in glare. */
-export function Pill({ tone = 'outline', children, className }: { tone?: Tone; children: ReactNode; className?: string }) {
+export function Pill({
+  tone = 'outline',
+  children,
+  className,
+}: {
+  tone?: Tone;
+  children: ReactNode;
+  className?: string;
+}) {
   return (
-    <span className={cx('inline-flex items-center gap-1 rounded-full border-2 px-2.5 py-0.5 text-sm font-semibold', tones[tone], className)}>
+    <span
+      className={cx(
+        'inline-flex items-center gap-1 rounded-full border-2 px-2.5 py-0.5 text-sm font-semibold',
+        tones[tone],
+        className,
+      )}
+    >
       {children}
     </span>
   );

@@ -12,7 +12,15 @@ export function Loading({ label }: { label: string }) {
 }
 
 /** Inline error for a failed query, with a retry. */
-export function LoadError({ error, what, onRetry }: { error: unknown; what: string; onRetry?: () => void }): ReactNode {
+export function LoadError({
+  error,
+  what,
+  onRetry,
+}: {
+  error: unknown;
+  what: string;
+  onRetry?: () => void;
+}): ReactNode {
   return (
     <Alert title={`Could not load ${what}`}>
       <p>{errorMessage(error)}</p>

@@ -10,7 +10,13 @@ export function Table({ className, ...rest }: ComponentProps<'table'>) {
 }
 
 export function Th({ className, ...rest }: ComponentProps<'th'>) {
-  return <th scope="col" className={cx('border-b-2 border-line bg-sunk px-3 py-2 font-bold', className)} {...rest} />;
+  return (
+    <th
+      scope="col"
+      className={cx('border-b-2 border-line bg-sunk px-3 py-2 font-bold', className)}
+      {...rest}
+    />
+  );
 }
 
 export function Td({ className, ...rest }: ComponentProps<'td'>) {

@@ -8,7 +8,8 @@ import { api } from '../../lib/api-client';
 
 export const attachmentKeys = {
   all: ['attachments'] as const,
-  list: (recordType: AttachmentRecordType, recordId: string) => [...attachmentKeys.all, 'list', recordType, recordId] as const,
+  list: (recordType: AttachmentRecordType, recordId: string) =>
+    [...attachmentKeys.all, 'list', recordType, recordId] as const,
   upload: () => [...attachmentKeys.all, 'upload'] as const,
   remove: () => [...attachmentKeys.all, 'remove'] as const,
 };
@@ -18,12 +19,16 @@ export const attachmentQueries = {
     queryOptions({
       queryKey: attachmentKeys.list(recordType, recordId),
       queryFn: ({ signal }) =>
-        api.get<{ attachments: AttachmentView[] }>(`/api/attachments?recordType=${recordType}&recordId=${encodeURIComponent(recordId)}`, signal),
+        api.get<{ attachments: AttachmentView[] }>(
+          `/api/attachments?recordType=${recordType}&recordId=${encodeURIComponent(recordId)}`,
+          signal,
+        ),
       select: (data) => data.attachments,
     }),
 };
 
-export const useAttachments = (recordType: AttachmentRecordType, recordId: string) => useQuery(attachmentQueries.list(recordType, recordId));
+export const useAttachments = (recordType: AttachmentRecordType, recordId: string) =>
+  useQuery(attachmentQueries.list(recordType, recordId));
 
 /** Refused before sending: the server would refuse it too, after the wait of a large upload. */
 export class TooLargeError extends Error {}
@@ -34,7 +39,9 @@ export function useUploadAttachment(recordType: AttachmentRecordType, recordId: 
     mutationKey: attachmentKeys.upload(),
     mutationFn: async ({ file, caption }: { file: File; caption: string }) => {
       if (file.size > MAX_ATTACHMENT_BYTES) {
-        throw new TooLargeError(`${file.name} is larger than ${MAX_ATTACHMENT_BYTES / (1024 * 1024)} MB. Send a smaller photo or a shorter document.`);
+        throw new TooLargeError(
+          `${file.name} is larger than ${MAX_ATTACHMENT_BYTES / (1024 * 1024)} MB. Send a smaller photo or a shorter document.`,
+        );
       }
       const form = new FormData();
       // A client-made id makes a retried upload store the file once.
@@ -45,7 +52,8 @@ export function useUploadAttachment(recordType: AttachmentRecordType, recordId: 
       form.append('file', file, file.name);
       return api.postForm<{ attachment: AttachmentView }>('/api/attachments', form);
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.list(recordType, recordId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: attachmentKeys.list(recordType, recordId) }),
   });
 }
 
@@ -54,6 +62,7 @@ export function useRemoveAttachment(recordType: AttachmentRecordType, recordId: 
   return useMutation({
     mutationKey: attachmentKeys.remove(),
     mutationFn: (id: string) => api.delete<void>(`/api/attachments/${id}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: attachmentKeys.list(recordType, recordId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: attachmentKeys.list(recordType, recordId) }),
   });
 }

@@ -1,5 +1,16 @@
-import { queryOptions, useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { AcceptInviteInput, InvitePreview, SessionUser, SignInInput } from '../../../shared/auth/auth.schema';
+import {
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+  type QueryClient,
+} from '@tanstack/react-query';
+import type {
+  AcceptInviteInput,
+  InvitePreview,
+  SessionUser,
+  SignInInput,
+} from '../../../shared/auth/auth.schema';
 import { api } from '../../lib/api-client';
 import { fetchSessionUser, quietly, signOutOnServer } from './session-user';
 import { clearUserData, rememberUser } from '../../lib/db';
@@ -25,7 +36,8 @@ export const authQueries = {
   invite: (token: string) =>
     queryOptions({
       queryKey: authKeys.invite(token),
-      queryFn: ({ signal }) => api.get<InvitePreview>(`/api/invites/${encodeURIComponent(token)}`, signal),
+      queryFn: ({ signal }) =>
+        api.get<InvitePreview>(`/api/invites/${encodeURIComponent(token)}`, signal),
       retry: false,
       staleTime: 60_000,
     }),
@@ -55,7 +67,8 @@ export function useAcceptInvite() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey: authKeys.acceptInvite(),
-    mutationFn: (input: AcceptInviteInput) => api.post<{ user: SessionUser }>('/api/auth/accept-invite', input),
+    mutationFn: (input: AcceptInviteInput) =>
+      api.post<{ user: SessionUser }>('/api/auth/accept-invite', input),
     onSuccess: ({ user }) => replaceSession(queryClient, user),
   });
 }

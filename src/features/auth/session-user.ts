@@ -6,7 +6,8 @@ import { cachedUser, clearUserData, rememberUser } from '../../lib/db';
 // app (src/deck) calls them directly.
 
 /** The device database must never stand in the way of signing in: a failure there is only logged. */
-export const quietly = <T,>(work: Promise<T>) => work.catch((error: unknown) => console.warn('Ringseat: the device database failed.', error));
+export const quietly = <T>(work: Promise<T>) =>
+  work.catch((error: unknown) => console.warn('Ringseat: the device database failed.', error));
 
 /**
  * The signed-in user, or null when nobody is signed in (401 is an answer here, not an error).

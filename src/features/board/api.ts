@@ -14,7 +14,11 @@ export const boardQueries = {
     queryOptions({
       queryKey: boardKeys.list(query),
       queryFn: ({ signal }) => {
-        const params = new URLSearchParams({ show: query.show, q: query.q, limit: String(query.limit) });
+        const params = new URLSearchParams({
+          show: query.show,
+          q: query.q,
+          limit: String(query.limit),
+        });
         return api.get<BoardView>(`/api/board?${params}`, signal);
       },
       // A new choice or search keeps the rows on screen until the answer comes.
@@ -28,5 +32,8 @@ export const useBoard = (query: BoardQuery) => useQuery(boardQueries.list(query)
 /** For pages that change a run (a sign-off): the board shows the change on the way back. */
 export function useInvalidateBoard() {
   const queryClient = useQueryClient();
-  return useCallback(() => queryClient.invalidateQueries({ queryKey: boardKeys.all }), [queryClient]);
+  return useCallback(
+    () => queryClient.invalidateQueries({ queryKey: boardKeys.all }),
+    [queryClient],
+  );
 }

@@ -14,7 +14,8 @@ export const checklistQueries = {
   detail: (engineId: string) =>
     queryOptions({
       queryKey: checklistKeys.detail(engineId),
-      queryFn: ({ signal }) => api.get<{ checklist: ChecklistView }>(`/api/engines/${engineId}/checklist`, signal),
+      queryFn: ({ signal }) =>
+        api.get<{ checklist: ChecklistView }>(`/api/engines/${engineId}/checklist`, signal),
       select: (data) => data.checklist,
     }),
 };
@@ -33,7 +34,10 @@ function useChecklistWrite(engineId: string, action: 'save' | 'complete', onChan
     mutationFn: (input: ChecklistInput) =>
       action === 'save'
         ? api.put<{ checklist: ChecklistView }>(`/api/engines/${engineId}/checklist`, input)
-        : api.post<{ checklist: ChecklistView }>(`/api/engines/${engineId}/checklist/complete`, input),
+        : api.post<{ checklist: ChecklistView }>(
+            `/api/engines/${engineId}/checklist/complete`,
+            input,
+          ),
     onSuccess: (data) => {
       queryClient.setQueryData(checklistKeys.detail(engineId), data);
       onChanged?.();
@@ -41,5 +45,7 @@ function useChecklistWrite(engineId: string, action: 'save' | 'complete', onChan
   });
 }
 
-export const useSaveChecklist = (engineId: string, onChanged?: () => void) => useChecklistWrite(engineId, 'save', onChanged);
-export const useCompleteChecklist = (engineId: string, onChanged?: () => void) => useChecklistWrite(engineId, 'complete', onChanged);
+export const useSaveChecklist = (engineId: string, onChanged?: () => void) =>
+  useChecklistWrite(engineId, 'save', onChanged);
+export const useCompleteChecklist = (engineId: string, onChanged?: () => void) =>
+  useChecklistWrite(engineId, 'complete', onChanged);

@@ -19,9 +19,13 @@ export const toNumberOrNull = (value: unknown): number | null => {
 };
 
 /** A select's empty choice is "not chosen yet". */
-export const toChoiceOrNull = (value: unknown) => (value === '' || value === undefined ? null : value);
+export const toChoiceOrNull = (value: unknown) =>
+  value === '' || value === undefined ? null : value;
 
-const sectionOr = <T>(schema: { safeParse: (v: unknown) => { success: boolean; data?: T }; parse: (v: unknown) => T }, value: unknown): T => {
+const sectionOr = <T>(
+  schema: { safeParse: (v: unknown) => { success: boolean; data?: T }; parse: (v: unknown) => T },
+  value: unknown,
+): T => {
   const parsed = schema.safeParse(value);
   return parsed.success ? (parsed.data as T) : schema.parse({});
 };
@@ -31,7 +35,9 @@ const sectionOr = <T>(schema: { safeParse: (v: unknown) => { success: boolean; d
  * one field leaves the rest of the checklist judged (the slip itself shows at the field on save).
  */
 export function liveEntries(values: ChecklistFormInput): ChecklistInput {
-  const checks = Object.fromEntries(CHECK_ITEM_IDS.map((id) => [id, sectionOr(CheckEntrySchema, values.checks?.[id] ?? {})]));
+  const checks = Object.fromEntries(
+    CHECK_ITEM_IDS.map((id) => [id, sectionOr(CheckEntrySchema, values.checks?.[id] ?? {})]),
+  );
   return ChecklistInputSchema.parse({
     tachometer: sectionOr(TachometerEntrySchema, values.tachometer ?? {}),
     charging: sectionOr(ChargingEntrySchema, values.charging ?? {}),

@@ -4,7 +4,15 @@ import { db, type OutingRecord, type RunRecord } from '../../lib/db';
 import { useDeviceWrite } from '../../lib/use-device-write';
 import type { VesselSummary } from '../vessels/types';
 import {
-  activeOuting, advancePhase, changeOuting, logAlert, logReadings, startOuting, type PhotoInput, type ReadingEntry, type RunRef,
+  activeOuting,
+  advancePhase,
+  changeOuting,
+  logAlert,
+  logReadings,
+  startOuting,
+  type PhotoInput,
+  type ReadingEntry,
+  type RunRef,
 } from './deck-store';
 
 /*
@@ -22,14 +30,29 @@ export interface DeckVessel {
 }
 
 async function loadDeckVessels(): Promise<DeckVessel[]> {
-  const [vessels, runs, outings] = await Promise.all([db.vessels.toArray(), db.runs.toArray(), db.outings.toArray()]);
-  const byId = new Map<string, DeckVessel>(vessels.map((v) => [v.id, { id: v.id, name: v.name, vessel: v, runs: [], outing: null }]));
+  const [vessels, runs, outings] = await Promise.all([
+    db.vessels.toArray(),
+    db.runs.toArray(),
+    db.outings.toArray(),
+  ]);
+  const byId = new Map<string, DeckVessel>(
+    vessels.map((v) => [v.id, { id: v.id, name: v.name, vessel: v, runs: [], outing: null }]),
+  );
   for (const run of runs) {
     // A run can arrive before its vessel: it still shows, under the name it carries.
-    if (!byId.has(run.vessel.id)) byId.set(run.vessel.id, { id: run.vessel.id, name: run.vessel.name, vessel: null, runs: [], outing: null });
+    if (!byId.has(run.vessel.id))
+      byId.set(run.vessel.id, {
+        id: run.vessel.id,
+        name: run.vessel.name,
+        vessel: null,
+        runs: [],
+        outing: null,
+      });
     byId.get(run.vessel.id)!.runs.push(run);
   }
-  for (const outing of outings) if (outing.endedAt === null && byId.has(outing.vesselId)) byId.get(outing.vesselId)!.outing = outing;
+  for (const outing of outings)
+    if (outing.endedAt === null && byId.has(outing.vesselId))
+      byId.get(outing.vesselId)!.outing = outing;
   return [...byId.values()].sort((a, b) => a.name.localeCompare(b.name));
 }
 
@@ -42,32 +65,69 @@ export interface VesselDeck extends DeckVessel {
 }
 
 async function loadVesselDeck(vesselId: string): Promise<VesselDeck | null> {
-  const [vessel, runs, outing] = await Promise.all([db.vessels.get(vesselId), db.runs.where('vessel.id').equals(vesselId).toArray(), activeOuting(db, vesselId)]);
+  const [vessel, runs, outing] = await Promise.all([
+    db.vessels.get(vesselId),
+    db.runs.where('vessel.id').equals(vesselId).toArray(),
+    activeOuting(db, vesselId),
+  ]);
   if (!vessel && runs.length === 0) return null;
-  const records = await db.events.where('runId').anyOf(runs.map((r) => r.id)).toArray();
+  const records = await db.events
+    .where('runId')
+    .anyOf(runs.map((r) => r.id))
+    .toArray();
   const events: Record<string, RunEvent[]> = Object.fromEntries(runs.map((r) => [r.id, []]));
   for (const record of records) events[record.runId].push(record.event);
-  const order = (r: RunRecord) => (vessel?.engines.findIndex((e) => e.id === r.engine.id) ?? 0);
+  const order = (r: RunRecord) => vessel?.engines.findIndex((e) => e.id === r.engine.id) ?? 0;
   runs.sort((a, b) => order(a) - order(b));
-  return { id: vesselId, name: vessel?.name ?? runs[0].vessel.name, vessel: vessel ?? null, runs, outing, events };
+  return {
+    id: vesselId,
+    name: vessel?.name ?? runs[0].vessel.name,
+    vessel: vessel ?? null,
+    runs,
+    outing,
+    events,
+  };
 }
 
 /** One vessel's deck: its runs, their events and the outing under way; null when unknown here. */
-export const useVesselDeck = (vesselId: string) => useLiveQuery(() => loadVesselDeck(vesselId), [vesselId]);
+export const useVesselDeck = (vesselId: string) =>
+  useLiveQuery(() => loadVesselDeck(vesselId), [vesselId]);
 
 export const useStartOuting = () =>
-  useDeviceWrite(({ vesselId, runs }: { vesselId: string; runs: RunRef[] }) => startOuting(db, vesselId, runs, Date.now()));
+  useDeviceWrite(({ vesselId, runs }: { vesselId: string; runs: RunRef[] }) =>
+    startOuting(db, vesselId, runs, Date.now()),
+  );
 
 export const useChangeOuting = () =>
-  useDeviceWrite(({ outingId, runs, change }: { outingId: string; runs: RunRef[]; change: 'pause' | 'resume' | 'end' }) =>
-    changeOuting(db, outingId, runs, change, Date.now()));
+  useDeviceWrite(
+    ({
+      outingId,
+      runs,
+      change,
+    }: {
+      outingId: string;
+      runs: RunRef[];
+      change: 'pause' | 'resume' | 'end';
+    }) => changeOuting(db, outingId, runs, change, Date.now()),
+  );
 
 export const useLogReading = () =>
-  useDeviceWrite(({ entries, photo }: { entries: ReadingEntry[]; photo?: PhotoInput }) => logReadings(db, entries, Date.now(), photo));
+  useDeviceWrite(({ entries, photo }: { entries: ReadingEntry[]; photo?: PhotoInput }) =>
+    logReadings(db, entries, Date.now(), photo),
+  );
 
 export const useAdvancePhase = () =>
-  useDeviceWrite(({ run, phaseId }: { run: RunRef; phaseId: string }) => advancePhase(db, run, phaseId, Date.now()));
+  useDeviceWrite(({ run, phaseId }: { run: RunRef; phaseId: string }) =>
+    advancePhase(db, run, phaseId, Date.now()),
+  );
 
 export const useLogAlert = () =>
-  useDeviceWrite(({ run, alert }: { run: RunRef; alert: { code: string; message: string; phaseId?: string; sinceMs: number } }) =>
-    logAlert(db, run, alert, Date.now()));
+  useDeviceWrite(
+    ({
+      run,
+      alert,
+    }: {
+      run: RunRef;
+      alert: { code: string; message: string; phaseId?: string; sinceMs: number };
+    }) => logAlert(db, run, alert, Date.now()),
+  );

@@ -8,7 +8,8 @@ import { useSyncExternalStore, type MouseEvent } from 'react';
 
 const NAVIGATED = 'ringseat:navigated';
 
-export const isDeckPath = (pathname: string): boolean => pathname === '/deck' || pathname.startsWith('/deck/');
+export const isDeckPath = (pathname: string): boolean =>
+  pathname === '/deck' || pathname.startsWith('/deck/');
 
 function subscribe(onChange: () => void) {
   window.addEventListener('popstate', onChange);
@@ -20,7 +21,8 @@ function subscribe(onChange: () => void) {
 }
 
 /** The current path; the component renders again when it changes. */
-export const usePathname = (): string => useSyncExternalStore(subscribe, () => window.location.pathname);
+export const usePathname = (): string =>
+  useSyncExternalStore(subscribe, () => window.location.pathname);
 
 /** Goes to `to`: within the deck without reloading, anywhere else as a full page load. */
 export function goTo(to: string, options: { replace?: boolean } = {}): void {
@@ -38,7 +40,15 @@ export function goTo(to: string, options: { replace?: boolean } = {}): void {
 
 /** Click handler for a deck link: plain clicks stay in the page, new-tab and modified clicks do not. */
 export function followDeckLink(event: MouseEvent<HTMLAnchorElement>, to: string): void {
-  if (event.defaultPrevented || event.button !== 0 || event.metaKey || event.ctrlKey || event.shiftKey || event.altKey) return;
+  if (
+    event.defaultPrevented ||
+    event.button !== 0 ||
+    event.metaKey ||
+    event.ctrlKey ||
+    event.shiftKey ||
+    event.altKey
+  )
+    return;
   if (event.currentTarget.target && event.currentTarget.target !== '_self') return;
   event.preventDefault();
   goTo(to);

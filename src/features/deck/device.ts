@@ -42,7 +42,8 @@ export function useWakeLock(active: boolean): WakeLockStatus {
         if (!cancelled) setStatus('refused');
       }
     };
-    const onVisible = () => void (document.visibilityState === 'visible' && sentinel?.released !== false && acquire());
+    const onVisible = () =>
+      void (document.visibilityState === 'visible' && sentinel?.released !== false && acquire());
     void acquire();
     document.addEventListener('visibilitychange', onVisible);
     return () => {
@@ -57,7 +58,8 @@ export function useWakeLock(active: boolean): WakeLockStatus {
 
 /** A buzz where the device can (most phones; not iPhones). */
 export function buzz(pattern: number | number[]): void {
-  if (typeof navigator !== 'undefined' && typeof navigator.vibrate === 'function') navigator.vibrate(pattern);
+  if (typeof navigator !== 'undefined' && typeof navigator.vibrate === 'function')
+    navigator.vibrate(pattern);
 }
 
 export type GpsStatus = 'off' | 'waiting' | 'ok' | 'denied' | 'unsupported';
@@ -74,17 +76,32 @@ const KNOTS_PER_M_PER_S = 3600 / 1852; // a knot is 1852 m per hour
 /** Speed over ground from the device's position while `enabled` (the browser asks the skipper first). */
 export function useGpsSpeed(enabled: boolean): GpsFix {
   const supported = typeof navigator !== 'undefined' && 'geolocation' in navigator;
-  const [fix, setFix] = useState<GpsFix>({ status: 'waiting', speedKn: null, lat: null, lon: null });
+  const [fix, setFix] = useState<GpsFix>({
+    status: 'waiting',
+    speedKn: null,
+    lat: null,
+    lon: null,
+  });
   useEffect(() => {
     if (!enabled || !supported) return;
     const watch = navigator.geolocation.watchPosition(
-      ({ coords }) => setFix({
-        status: 'ok',
-        speedKn: coords.speed === null || Number.isNaN(coords.speed) ? null : Math.round(coords.speed * KNOTS_PER_M_PER_S * 10) / 10,
-        lat: coords.latitude,
-        lon: coords.longitude,
-      }),
-      (error) => setFix({ status: error.code === error.PERMISSION_DENIED ? 'denied' : 'waiting', speedKn: null, lat: null, lon: null }),
+      ({ coords }) =>
+        setFix({
+          status: 'ok',
+          speedKn:
+            coords.speed === null || Number.isNaN(coords.speed)
+              ? null
+              : Math.round(coords.speed * KNOTS_PER_M_PER_S * 10) / 10,
+          lat: coords.latitude,
+          lon: coords.longitude,
+        }),
+      (error) =>
+        setFix({
+          status: error.code === error.PERMISSION_DENIED ? 'denied' : 'waiting',
+          speedKn: null,
+          lat: null,
+          lon: null,
+        }),
       { enableHighAccuracy: true, maximumAge: 5000 },
     );
     return () => navigator.geolocation.clearWatch(watch);

@@ -11,13 +11,30 @@ let n = 0;
 const id = () => `00000000-0000-4000-8000-${(++n).toString(16).padStart(12, '0')}`;
 const at = (minutes: number) => T0 + minutes * MIN;
 const start = (m: number): RunEvent => ({ kind: 'session-start', id: id(), at: at(m), engineId });
-const advance = (m: number, phaseId: string): RunEvent => ({ kind: 'phase-advance', id: id(), at: at(m), engineId, phaseId });
-const reading = (m: number, phaseId: string, rpm: number, throttle: 'idle' | 'half' | 'full' | 'three-quarter'): RunEvent => ({
-  kind: 'reading', id: id(), at: at(m), engineId, phaseId, rpm, throttle,
+const advance = (m: number, phaseId: string): RunEvent => ({
+  kind: 'phase-advance',
+  id: id(),
+  at: at(m),
+  engineId,
+  phaseId,
+});
+const reading = (
+  m: number,
+  phaseId: string,
+  rpm: number,
+  throttle: 'idle' | 'half' | 'full' | 'three-quarter',
+): RunEvent => ({
+  kind: 'reading',
+  id: id(),
+  at: at(m),
+  engineId,
+  phaseId,
+  rpm,
+  throttle,
 });
 
 describe('one engine on deck', () => {
-  it('before anything: on the workshop\'s dock run, which a skipper waits for', () => {
+  it("before anything: on the workshop's dock run, which a skipper waits for", () => {
     const snap = engineSnapshot(run, [], T0, 'skipper');
     expect(snap.phase?.id).toBe('dock-run');
     expect(snap.waitingForWorkshop).toBe(true);
@@ -44,7 +61,12 @@ describe('one engine on deck', () => {
   });
 
   it('over the band: a reminder during the one-minute grace (our own allowance), then an alert', () => {
-    const events = [start(0), advance(0, 'below-half'), reading(0, 'below-half', 2400, 'half'), reading(2, 'below-half', 3500, 'half')];
+    const events = [
+      start(0),
+      advance(0, 'below-half'),
+      reading(0, 'below-half', 2400, 'half'),
+      reading(2, 'below-half', 3500, 'half'),
+    ];
     const early = engineSnapshot(run, events, at(2.5), 'skipper');
     expect(early.live.state).toBe('over');
     expect(early.alerts).toEqual([]);
@@ -53,23 +75,48 @@ describe('one engine on deck', () => {
     expect(late.alerts.map((a) => a.code)).toEqual(['over-band']);
     expect(late.alerts[0].sinceMs).toBe(at(2));
     expect(alertsToLog(late)).toHaveLength(1);
-    const logged: RunEvent = { kind: 'alert', id: id(), at: at(3.5), engineId, code: 'over-band', message: 'x', phaseId: 'below-half' };
+    const logged: RunEvent = {
+      kind: 'alert',
+      id: id(),
+      at: at(3.5),
+      engineId,
+      code: 'over-band',
+      message: 'x',
+      phaseId: 'below-half',
+    };
     expect(alertsToLog(engineSnapshot(run, [...events, logged], at(4), 'skipper'))).toEqual([]);
   });
 
-  it('reminds to vary speed before the 15-minute rule (program\'s reading of common practice) is broken', () => {
-    const events = [start(0), advance(0, 'below-half'), reading(0, 'below-half', 2400, 'half'), reading(5, 'below-half', 2450, 'half'), reading(10, 'below-half', 2400, 'half')];
+  it("reminds to vary speed before the 15-minute rule (program's reading of common practice) is broken", () => {
+    const events = [
+      start(0),
+      advance(0, 'below-half'),
+      reading(0, 'below-half', 2400, 'half'),
+      reading(5, 'below-half', 2450, 'half'),
+      reading(10, 'below-half', 2400, 'half'),
+    ];
     expect(engineSnapshot(run, events, at(11), 'skipper').reminders).toEqual([]);
     const soon = engineSnapshot(run, events, at(13), 'skipper');
-    expect(soon.reminders).toEqual([expect.objectContaining({ code: 'change-speed-soon', leftMs: 2 * MIN })]);
+    expect(soon.reminders).toEqual([
+      expect.objectContaining({ code: 'change-speed-soon', leftMs: 2 * MIN }),
+    ]);
     const changed = [...events, reading(13, 'below-half', 2800, 'half')];
     expect(engineSnapshot(run, changed, at(14), 'skipper').reminders).toEqual([]);
   });
 
   it('full throttle in a phase that allows short bursts: counts down, then alerts past 60 s', () => {
-    const events = [start(0), advance(0, 'below-three-quarter'), reading(0, 'below-three-quarter', 4000, 'three-quarter'), reading(1, 'below-three-quarter', 5800, 'full')];
+    const events = [
+      start(0),
+      advance(0, 'below-three-quarter'),
+      reading(0, 'below-three-quarter', 4000, 'three-quarter'),
+      reading(1, 'below-three-quarter', 5800, 'full'),
+    ];
     const during = engineSnapshot(run, events, at(1) + 30_000, 'skipper');
-    expect(during.reminders).toEqual([expect.objectContaining({ code: 'full-throttle-limit', leftMs: 30_000 })]);
-    expect(engineSnapshot(run, events, at(2) + 5_000, 'skipper').alerts.map((a) => a.code)).toContain('full-throttle-too-long');
+    expect(during.reminders).toEqual([
+      expect.objectContaining({ code: 'full-throttle-limit', leftMs: 30_000 }),
+    ]);
+    expect(
+      engineSnapshot(run, events, at(2) + 5_000, 'skipper').alerts.map((a) => a.code),
+    ).toContain('full-throttle-too-long');
   });
 });

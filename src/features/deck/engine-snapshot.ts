@@ -48,11 +48,17 @@ function phaseRows(phases: ResolvedPhase[], progress: number[], currentIndex: nu
 }
 
 function lastOf<K extends RunEvent['kind']>(ordered: readonly RunEvent[], kind: K) {
-  for (let i = ordered.length - 1; i >= 0; i--) if (ordered[i].kind === kind) return ordered[i] as Extract<RunEvent, { kind: K }>;
+  for (let i = ordered.length - 1; i >= 0; i--)
+    if (ordered[i].kind === kind) return ordered[i] as Extract<RunEvent, { kind: K }>;
   return null;
 }
 
-export function engineSnapshot(run: RunRecord, events: readonly RunEvent[], nowMs: number, role: Role): EngineSnapshot {
+export function engineSnapshot(
+  run: RunRecord,
+  events: readonly RunEvent[],
+  nowMs: number,
+  role: Role,
+): EngineSnapshot {
   const engineId = run.engine.id;
   const phases = runPhases(run);
   const ordered = orderEvents(events, engineId);
@@ -70,7 +76,11 @@ export function engineSnapshot(run: RunRecord, events: readonly RunEvent[], nowM
     nextPhase: index >= 0 && index + 1 < phases.length ? phases[index + 1] : null,
     phaseComplete,
     waitingForWorkshop: phase?.performedBy === 'workshop' && role === 'skipper' && !phaseComplete,
-    rows: phaseRows(phases, account.phases.map((p) => p.progressShare), index),
+    rows: phaseRows(
+      phases,
+      account.phases.map((p) => p.progressShare),
+      index,
+    ),
     alerts: index >= 0 ? activeAlerts(account.phases[index].reasons, live.nowMs) : [],
     reminders: upcomingReminders(ordered, phase, live.nowMs),
     lastReading: lastOf(ordered, 'reading'),
@@ -80,4 +90,9 @@ export function engineSnapshot(run: RunRecord, events: readonly RunEvent[], nowM
 
 /** Alerts not yet in the log: one alert event per broken-rule stretch. */
 export const alertsToLog = (snapshot: EngineSnapshot): DeckAlert[] =>
-  snapshot.alerts.filter((alert) => !snapshot.loggedAlerts.some((logged) => logged.code === alert.code && logged.at >= alert.sinceMs));
+  snapshot.alerts.filter(
+    (alert) =>
+      !snapshot.loggedAlerts.some(
+        (logged) => logged.code === alert.code && logged.at >= alert.sinceMs,
+      ),
+  );

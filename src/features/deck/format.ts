@@ -57,6 +57,7 @@ const CEILING_WORDS: Record<ThrottleCeiling, string> = {
 
 export const ceilingText = (ceiling: ThrottleCeiling) => CEILING_WORDS[ceiling];
 
-export const rpmRangeText = (band: { rpmMin: number; rpmMax: number }) => `${Math.round(band.rpmMin)}–${Math.round(band.rpmMax)} rpm`;
+export const rpmRangeText = (band: { rpmMin: number; rpmMax: number }) =>
+  `${Math.round(band.rpmMin)}–${Math.round(band.rpmMax)} rpm`;
 
 export const capitalise = (text: string) => (text ? text[0].toUpperCase() + text.slice(1) : text);

@@ -9,6 +9,8 @@ describe('photos made smaller on the device', () => {
   });
 
   it('refuses a file that is not an image', async () => {
-    await expect(preparePhoto(new File(['%PDF'], 'schedule.pdf', { type: 'application/pdf' }))).rejects.toBeInstanceOf(PhotoError);
+    await expect(
+      preparePhoto(new File(['%PDF'], 'schedule.pdf', { type: 'application/pdf' })),
+    ).rejects.toBeInstanceOf(PhotoError);
   });
 });

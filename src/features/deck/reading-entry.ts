@@ -32,17 +32,25 @@ export type PadResult =
 function engineRpm(engine: PadEngine, input: PadInput, prefix: string) {
   if (input.mode === 'rpm') {
     const parsed = parseRpm(input.text);
-    return parsed.ok ? { ok: true as const, rpm: parsed.value } : { ...parsed, message: prefix + parsed.message };
+    return parsed.ok
+      ? { ok: true as const, rpm: parsed.value }
+      : { ...parsed, message: prefix + parsed.message };
   }
   const parsed = parseFrequency(input.text, engine.signal);
-  return parsed.ok ? { ok: true as const, rpm: parsed.value.rpm, hz: parsed.value.hz } : { ...parsed, message: prefix + parsed.message };
+  return parsed.ok
+    ? { ok: true as const, rpm: parsed.value.rpm, hz: parsed.value.hz }
+    : { ...parsed, message: prefix + parsed.message };
 }
 
 function extras(input: PadInput) {
   const { details, gps } = input;
   const speed =
     gps && gps.speedKn !== null
-      ? { speedKn: gps.speedKn, speedSource: 'gps' as const, ...(gps.lat !== null && gps.lon !== null ? { lat: gps.lat, lon: gps.lon } : {}) }
+      ? {
+          speedKn: gps.speedKn,
+          speedSource: 'gps' as const,
+          ...(gps.lat !== null && gps.lon !== null ? { lat: gps.lat, lon: gps.lon } : {}),
+        }
       : details?.speedKn !== undefined && details !== null
         ? { speedKn: details.speedKn, speedSource: 'typed' as const }
         : {};
@@ -56,17 +64,40 @@ function extras(input: PadInput) {
 
 /** One reading per chosen engine, or the first problem in words that name the field. */
 export function buildEntries(engines: PadEngine[], input: PadInput): PadResult {
-  if (engines.length === 0) return { kind: 'invalid', field: 'engines', message: 'Choose the engine the reading is for.' };
-  if (input.throttle === null) return { kind: 'invalid', field: 'throttle', message: 'Choose the throttle position (throttle).' };
+  if (engines.length === 0)
+    return { kind: 'invalid', field: 'engines', message: 'Choose the engine the reading is for.' };
+  if (input.throttle === null)
+    return {
+      kind: 'invalid',
+      field: 'throttle',
+      message: 'Choose the throttle position (throttle).',
+    };
   const entries: ReadingEntry[] = [];
   const far: string[] = [];
   for (const engine of engines) {
     const speed = engineRpm(engine, input, engines.length > 1 ? `${engine.label}: ` : '');
     if (!speed.ok) return { kind: 'invalid', field: speed.field, message: speed.message };
-    if (isFarAboveRated(speed.rpm, engine.ratedRpmMax)) far.push(`${speed.rpm} rpm is far above the rated top of ${engine.ratedRpmMax} rpm for ${engine.label}`);
-    const source = 'hz' in speed ? { rpmSource: 'frequency' as const, frequencyHz: speed.hz } : { rpmSource: 'tachometer' as const };
-    entries.push({ runId: engine.runId, engineId: engine.engineId, reading: { phaseId: engine.phaseId, rpm: speed.rpm, throttle: input.throttle, ...source, ...extras(input) } });
+    if (isFarAboveRated(speed.rpm, engine.ratedRpmMax))
+      far.push(
+        `${speed.rpm} rpm is far above the rated top of ${engine.ratedRpmMax} rpm for ${engine.label}`,
+      );
+    const source =
+      'hz' in speed
+        ? { rpmSource: 'frequency' as const, frequencyHz: speed.hz }
+        : { rpmSource: 'tachometer' as const };
+    entries.push({
+      runId: engine.runId,
+      engineId: engine.engineId,
+      reading: {
+        phaseId: engine.phaseId,
+        rpm: speed.rpm,
+        throttle: input.throttle,
+        ...source,
+        ...extras(input),
+      },
+    });
   }
-  if (far.length > 0 && !input.confirmed) return { kind: 'confirm', message: `${far.join('; ')}. Is that right?` };
+  if (far.length > 0 && !input.confirmed)
+    return { kind: 'confirm', message: `${far.join('; ')}. Is that right?` };
   return { kind: 'ready', entries, rpms: entries.map((e) => e.reading.rpm) };
 }

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { isFarAboveRated, parseFrequency, parseRpm, pressKey, signalSourceOf, stepRpm } from './reading-input';
+import {
+  isFarAboveRated,
+  parseFrequency,
+  parseRpm,
+  pressKey,
+  signalSourceOf,
+  stepRpm,
+} from './reading-input';
 
 describe('RPM typed on the keypad', () => {
   it('takes whole numbers and rounds decimals', () => {
@@ -8,9 +15,21 @@ describe('RPM typed on the keypad', () => {
   });
 
   it('names the field when the entry is empty, not a number or negative', () => {
-    expect(parseRpm('')).toMatchObject({ ok: false, field: 'rpm', message: 'Enter the engine speed (RPM).' });
-    expect(parseRpm('24OO')).toMatchObject({ ok: false, field: 'rpm', message: 'Enter the engine speed (RPM) as a number, like 2400.' });
-    expect(parseRpm('-300')).toMatchObject({ ok: false, field: 'rpm', message: 'The engine speed (RPM) cannot be negative.' });
+    expect(parseRpm('')).toMatchObject({
+      ok: false,
+      field: 'rpm',
+      message: 'Enter the engine speed (RPM).',
+    });
+    expect(parseRpm('24OO')).toMatchObject({
+      ok: false,
+      field: 'rpm',
+      message: 'Enter the engine speed (RPM) as a number, like 2400.',
+    });
+    expect(parseRpm('-300')).toMatchObject({
+      ok: false,
+      field: 'rpm',
+      message: 'The engine speed (RPM) cannot be negative.',
+    });
     expect(parseRpm('25000')).toMatchObject({ ok: false, field: 'rpm' });
   });
 
@@ -45,10 +64,21 @@ describe('RPM from a measured frequency', () => {
   });
 
   it('refuses zero, text, and engines without poles, naming the field', () => {
-    expect(parseFrequency('0', coil)).toMatchObject({ ok: false, field: 'frequencyHz', message: 'The measured frequency (Hz) must be more than zero.' });
+    expect(parseFrequency('0', coil)).toMatchObject({
+      ok: false,
+      field: 'frequencyHz',
+      message: 'The measured frequency (Hz) must be more than zero.',
+    });
     expect(parseFrequency('abc', coil)).toMatchObject({ ok: false, field: 'frequencyHz' });
-    expect(parseFrequency('', coil)).toMatchObject({ ok: false, message: 'Enter the measured frequency (Hz).' });
-    expect(parseFrequency('120', signalSourceOf({ tachSource: 'none', poles: null }))).toMatchObject({ ok: false, field: 'frequencyHz' });
-    expect(signalSourceOf({ tachSource: 'belt-alternator', poles: 12, pulleyRatio: null })).toBeNull();
+    expect(parseFrequency('', coil)).toMatchObject({
+      ok: false,
+      message: 'Enter the measured frequency (Hz).',
+    });
+    expect(
+      parseFrequency('120', signalSourceOf({ tachSource: 'none', poles: null })),
+    ).toMatchObject({ ok: false, field: 'frequencyHz' });
+    expect(
+      signalSourceOf({ tachSource: 'belt-alternator', poles: 12, pulleyRatio: null }),
+    ).toBeNull();
   });
 });

@@ -6,8 +6,12 @@ import type { RunRecord } from '../../lib/db';
  * fresh resolution, so the deck shows exactly what the workshop assigned.
  */
 export function runPhases(run: Pick<RunRecord, 'program' | 'bands' | 'engine'>): ResolvedPhase[] {
-  return resolveProgramPhases(run.program, run.engine).map((phase) => ({ ...phase, band: run.bands[phase.id] ?? phase.band }));
+  return resolveProgramPhases(run.program, run.engine).map((phase) => ({
+    ...phase,
+    band: run.bands[phase.id] ?? phase.band,
+  }));
 }
 
 /** Runs that can still be logged on deck: not yet submitted or signed off. */
-export const isLoggable = (run: Pick<RunRecord, 'state'>) => run.state === 'planned' || run.state === 'under-way' || run.state === 'returned';
+export const isLoggable = (run: Pick<RunRecord, 'state'>) =>
+  run.state === 'planned' || run.state === 'under-way' || run.state === 'returned';

@@ -15,15 +15,27 @@ export const VESSEL_ID = '11111111-1111-4111-8111-111111111111';
 
 const program = BUILT_IN_PROGRAMS['four-stroke-outboard'];
 const rating = { ratedRpmMin: 5000, ratedRpmMax: 6000 };
-const bands: Record<string, RpmBand> = Object.fromEntries(program.phases.map((p) => [p.id, resolvePhaseBand(p, rating)]));
+const bands: Record<string, RpmBand> = Object.fromEntries(
+  program.phases.map((p) => [p.id, resolvePhaseBand(p, rating)]),
+);
 
-export function testRun(position: 'port' | 'starboard', overrides: Partial<RunRecord> = {}): RunRecord {
+export function testRun(
+  position: 'port' | 'starboard',
+  overrides: Partial<RunRecord> = {},
+): RunRecord {
   const n = position === 'port' ? '1' : '2';
   return {
     id: `2222222${n}-2222-4222-8222-22222222222${n}`,
     state: 'under-way',
     vessel: { id: VESSEL_ID, name: 'Test Tern' },
-    engine: { id: `3333333${n}-3333-4333-8333-33333333333${n}`, position, maker: 'Demo', model: 'D-150', serialNumber: `D150-${n}`, ...rating },
+    engine: {
+      id: `3333333${n}-3333-4333-8333-33333333333${n}`,
+      position,
+      maker: 'Demo',
+      model: 'D-150',
+      serialNumber: `D150-${n}`,
+      ...rating,
+    },
     programId: '44444444-4444-4444-8444-444444444444',
     programName: program.name,
     phaseCount: program.phases.length,

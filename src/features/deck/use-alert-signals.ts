@@ -29,7 +29,12 @@ export function useAlertSignals(snapshots: EngineSnapshot[], active: boolean): v
         buzz(ALERT_BUZZ);
         mutate({
           run: { runId: snapshot.run.id, engineId: snapshot.engineId },
-          alert: { code: alert.code, message: alert.message, phaseId: snapshot.phase?.id, sinceMs: alert.sinceMs },
+          alert: {
+            code: alert.code,
+            message: alert.message,
+            phaseId: snapshot.phase?.id,
+            sinceMs: alert.sinceMs,
+          },
         });
       }
     }

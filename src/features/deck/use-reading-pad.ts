@@ -17,7 +17,9 @@ type Problem = { field: string; message: string } | null;
 
 /** The pad's state: what is typed, for which engine, and logging it all or nothing. */
 export function useReadingPad({ engines, lastRpm, lastThrottle, onLog }: PadSeed) {
-  const [target, setTargetState] = useState<string>(engines.length > 1 ? 'both' : engines[0].engineId);
+  const [target, setTargetState] = useState<string>(
+    engines.length > 1 ? 'both' : engines[0].engineId,
+  );
   const [mode, setModeState] = useState<'rpm' | 'hz'>('rpm');
   const [text, setText] = useState(lastRpm === null ? '' : String(lastRpm));
   const [throttle, setThrottleState] = useState<ThrottlePosition | null>(lastThrottle);
@@ -42,29 +44,70 @@ export function useReadingPad({ engines, lastRpm, lastThrottle, onLog }: PadSeed
   };
 
   const log = async (confirmed: boolean) => {
-    const result = buildEntries(chosen, { mode, text, throttle, details: details?.values ?? null, gps: gpsOn ? gps : null, confirmed });
-    if (result.kind === 'invalid') return setProblem({ field: result.field, message: result.message });
+    const result = buildEntries(chosen, {
+      mode,
+      text,
+      throttle,
+      details: details?.values ?? null,
+      gps: gpsOn ? gps : null,
+      confirmed,
+    });
+    if (result.kind === 'invalid')
+      return setProblem({ field: result.field, message: result.message });
     if (result.kind === 'confirm') return setConfirm(result.message);
     setSaving(true);
     try {
       await onLog(result.entries, details?.photo ?? undefined);
-      setLogged(`Logged ${result.rpms.join(' and ')} rpm at ${THROTTLE_WORDS[throttle!]} for ${chosen.map((e) => e.label).join(' and ')}.`);
+      setLogged(
+        `Logged ${result.rpms.join(' and ')} rpm at ${THROTTLE_WORDS[throttle!]} for ${chosen.map((e) => e.label).join(' and ')}.`,
+      );
       setDetails(null);
       setConfirm(null);
       if (mode === 'rpm') setKeypadOpen(false);
     } catch (error) {
-      setProblem({ field: (error as { field?: string }).field ?? 'reading', message: error instanceof Error ? error.message : 'The reading was not saved.' });
+      setProblem({
+        field: (error as { field?: string }).field ?? 'reading',
+        message: error instanceof Error ? error.message : 'The reading was not saved.',
+      });
     } finally {
       setSaving(false);
     }
   };
 
   return {
-    engines, chosen, target, mode, text, throttle, keypadOpen, details, gpsOn, gps, problem, confirm, saving, logged,
-    edit, log, setKeypadOpen, setDetails, setGpsOn, dismissConfirm: () => setConfirm(null),
-    setTarget: (next: string) => { setTargetState(next); settle(); },
-    setMode: (next: 'rpm' | 'hz') => { setModeState(next); edit(''); setKeypadOpen(true); },
-    setThrottle: (next: ThrottlePosition) => { setThrottleState(next); settle(); },
+    engines,
+    chosen,
+    target,
+    mode,
+    text,
+    throttle,
+    keypadOpen,
+    details,
+    gpsOn,
+    gps,
+    problem,
+    confirm,
+    saving,
+    logged,
+    edit,
+    log,
+    setKeypadOpen,
+    setDetails,
+    setGpsOn,
+    dismissConfirm: () => setConfirm(null),
+    setTarget: (next: string) => {
+      setTargetState(next);
+      settle();
+    },
+    setMode: (next: 'rpm' | 'hz') => {
+      setModeState(next);
+      edit('');
+      setKeypadOpen(true);
+    },
+    setThrottle: (next: ThrottlePosition) => {
+      setThrottleState(next);
+      settle();
+    },
   };
 }
 

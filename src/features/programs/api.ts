@@ -52,7 +52,10 @@ export const usePrograms = () => useQuery(programQueries.list());
 export const useProgram = (id: string) => useQuery(programQueries.detail(id));
 
 /** Every write answers with the program as stored: it replaces the cached one and the list refreshes. */
-function useProgramWrite<TInput>(mutationKey: readonly unknown[], mutationFn: (input: TInput) => Promise<{ program: ProgramDetail }>) {
+function useProgramWrite<TInput>(
+  mutationKey: readonly unknown[],
+  mutationFn: (input: TInput) => Promise<{ program: ProgramDetail }>,
+) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey,
@@ -65,16 +68,24 @@ function useProgramWrite<TInput>(mutationKey: readonly unknown[], mutationFn: (i
 }
 
 export const useCopyProgram = () =>
-  useProgramWrite(programKeys.copy(), (id: string) => api.post<{ program: ProgramDetail }>(`${path(id)}/copy`));
+  useProgramWrite(programKeys.copy(), (id: string) =>
+    api.post<{ program: ProgramDetail }>(`${path(id)}/copy`),
+  );
 
 export const useSaveProgram = (id: string) =>
-  useProgramWrite(programKeys.save(), (definition: Program) => api.put<{ program: ProgramDetail }>(path(id), definition));
+  useProgramWrite(programKeys.save(), (definition: Program) =>
+    api.put<{ program: ProgramDetail }>(path(id), definition),
+  );
 
 export const useRetireProgram = () =>
-  useProgramWrite(programKeys.retire(), (id: string) => api.post<{ program: ProgramDetail }>(`${path(id)}/retire`));
+  useProgramWrite(programKeys.retire(), (id: string) =>
+    api.post<{ program: ProgramDetail }>(`${path(id)}/retire`),
+  );
 
 export const useReinstateProgram = () =>
-  useProgramWrite(programKeys.retire(), (id: string) => api.post<{ program: ProgramDetail }>(`${path(id)}/reinstate`));
+  useProgramWrite(programKeys.retire(), (id: string) =>
+    api.post<{ program: ProgramDetail }>(`${path(id)}/reinstate`),
+  );
 
 export interface AssignedRun {
   id: string;
@@ -101,6 +112,9 @@ export const engineKindLabel: Record<EngineKind, string> = {
 export const formatHours = (minutes: number) => `${Number((minutes / 60).toFixed(1))} h`;
 
 export function formatInterval({ hours, months }: ServiceInterval): string {
-  const parts = [hours !== undefined ? `${hours} h` : null, months !== undefined ? `${months} ${months === 1 ? 'month' : 'months'}` : null];
+  const parts = [
+    hours !== undefined ? `${hours} h` : null,
+    months !== undefined ? `${months} ${months === 1 ? 'month' : 'months'}` : null,
+  ];
   return parts.filter(Boolean).join(' or ');
 }

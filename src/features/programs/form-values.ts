@@ -24,19 +24,35 @@ export const newPhase = (): Phase => ({
 });
 
 const PHASE_FIELDS = [
-  'id', 'name', 'performedBy', 'requiredMinutes', 'throttleCeiling', 'instructions', 'band', 'band.kind',
-  'band.rpmMin', 'band.rpmMax', 'band.shareMin', 'band.shareMax', 'rules.changeSpeedEveryMinutes',
-  'rules.fullThrottleMaxSeconds', 'rules.fullThrottleMaxMinutesPerHour', 'rules.idleMaxMinutes',
+  'id',
+  'name',
+  'performedBy',
+  'requiredMinutes',
+  'throttleCeiling',
+  'instructions',
+  'band',
+  'band.kind',
+  'band.rpmMin',
+  'band.rpmMax',
+  'band.shareMin',
+  'band.shareMax',
+  'rules.changeSpeedEveryMinutes',
+  'rules.fullThrottleMaxSeconds',
+  'rules.fullThrottleMaxMinutesPerHour',
+  'rules.idleMaxMinutes',
 ] as const;
 
 /** Every field name the server may name in its errors, so each message lands beside its field. */
 export function formFieldPaths(phaseCount: number): string[] {
   const top = ['name', 'notes', 'firstService.hours', 'firstService.months'];
-  const phases = Array.from({ length: phaseCount }, (_, index) => PHASE_FIELDS.map((field) => `phases.${index}.${field}`));
+  const phases = Array.from({ length: phaseCount }, (_, index) =>
+    PHASE_FIELDS.map((field) => `phases.${index}.${field}`),
+  );
   return [...top, ...phases.flat()];
 }
 
 export type ProgramFormValues = ProgramInput;
 
 /** The message of the error at a dotted field name; phase fields sit inside a list and a union, so plain paths are simplest. */
-export const errorAt = (errors: FieldErrors, name: string): string | undefined => (get(errors, name) as { message?: string } | undefined)?.message;
+export const errorAt = (errors: FieldErrors, name: string): string | undefined =>
+  (get(errors, name) as { message?: string } | undefined)?.message;

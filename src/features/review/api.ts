@@ -1,4 +1,10 @@
-import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from '@tanstack/react-query';
 import type { SignOffInput } from '../../../shared/review/review.schema';
 import type { DecisionView, ReadingsPage, RunReviewView } from '../../../shared/review/views';
 import { api } from '../../lib/api-client';
@@ -6,7 +12,8 @@ import { api } from '../../lib/api-client';
 export const reviewKeys = {
   all: ['review'] as const,
   detail: (runId: string) => [...reviewKeys.all, 'detail', runId] as const,
-  readings: (runId: string, offset: number, limit: number) => [...reviewKeys.all, 'readings', runId, offset, limit] as const,
+  readings: (runId: string, offset: number, limit: number) =>
+    [...reviewKeys.all, 'readings', runId, offset, limit] as const,
   decide: (runId: string) => [...reviewKeys.all, 'decide', runId] as const,
 };
 
@@ -14,12 +21,17 @@ export const reviewQueries = {
   detail: (runId: string) =>
     queryOptions({
       queryKey: reviewKeys.detail(runId),
-      queryFn: ({ signal }) => api.get<RunReviewView>(`/api/runs/${encodeURIComponent(runId)}/review`, signal),
+      queryFn: ({ signal }) =>
+        api.get<RunReviewView>(`/api/runs/${encodeURIComponent(runId)}/review`, signal),
     }),
   readings: (runId: string, offset: number, limit: number) =>
     queryOptions({
       queryKey: reviewKeys.readings(runId, offset, limit),
-      queryFn: ({ signal }) => api.get<ReadingsPage>(`/api/runs/${encodeURIComponent(runId)}/readings?offset=${offset}&limit=${limit}`, signal),
+      queryFn: ({ signal }) =>
+        api.get<ReadingsPage>(
+          `/api/runs/${encodeURIComponent(runId)}/readings?offset=${offset}&limit=${limit}`,
+          signal,
+        ),
       placeholderData: keepPreviousData,
     }),
 };
@@ -27,10 +39,12 @@ export const reviewQueries = {
 /** Everything the review page shows of one run: accounting, charts, events, decisions, trail. */
 export const useRunReview = (runId: string) => useQuery(reviewQueries.detail(runId));
 
-export const useReadings = (runId: string, offset: number, limit: number) => useQuery(reviewQueries.readings(runId, offset, limit));
+export const useReadings = (runId: string, offset: number, limit: number) =>
+  useQuery(reviewQueries.readings(runId, offset, limit));
 
 /** Where the browser downloads the readings as CSV (a plain link: the browser saves the file). */
-export const readingsCsvUrl = (runId: string) => `/api/runs/${encodeURIComponent(runId)}/readings.csv`;
+export const readingsCsvUrl = (runId: string) =>
+  `/api/runs/${encodeURIComponent(runId)}/readings.csv`;
 
 /**
  * Confirms (signs off) or returns a submitted run. `onDecided` hears the answer before the review
@@ -40,7 +54,8 @@ export function useSignOff(runId: string, onDecided?: (result: DecisionView) => 
   const queryClient = useQueryClient();
   return useMutation({
     mutationKey: reviewKeys.decide(runId),
-    mutationFn: (input: SignOffInput) => api.post<DecisionView>(`/api/runs/${encodeURIComponent(runId)}/sign-off`, input),
+    mutationFn: (input: SignOffInput) =>
+      api.post<DecisionView>(`/api/runs/${encodeURIComponent(runId)}/sign-off`, input),
     onSuccess: async (result) => {
       await onDecided?.(result);
       await queryClient.invalidateQueries({ queryKey: reviewKeys.all });

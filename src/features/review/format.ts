@@ -2,7 +2,8 @@ import { format } from 'date-fns';
 import { durationWords } from '../../../shared/runs/duration-words';
 
 /** "26 Nov 2026, 14:52" in the viewer's zone. */
-export const formatMoment = (value: number | string) => format(new Date(value), 'd MMM yyyy, HH:mm');
+export const formatMoment = (value: number | string) =>
+  format(new Date(value), 'd MMM yyyy, HH:mm');
 
 /** "14:52" when both ends fall on one day, else the full moment. */
 export function formatSpan(fromMs: number, toMs: number): string {

@@ -34,7 +34,8 @@ export const teamQueries = {
   users: () =>
     queryOptions({
       queryKey: teamKeys.users(),
-      queryFn: ({ signal }) => api.get<{ users: TeamMember[]; invites: TeamInvite[] }>('/api/users', signal),
+      queryFn: ({ signal }) =>
+        api.get<{ users: TeamMember[]; invites: TeamInvite[] }>('/api/users', signal),
     }),
 };
 

@@ -1,4 +1,10 @@
-import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import {
+  keepPreviousData,
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+} from '@tanstack/react-query';
 import type { VesselInput, ListStatus } from '../../../shared/vessels/vessel.schema';
 import type { SkipperOption, VesselView } from '../../../shared/vessels/vessel-view';
 import { api, isApiError } from '../../lib/api-client';
@@ -60,7 +66,8 @@ export const vesselQueries = {
   filtered: (filters: VesselFilters) =>
     queryOptions({
       queryKey: vesselKeys.filtered(filters),
-      queryFn: ({ signal }) => api.get<{ vessels: VesselView[] }>(`/api/vessels${search(filters)}`, signal),
+      queryFn: ({ signal }) =>
+        api.get<{ vessels: VesselView[] }>(`/api/vessels${search(filters)}`, signal),
       select: (data) => data.vessels,
       // The list stays on screen (and keeps its sorting) while a new search loads.
       placeholderData: keepPreviousData,
@@ -88,7 +95,11 @@ export const useSkippers = () => useQuery(vesselQueries.skippers());
 /** After any change to a vessel or an engine, every list and page showing them is refetched. */
 export function useInvalidateFleet() {
   const queryClient = useQueryClient();
-  return () => Promise.all([queryClient.invalidateQueries({ queryKey: vesselKeys.all }), queryClient.invalidateQueries({ queryKey: engineKeys.all })]);
+  return () =>
+    Promise.all([
+      queryClient.invalidateQueries({ queryKey: vesselKeys.all }),
+      queryClient.invalidateQueries({ queryKey: engineKeys.all }),
+    ]);
 }
 
 export function useSaveVessel() {
@@ -96,7 +107,9 @@ export function useSaveVessel() {
   return useMutation({
     mutationKey: vesselKeys.save(),
     mutationFn: ({ id, input }: { id?: string; input: VesselInput }) =>
-      id ? api.put<{ vessel: VesselView }>(`/api/vessels/${id}`, input) : api.post<{ vessel: VesselView }>('/api/vessels', input),
+      id
+        ? api.put<{ vessel: VesselView }>(`/api/vessels/${id}`, input)
+        : api.post<{ vessel: VesselView }>('/api/vessels', input),
     onSuccess: () => invalidate(),
   });
 }
@@ -115,7 +128,15 @@ export function useSkipperLink() {
   const invalidate = useInvalidateFleet();
   return useMutation({
     mutationKey: vesselKeys.link(),
-    mutationFn: ({ vesselId, userId, linked }: { vesselId: string; userId: string; linked: boolean }) =>
+    mutationFn: ({
+      vesselId,
+      userId,
+      linked,
+    }: {
+      vesselId: string;
+      userId: string;
+      linked: boolean;
+    }) =>
       linked
         ? api.put<{ vessel: VesselView }>(`/api/vessels/${vesselId}/skippers/${userId}`)
         : api.delete<{ vessel: VesselView }>(`/api/vessels/${vesselId}/skippers/${userId}`),

@@ -16,7 +16,8 @@ export const engineQueries = {
   list: (filters: EngineFilters) =>
     queryOptions({
       queryKey: engineKeys.list(filters),
-      queryFn: ({ signal }) => api.get<{ engines: EngineRow[] }>(`/api/engines${search(filters)}`, signal),
+      queryFn: ({ signal }) =>
+        api.get<{ engines: EngineRow[] }>(`/api/engines${search(filters)}`, signal),
       select: (data) => data.engines,
       // The list stays on screen (and keeps its sorting) while a new search loads.
       placeholderData: keepPreviousData,
@@ -37,7 +38,9 @@ export function useSaveEngine() {
   return useMutation({
     mutationKey: engineKeys.save(),
     mutationFn: ({ id, input }: { id?: string; input: EngineInput }) =>
-      id ? api.put<{ engine: EngineRow }>(`/api/engines/${id}`, input) : api.post<{ engine: EngineRow }>('/api/engines', input),
+      id
+        ? api.put<{ engine: EngineRow }>(`/api/engines/${id}`, input)
+        : api.post<{ engine: EngineRow }>('/api/engines', input),
     onSuccess: () => invalidate(),
   });
 }

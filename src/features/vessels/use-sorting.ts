@@ -11,11 +11,17 @@ const compare = (a: SortValue, b: SortValue) => {
   // Empty values go last whichever way the column is sorted.
   if (a === null || a === '') return b === null || b === '' ? 0 : 1;
   if (b === null || b === '') return -1;
-  return typeof a === 'number' && typeof b === 'number' ? a - b : String(a).localeCompare(String(b), 'en-GB', { numeric: true, sensitivity: 'base' });
+  return typeof a === 'number' && typeof b === 'number'
+    ? a - b
+    : String(a).localeCompare(String(b), 'en-GB', { numeric: true, sensitivity: 'base' });
 };
 
 /** Rows sorted by one column; choosing the same column again flips the direction. */
-export function useSorting<T, K extends string>(rows: T[], columns: Record<K, (row: T) => SortValue>, initial: SortState<K>) {
+export function useSorting<T, K extends string>(
+  rows: T[],
+  columns: Record<K, (row: T) => SortValue>,
+  initial: SortState<K>,
+) {
   const [sort, setSort] = useState<SortState<K>>(initial);
   const sorted = useMemo(() => {
     const valueOf = columns[sort.key];
@@ -27,6 +33,10 @@ export function useSorting<T, K extends string>(rows: T[], columns: Record<K, (r
     });
   }, [rows, columns, sort]);
   const sortBy = (key: K) =>
-    setSort((current) => ({ key, direction: current.key === key && current.direction === 'ascending' ? 'descending' : 'ascending' }));
+    setSort((current) => ({
+      key,
+      direction:
+        current.key === key && current.direction === 'ascending' ? 'descending' : 'ascending',
+    }));
   return { sorted, sort, sortBy, setSort };
 }

@@ -3,7 +3,17 @@ import { db } from '../../lib/db';
 import { fetchVesselList } from './api';
 import type { VesselSummary } from './types';
 
-const vessel = (name: string) => ({ id: `id-${name}`, name, hin: '', type: 'workboat', lengthM: 6, homePort: 'Kestrel Harbour', skippers: [], engines: [] }) as VesselSummary;
+const vessel = (name: string) =>
+  ({
+    id: `id-${name}`,
+    name,
+    hin: '',
+    type: 'workboat',
+    lengthM: 6,
+    homePort: 'Kestrel Harbour',
+    skippers: [],
+    engines: [],
+  }) as VesselSummary;
 
 beforeEach(async () => {
   await db.delete();
@@ -26,7 +36,19 @@ describe('the vessel list with no network', () => {
 
   it('never hides a refusal from the server behind the device copy', async () => {
     await db.vessels.bulkPut([vessel('Gannet')]);
-    vi.stubGlobal('fetch', vi.fn().mockResolvedValue(new Response(JSON.stringify({ type: '/problems/unauthenticated', title: 'Not signed in', status: 401 }), { status: 401 })));
+    vi.stubGlobal(
+      'fetch',
+      vi.fn().mockResolvedValue(
+        new Response(
+          JSON.stringify({
+            type: '/problems/unauthenticated',
+            title: 'Not signed in',
+            status: 401,
+          }),
+          { status: 401 },
+        ),
+      ),
+    );
     await expect(fetchVesselList()).rejects.toMatchObject({ status: 401 });
   });
 });

@@ -6,7 +6,11 @@ export async function nextPushBatch(max = MAX_PUSH_ITEMS): Promise<PushItem[]> {
   const events = await db.events.where('sync').equals('pending').sortBy('at');
   const patches = await db.runPatches.where('sync').equals('pending').sortBy('createdAt');
   const items: PushItem[] = [
-    ...events.map((e: EventRecord): PushItem => ({ type: 'event', runId: e.runId, event: e.event })),
+    ...events.map((e: EventRecord): PushItem => ({
+      type: 'event',
+      runId: e.runId,
+      event: e.event,
+    })),
     ...patches.map((p: RunPatchRecord): PushItem => p.item),
   ];
   return items.slice(0, max);
@@ -24,7 +28,10 @@ export async function recordResults(items: PushItem[], results: PushResult[]): P
     for (const item of items) {
       const result = byId.get(itemId(item));
       if (!result) continue;
-      const change = result.status === 'rejected' ? { sync: 'rejected' as const, rejectReason: result.reason ?? 'Refused by the server.' } : { sync: 'synced' as const };
+      const change =
+        result.status === 'rejected'
+          ? { sync: 'rejected' as const, rejectReason: result.reason ?? 'Refused by the server.' }
+          : { sync: 'synced' as const };
       if (item.type === 'event') await db.events.update(item.event.id, change);
       else await db.runPatches.update(item.id, change);
     }
@@ -33,7 +40,10 @@ export async function recordResults(items: PushItem[], results: PushResult[]): P
 
 /** The whole batch was refused (e.g. the run is no longer shared with this user). */
 export async function rejectAll(items: PushItem[], reason: string): Promise<void> {
-  await recordResults(items, items.map((item) => ({ id: itemId(item), status: 'rejected', reason })));
+  await recordResults(
+    items,
+    items.map((item) => ({ id: itemId(item), status: 'rejected', reason })),
+  );
 }
 
 export type OutboxCounts = { waiting: number; rejected: number };

@@ -30,4 +30,5 @@ export async function uploadPendingPhotos(): Promise<void> {
 }
 
 /** 4xx answers other than "sign in" and "slow down" will not change by trying again. */
-export const isFinalRefusal = (status: number) => status >= 400 && status < 500 && status !== 401 && status !== 408 && status !== 429;
+export const isFinalRefusal = (status: number) =>
+  status >= 400 && status < 500 && status !== 401 && status !== 408 && status !== 429;

@@ -38,8 +38,20 @@ async function storeEvents(events: PullResponse['events']) {
   const confirmed: string[] = [];
   events.forEach(({ runId, event }, i) => {
     if (known[i]) confirmed.push(event.id);
-    else added.push({ id: event.id, runId, engineId: event.engineId, at: event.at, kind: event.kind, event, origin: 'server', sync: 'synced', createdAt: Date.now() });
+    else
+      added.push({
+        id: event.id,
+        runId,
+        engineId: event.engineId,
+        at: event.at,
+        kind: event.kind,
+        event,
+        origin: 'server',
+        sync: 'synced',
+        createdAt: Date.now(),
+      });
   });
   await db.events.bulkAdd(added);
-  for (const id of confirmed) await db.events.update(id, { sync: 'synced', rejectReason: undefined });
+  for (const id of confirmed)
+    await db.events.update(id, { sync: 'synced', rejectReason: undefined });
 }

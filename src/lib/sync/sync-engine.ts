@@ -27,7 +27,11 @@ async function pushAll(): Promise<void> {
     const items = await nextPushBatch();
     if (items.length === 0) return;
     try {
-      const answer = await api.post<PushResponse>('/api/sync/push', { deviceId: device, sentAt: Date.now(), items });
+      const answer = await api.post<PushResponse>('/api/sync/push', {
+        deviceId: device,
+        sentAt: Date.now(),
+        items,
+      });
       await recordResults(items, answer.results);
     } catch (error) {
       if (isApiError(error) && isFinalRefusal(error.status)) await rejectAll(items, error.message);
@@ -63,7 +67,11 @@ export function syncNow(): Promise<void> {
     } catch (error) {
       failures++;
       const delay = backoffDelay(failures);
-      setSyncStatus({ syncing: false, lastError: describe(error), nextRetryAt: Date.now() + delay });
+      setSyncStatus({
+        syncing: false,
+        lastError: describe(error),
+        nextRetryAt: Date.now() + delay,
+      });
       clearTimeout(retryTimer);
       retryTimer = setTimeout(() => void syncNow(), delay);
     } finally {

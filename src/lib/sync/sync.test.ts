@@ -8,8 +8,26 @@ const RUN = '11111111-1111-4111-8111-111111111111';
 const ENGINE = '22222222-2222-4222-8222-222222222222';
 
 function reading(id: string, at: number, sync: EventRecord['sync'] = 'pending'): EventRecord {
-  const event = { kind: 'reading' as const, id, at, engineId: ENGINE, phaseId: 'p1', rpm: 2500, throttle: 'half' as const };
-  return { id, runId: RUN, engineId: ENGINE, at, kind: 'reading', event, origin: 'device', sync, createdAt: at };
+  const event = {
+    kind: 'reading' as const,
+    id,
+    at,
+    engineId: ENGINE,
+    phaseId: 'p1',
+    rpm: 2500,
+    throttle: 'half' as const,
+  };
+  return {
+    id,
+    runId: RUN,
+    engineId: ENGINE,
+    at,
+    kind: 'reading',
+    event,
+    origin: 'device',
+    sync,
+    createdAt: at,
+  };
 }
 
 const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
@@ -21,15 +39,33 @@ beforeEach(async () => {
 
 describe('outbox', () => {
   it('sends pending events oldest first, run changes after them, and nothing already synced', async () => {
-    await db.events.bulkAdd([reading(uuid(3), 3000), reading(uuid(1), 1000), reading(uuid(2), 2000, 'synced')]);
-    await db.runPatches.add({ id: uuid(9), runId: RUN, item: { type: 'run-patch', id: uuid(9), runId: RUN, at: 500, submit: true }, sync: 'pending', createdAt: 500 });
+    await db.events.bulkAdd([
+      reading(uuid(3), 3000),
+      reading(uuid(1), 1000),
+      reading(uuid(2), 2000, 'synced'),
+    ]);
+    await db.runPatches.add({
+      id: uuid(9),
+      runId: RUN,
+      item: { type: 'run-patch', id: uuid(9), runId: RUN, at: 500, submit: true },
+      sync: 'pending',
+      createdAt: 500,
+    });
     const batch = await nextPushBatch();
-    expect(batch.map((i) => (i.type === 'event' ? i.event.id : i.id))).toEqual([uuid(1), uuid(3), uuid(9)]);
+    expect(batch.map((i) => (i.type === 'event' ? i.event.id : i.id))).toEqual([
+      uuid(1),
+      uuid(3),
+      uuid(9),
+    ]);
     expect(await nextPushBatch(1)).toHaveLength(1);
   });
 
   it('clears stored and already-had items, keeps refused ones with their reason', async () => {
-    await db.events.bulkAdd([reading(uuid(1), 1000), reading(uuid(2), 2000), reading(uuid(3), 3000)]);
+    await db.events.bulkAdd([
+      reading(uuid(1), 1000),
+      reading(uuid(2), 2000),
+      reading(uuid(3), 3000),
+    ]);
     const items = await nextPushBatch();
     await recordResults(items, [
       { id: uuid(1), status: 'stored' },
@@ -37,7 +73,9 @@ describe('outbox', () => {
       { id: uuid(3), status: 'rejected', reason: 'The engine speed (rpm) cannot be negative.' },
     ]);
     expect(await outboxCounts()).toEqual({ waiting: 0, rejected: 1 });
-    expect((await db.events.get(uuid(3)))?.rejectReason).toBe('The engine speed (rpm) cannot be negative.');
+    expect((await db.events.get(uuid(3)))?.rejectReason).toBe(
+      'The engine speed (rpm) cannot be negative.',
+    );
     expect(await nextPushBatch()).toEqual([]);
   });
 
@@ -50,15 +88,27 @@ describe('outbox', () => {
 
 describe('pull', () => {
   const run = { id: RUN, state: 'under-way' } as RunRecord;
-  const page = (events: PullResponse['events'], runIds = [RUN]): PullResponse => ({ cursor: 42, more: false, runIds, runs: [run], events, vessels: [] });
+  const page = (events: PullResponse['events'], runIds = [RUN]): PullResponse => ({
+    cursor: 42,
+    more: false,
+    runIds,
+    runs: [run],
+    events,
+    vessels: [],
+  });
 
-  it('adds events made elsewhere, confirms this device\'s own, and moves the cursor', async () => {
+  it("adds events made elsewhere, confirms this device's own, and moves the cursor", async () => {
     await db.events.add(reading(uuid(1), 1000));
     const mine = (await db.events.get(uuid(1)))!.event;
     const theirs = { ...mine, id: uuid(2), at: 2000 };
-    await applyPull(page([{ runId: RUN, receivedAt: 5000, event: mine }, { runId: RUN, receivedAt: 5000, event: theirs }]));
-    expect((await db.events.get(uuid(1)))).toMatchObject({ origin: 'device', sync: 'synced' });
-    expect((await db.events.get(uuid(2)))).toMatchObject({ origin: 'server', sync: 'synced' });
+    await applyPull(
+      page([
+        { runId: RUN, receivedAt: 5000, event: mine },
+        { runId: RUN, receivedAt: 5000, event: theirs },
+      ]),
+    );
+    expect(await db.events.get(uuid(1))).toMatchObject({ origin: 'device', sync: 'synced' });
+    expect(await db.events.get(uuid(2))).toMatchObject({ origin: 'server', sync: 'synced' });
     expect((await db.meta.get('pullCursor'))?.value).toBe(42);
   });
 

@@ -11,16 +11,22 @@ afterEach(() => {
 
 const engineId = '3f2b8c1e-2d4a-4c6b-9e8f-1a2b3c4d5e6f';
 const json = (status: number, body: unknown) =>
-  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': status >= 400 ? 'application/problem+json' : 'application/json' } });
+  new Response(JSON.stringify(body), {
+    status,
+    headers: { 'Content-Type': status >= 400 ? 'application/problem+json' : 'application/json' },
+  });
 
 /** The network boundary: lists answer empty; uploads answer what the test says and are recorded. */
 function stubNetwork(uploadAnswer: () => Response) {
   const uploads: FormData[] = [];
-  vi.stubGlobal('fetch', vi.fn(async (_input: RequestInfo | URL, init: RequestInit = {}) => {
-    if ((init.method ?? 'GET') === 'GET') return json(200, { attachments: [] });
-    uploads.push(init.body as FormData);
-    return uploadAnswer();
-  }));
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (_input: RequestInfo | URL, init: RequestInit = {}) => {
+      if ((init.method ?? 'GET') === 'GET') return json(200, { attachments: [] });
+      uploads.push(init.body as FormData);
+      return uploadAnswer();
+    }),
+  );
   return uploads;
 }
 
@@ -30,21 +36,37 @@ describe('AttachmentPanel', () => {
     const user = userEvent.setup();
     renderPage(<AttachmentPanel recordType="engine" recordId={engineId} canAdd />);
 
-    const big = new File([new Uint8Array(MAX_ATTACHMENT_BYTES + 1)], 'whole-manual.pdf', { type: 'application/pdf' });
+    const big = new File([new Uint8Array(MAX_ATTACHMENT_BYTES + 1)], 'whole-manual.pdf', {
+      type: 'application/pdf',
+    });
     await user.upload(await screen.findByLabelText('Photo or document'), big);
     await user.click(screen.getByRole('button', { name: 'Attach file' }));
 
-    expect(await screen.findByRole('alert')).toHaveTextContent('whole-manual.pdf is larger than 10 MB.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'whole-manual.pdf is larger than 10 MB.',
+    );
     expect(uploads).toHaveLength(0);
   });
 
   it('sends the file with a client-made id and shows the server’s content-type refusal', async () => {
-    const detail = 'photo.jpg cannot be attached: its content is not a recognised photo or document format.';
-    const uploads = stubNetwork(() => json(415, { type: '/problems/unsupported-file-type', title: 'Unsupported file type', status: 415, detail, errors: [{ field: 'file', message: detail }] }));
+    const detail =
+      'photo.jpg cannot be attached: its content is not a recognised photo or document format.';
+    const uploads = stubNetwork(() =>
+      json(415, {
+        type: '/problems/unsupported-file-type',
+        title: 'Unsupported file type',
+        status: 415,
+        detail,
+        errors: [{ field: 'file', message: detail }],
+      }),
+    );
     const user = userEvent.setup();
     renderPage(<AttachmentPanel recordType="engine" recordId={engineId} canAdd />);
 
-    await user.upload(await screen.findByLabelText('Photo or document'), new File(['just some notes'], 'photo.jpg', { type: 'image/jpeg' }));
+    await user.upload(
+      await screen.findByLabelText('Photo or document'),
+      new File(['just some notes'], 'photo.jpg', { type: 'image/jpeg' }),
+    );
     await user.type(screen.getByLabelText('Caption (optional)'), 'Hour meter');
     await user.click(screen.getByRole('button', { name: 'Attach file' }));
 

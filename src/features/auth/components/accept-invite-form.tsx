@@ -2,7 +2,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { AcceptInviteInputSchema, type AcceptInviteInput, type SessionUser } from '../../../../shared/auth/auth.schema';
+import {
+  AcceptInviteInputSchema,
+  type AcceptInviteInput,
+  type SessionUser,
+} from '../../../../shared/auth/auth.schema';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
@@ -18,7 +22,11 @@ interface AcceptInviteFormProps {
 export function AcceptInviteForm({ token, onAccepted }: AcceptInviteFormProps) {
   const acceptInvite = useAcceptInvite();
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof AcceptInviteInputSchema>, unknown, AcceptInviteInput>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    z.input<typeof AcceptInviteInputSchema>,
+    unknown,
+    AcceptInviteInput
+  >({
     resolver: zodResolver(AcceptInviteInputSchema),
     defaultValues: { token, name: '', password: '' },
   });
@@ -29,7 +37,8 @@ export function AcceptInviteForm({ token, onAccepted }: AcceptInviteFormProps) {
       onSuccess: ({ user }) => onAccepted(user),
       onError: (error) => {
         const leftOver = applyServerFieldErrors(error, setError, ['name', 'password']);
-        const onFieldsOnly = isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
+        const onFieldsOnly =
+          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
         if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
       },
     });
@@ -42,7 +51,12 @@ export function AcceptInviteForm({ token, onAccepted }: AcceptInviteFormProps) {
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
       {alert && <Alert title="Could not set your password">{alert}</Alert>}
-      <TextField label="Your name" autoComplete="name" error={formState.errors.name?.message} {...register('name')} />
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        error={formState.errors.name?.message}
+        {...register('name')}
+      />
       <TextField
         label="Password"
         type="password"

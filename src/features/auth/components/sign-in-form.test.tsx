@@ -38,20 +38,30 @@ describe('SignInForm', () => {
     await user.type(screen.getByLabelText('Password'), 'long enough password');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByText('Enter a valid e-mail address, like name@example.com.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Enter a valid e-mail address, like name@example.com.'),
+    ).toBeInTheDocument();
     expect(screen.getByLabelText('Password')).toHaveAttribute('aria-invalid', 'false');
     expect(fetchMock).not.toHaveBeenCalled();
   });
 
   it("shows the server's reason when the e-mail or password is wrong", async () => {
-    stubFetch({ 'POST /api/auth/sign-in': problem(401, 'Unauthorized', 'That e-mail and password do not match an account.') });
+    stubFetch({
+      'POST /api/auth/sign-in': problem(
+        401,
+        'Unauthorized',
+        'That e-mail and password do not match an account.',
+      ),
+    });
     const { user, onSignedIn } = setup();
 
     await user.type(screen.getByLabelText('E-mail'), 'skipper@example.com');
     await user.type(screen.getByLabelText('Password'), 'not the password');
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
-    expect(await screen.findByRole('alert')).toHaveTextContent('That e-mail and password do not match an account.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'That e-mail and password do not match an account.',
+    );
     expect(onSignedIn).not.toHaveBeenCalled();
   });
 
@@ -74,7 +84,9 @@ describe('SignInForm', () => {
 
   it('sends the normalised e-mail and reports the signed-in user', async () => {
     const skipper = testUser('skipper');
-    const { calls } = stubFetch({ 'POST /api/auth/sign-in': { status: 200, body: { user: skipper } } });
+    const { calls } = stubFetch({
+      'POST /api/auth/sign-in': { status: 200, body: { user: skipper } },
+    });
     const { user, onSignedIn } = setup();
 
     await user.type(screen.getByLabelText('E-mail'), '  Skipper@Example.com ');

@@ -2,7 +2,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { SignInInputSchema, type SessionUser, type SignInInput } from '../../../../shared/auth/auth.schema';
+import {
+  SignInInputSchema,
+  type SessionUser,
+  type SignInInput,
+} from '../../../../shared/auth/auth.schema';
 import { isApiError } from '../../../lib/api-client';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
@@ -16,16 +20,26 @@ interface Refusal {
 }
 
 function refusalFor(error: unknown, leftOver: string[]): Refusal | null {
-  if (!isApiError(error)) return { title: 'Could not sign in', detail: 'Something went wrong. Try again.' };
+  if (!isApiError(error))
+    return { title: 'Could not sign in', detail: 'Something went wrong. Try again.' };
   if (error.fieldErrors.length > 0 && leftOver.length === 0) return null; // shown on the fields
-  const title = error.status === 401 ? 'Not signed in' : error.status === 429 ? 'Too many attempts' : 'Could not sign in';
+  const title =
+    error.status === 401
+      ? 'Not signed in'
+      : error.status === 429
+        ? 'Too many attempts'
+        : 'Could not sign in';
   return { title, detail: leftOver.length ? leftOver.join(' ') : error.message };
 }
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => void }) {
   const signIn = useSignIn();
   const [refusal, setRefusal] = useState<Refusal | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof SignInInputSchema>, unknown, SignInInput>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    z.input<typeof SignInInputSchema>,
+    unknown,
+    SignInInput
+  >({
     resolver: zodResolver(SignInInputSchema),
     defaultValues: { email: '', password: '' },
   });
@@ -34,7 +48,10 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => 
     setRefusal(null);
     signIn.mutate(input, {
       onSuccess: ({ user }) => onSignedIn(user),
-      onError: (error) => setRefusal(refusalFor(error, applyServerFieldErrors(error, setError, ['email', 'password']))),
+      onError: (error) =>
+        setRefusal(
+          refusalFor(error, applyServerFieldErrors(error, setError, ['email', 'password'])),
+        ),
     });
   });
 

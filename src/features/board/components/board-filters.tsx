@@ -18,7 +18,15 @@ interface BoardFiltersProps {
  * The choice of runs: a row of toggle buttons, each saying how many runs it holds, on wide
  * screens; one list on phones, where seven buttons would push the runs off the screen.
  */
-export function BoardFilters({ show, counts, actionCount, total, q, onShow, onSearch }: BoardFiltersProps) {
+export function BoardFilters({
+  show,
+  counts,
+  actionCount,
+  total,
+  q,
+  onShow,
+  onSearch,
+}: BoardFiltersProps) {
   const choices: Array<[BoardShow, string, number]> = [
     ['action', 'Needs action', actionCount],
     ['all', 'All', total],
@@ -28,20 +36,44 @@ export function BoardFilters({ show, counts, actionCount, total, q, onShow, onSe
     <div className="flex flex-col gap-3 sm:flex-row sm:flex-wrap sm:items-end sm:gap-4">
       <div role="group" aria-label="Show runs" className="hidden flex-wrap gap-2 sm:flex">
         {choices.map(([value, label, count]) => (
-          <button key={value} type="button" aria-pressed={show === value} onClick={() => onShow(value)}
-            className={cx('inline-flex min-h-touch items-center gap-2 rounded-md border-2 border-ink px-3 font-semibold', show === value ? 'bg-ink text-paper' : 'bg-surface text-ink')}>
+          <button
+            key={value}
+            type="button"
+            aria-pressed={show === value}
+            onClick={() => onShow(value)}
+            className={cx(
+              'inline-flex min-h-touch items-center gap-2 rounded-md border-2 border-ink px-3 font-semibold',
+              show === value ? 'bg-ink text-paper' : 'bg-surface text-ink',
+            )}
+          >
             {label}
-            <span className="figures rounded-full border-2 border-current px-1.5 text-sm">{count}</span>
+            <span className="figures rounded-full border-2 border-current px-1.5 text-sm">
+              {count}
+            </span>
           </button>
         ))}
       </div>
       <div className="sm:hidden">
-        <SelectField label="Show" value={show} onChange={(e) => onShow(e.target.value as BoardShow)}>
-          {choices.map(([value, label, count]) => <option key={value} value={value}>{label} ({count})</option>)}
+        <SelectField
+          label="Show"
+          value={show}
+          onChange={(e) => onShow(e.target.value as BoardShow)}
+        >
+          {choices.map(([value, label, count]) => (
+            <option key={value} value={value}>
+              {label} ({count})
+            </option>
+          ))}
         </SelectField>
       </div>
       <div className="w-full max-w-md">
-        <TextField label="Search runs" hint="Vessel, engine, serial number or program" type="search" value={q} onChange={(e) => onSearch(e.target.value)} />
+        <TextField
+          label="Search runs"
+          hint="Vessel, engine, serial number or program"
+          type="search"
+          value={q}
+          onChange={(e) => onSearch(e.target.value)}
+        />
       </div>
     </div>
   );

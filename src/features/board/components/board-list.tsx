@@ -4,12 +4,16 @@ import { Table, Td, Th } from '../../../components/ui/table';
 import { capitalise, formatDate } from '../../../lib/format';
 import { FirstServiceText, FlagList, ProgressBar, RunStatePill, VerdictPill } from './run-badges';
 
-const engineWords = (run: BoardRow) => `${capitalise(run.engine.position)} · ${run.engine.maker} ${run.engine.model}`;
+const engineWords = (run: BoardRow) =>
+  `${capitalise(run.engine.position)} · ${run.engine.maker} ${run.engine.model}`;
 const activity = (run: BoardRow) => (run.lastActivityAt ? formatDate(run.lastActivityAt) : '—');
 
 function RunLink({ run }: { run: BoardRow }) {
   return (
-    <Link to={`/runs/${run.id}`} className="inline-flex min-h-touch items-center font-bold underline underline-offset-4">
+    <Link
+      to={`/runs/${run.id}`}
+      className="inline-flex min-h-touch items-center font-bold underline underline-offset-4"
+    >
       {run.vessel.name}
       <span className="sr-only">, {run.engine.position} engine: open the review</span>
     </Link>
@@ -39,18 +43,28 @@ export function BoardTable({ runs }: { runs: BoardRow[] }) {
               <p className="text-sm">{engineWords(run)}</p>
               <p className="figures text-sm text-muted">{run.engine.serialNumber}</p>
             </Td>
-            <Td><RunStatePill state={run.state} /></Td>
             <Td>
-              <ProgressBar share={run.progress} label={`Progress of ${run.vessel.name} ${run.engine.position}`} />
+              <RunStatePill state={run.state} />
+            </Td>
+            <Td>
+              <ProgressBar
+                share={run.progress}
+                label={`Progress of ${run.vessel.name} ${run.engine.position}`}
+              />
               <p className="text-sm text-muted">{run.currentPhaseName ?? 'All phases done'}</p>
             </Td>
             <Td>
               <div className="flex flex-col items-start gap-1">
                 <VerdictPill verdict={run.verdict} />
-                <FlagList flags={run.flags.filter((f) => f !== 'breach')} breachCount={run.breachCount} />
+                <FlagList
+                  flags={run.flags.filter((f) => f !== 'breach')}
+                  breachCount={run.breachCount}
+                />
               </div>
             </Td>
-            <Td><FirstServiceText service={run.firstService} /></Td>
+            <Td>
+              <FirstServiceText service={run.firstService} />
+            </Td>
             <Td className="whitespace-nowrap">{activity(run)}</Td>
           </tr>
         ))}
@@ -69,11 +83,22 @@ export function BoardCards({ runs }: { runs: BoardRow[] }) {
             <RunLink run={run} />
             <RunStatePill state={run.state} />
           </div>
-          <p>{engineWords(run)} <span className="figures text-sm text-muted">{run.engine.serialNumber}</span></p>
-          <div className="mt-2"><ProgressBar share={run.progress} label={`Progress of ${run.vessel.name} ${run.engine.position}`} /></div>
+          <p>
+            {engineWords(run)}{' '}
+            <span className="figures text-sm text-muted">{run.engine.serialNumber}</span>
+          </p>
+          <div className="mt-2">
+            <ProgressBar
+              share={run.progress}
+              label={`Progress of ${run.vessel.name} ${run.engine.position}`}
+            />
+          </div>
           <div className="mt-2 flex flex-wrap gap-1">
             <VerdictPill verdict={run.verdict} />
-            <FlagList flags={run.flags.filter((f) => f !== 'breach')} breachCount={run.breachCount} />
+            <FlagList
+              flags={run.flags.filter((f) => f !== 'breach')}
+              breachCount={run.breachCount}
+            />
           </div>
           <p className="mt-2 text-sm text-muted">Last activity {activity(run)}</p>
         </li>

@@ -8,7 +8,13 @@ import { RunsBoard } from './runs-board';
 // Invented rows for the component; the order and flags come from the server.
 const row = (over: Partial<BoardRow> & Pick<BoardRow, 'id' | 'state' | 'group'>): BoardRow => ({
   vessel: { id: 'v1', name: 'Petrel' },
-  engine: { id: 'e1', position: 'single', maker: 'Norrvik', model: 'NV-40 4S', serialNumber: 'NV40-00001' },
+  engine: {
+    id: 'e1',
+    position: 'single',
+    maker: 'Norrvik',
+    model: 'NV-40 4S',
+    serialNumber: 'NV40-00001',
+  },
   programName: 'Four-stroke outboard, about 10 hours',
   progress: 0.5,
   verdict: 'incomplete',
@@ -16,7 +22,13 @@ const row = (over: Partial<BoardRow> & Pick<BoardRow, 'id' | 'state' | 'group'>)
   currentPhaseName: 'Below half throttle, changing speed',
   lastActivityAt: '2026-11-29T10:00:00.000Z',
   flags: [],
-  firstService: { state: 'not-due', dueAtHours: 20.3, dueOn: '2026-12-23', hoursNow: 4.2, hoursSource: 'estimated' },
+  firstService: {
+    state: 'not-due',
+    dueAtHours: 20.3,
+    dueOn: '2026-12-23',
+    hoursNow: 4.2,
+    hoursSource: 'estimated',
+  },
   ...over,
 });
 
@@ -27,14 +39,37 @@ const board: BoardView = {
   total: 2,
   matching: 150,
   runs: [
-    row({ id: 'r1', state: 'submitted', group: 'review', verdict: 'breached', breachCount: 1, flags: ['breach'], progress: 1 }),
-    row({ id: 'r2', state: 'under-way', group: 'check', flags: ['clock-skew'], vessel: { id: 'v2', name: 'Shag' } }),
+    row({
+      id: 'r1',
+      state: 'submitted',
+      group: 'review',
+      verdict: 'breached',
+      breachCount: 1,
+      flags: ['breach'],
+      progress: 1,
+    }),
+    row({
+      id: 'r2',
+      state: 'under-way',
+      group: 'check',
+      flags: ['clock-skew'],
+      vessel: { id: 'v2', name: 'Shag' },
+    }),
   ],
 };
 
 describe('RunsBoard', () => {
   it('shows each run with its state, verdict and flags in words, linked to its review', () => {
-    renderPage(<RunsBoard board={board} show="action" q="" onShow={() => {}} onSearch={() => {}} onMore={() => {}} />);
+    renderPage(
+      <RunsBoard
+        board={board}
+        show="action"
+        q=""
+        onShow={() => {}}
+        onSearch={() => {}}
+        onMore={() => {}}
+      />,
+    );
     const table = screen.getByRole('table');
     const [, first, second] = within(table).getAllByRole('row');
     expect(within(first).getByRole('link', { name: /Petrel/ })).toHaveAttribute('href', '/runs/r1');
@@ -49,8 +84,21 @@ describe('RunsBoard', () => {
     const onShow = vi.fn();
     const onMore = vi.fn();
     const user = userEvent.setup();
-    renderPage(<RunsBoard board={board} show="action" q="" onShow={onShow} onSearch={() => {}} onMore={onMore} />);
-    await user.click(within(screen.getByRole('group', { name: 'Show runs' })).getByRole('button', { name: /Under way/ }));
+    renderPage(
+      <RunsBoard
+        board={board}
+        show="action"
+        q=""
+        onShow={onShow}
+        onSearch={() => {}}
+        onMore={onMore}
+      />,
+    );
+    await user.click(
+      within(screen.getByRole('group', { name: 'Show runs' })).getByRole('button', {
+        name: /Under way/,
+      }),
+    );
     expect(onShow).toHaveBeenCalledWith('under-way');
     await user.click(screen.getByRole('button', { name: 'Show 100 more' }));
     expect(onMore).toHaveBeenCalled();

@@ -16,7 +16,10 @@ interface RunsBoardProps {
 }
 
 function statusText(board: BoardView, show: BoardShow): string {
-  if (board.matching === 0) return show === 'action' ? 'Nothing needs the workshop right now. Choose All to see every run.' : 'No runs to show here.';
+  if (board.matching === 0)
+    return show === 'action'
+      ? 'Nothing needs the workshop right now. Choose All to see every run.'
+      : 'No runs to show here.';
   return `Showing ${board.runs.length} of ${board.matching} runs${show === 'action' ? ' that need action' : ''}.`;
 }
 
@@ -24,12 +27,26 @@ function statusText(board: BoardView, show: BoardShow): string {
 export function RunsBoard({ board, show, q, onShow, onSearch, onMore }: RunsBoardProps) {
   return (
     <div className="flex flex-col gap-4">
-      <BoardFilters show={show} counts={board.counts} actionCount={board.actionCount} total={board.total} q={q} onShow={onShow} onSearch={onSearch} />
-      <p role="status" className="text-muted">{statusText(board, show)}</p>
+      <BoardFilters
+        show={show}
+        counts={board.counts}
+        actionCount={board.actionCount}
+        total={board.total}
+        q={q}
+        onShow={onShow}
+        onSearch={onSearch}
+      />
+      <p role="status" className="text-muted">
+        {statusText(board, show)}
+      </p>
       {board.runs.length > 0 && (
         <>
-          <div className="hidden sm:block"><BoardTable runs={board.runs} /></div>
-          <div className="sm:hidden"><BoardCards runs={board.runs} /></div>
+          <div className="hidden sm:block">
+            <BoardTable runs={board.runs} />
+          </div>
+          <div className="sm:hidden">
+            <BoardCards runs={board.runs} />
+          </div>
         </>
       )}
       {board.matching > board.runs.length && (

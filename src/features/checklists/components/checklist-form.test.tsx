@@ -15,15 +15,31 @@ afterEach(() => {
 
 // Rated 5000–6000 rpm as makers print it for four-stroke outboards; 12-pole coil (common practice).
 const engine: ChecklistEngine = {
-  installation: 'outboard', ratedRpmMin: 5000, ratedRpmMax: 6000, gearRatio: 2, propPitchIn: 19,
-  tachSource: 'charging-coil', poles: 12, pulleyRatio: null,
+  installation: 'outboard',
+  ratedRpmMin: 5000,
+  ratedRpmMax: 6000,
+  gearRatio: 2,
+  propPitchIn: 19,
+  tachSource: 'charging-coil',
+  poles: 12,
+  pulleyRatio: null,
 };
 const engineId = '3f2b8c1e-2d4a-4c6b-9e8f-1a2b3c4d5e6f';
 const unsaved: ChecklistView = {
-  id: null, engineId, entries: emptyChecklist(), evaluation: evaluateChecklist(emptyChecklist(), engine),
-  updatedAt: null, updatedBy: null, completedAt: null, completedBy: null,
+  id: null,
+  engineId,
+  entries: emptyChecklist(),
+  evaluation: evaluateChecklist(emptyChecklist(), engine),
+  updatedAt: null,
+  updatedBy: null,
+  completedAt: null,
+  completedBy: null,
 };
-const verdictOf = (region: string) => within(screen.getByRole('region', { name: region })).getAllByText(/^(Pass|Fail|Open|Not applicable)$/)[0].closest('[data-verdict]')!.getAttribute('data-verdict');
+const verdictOf = (region: string) =>
+  within(screen.getByRole('region', { name: region }))
+    .getAllByText(/^(Pass|Fail|Open|Not applicable)$/)[0]
+    .closest('[data-verdict]')!
+    .getAttribute('data-verdict');
 
 describe('ChecklistForm', () => {
   it('judges the tachometer as the figures are typed', async () => {
@@ -36,29 +52,49 @@ describe('ChecklistForm', () => {
     await user.type(screen.getByLabelText('Measured frequency (Hz)'), '300');
     await user.type(screen.getByLabelText('Helm tachometer showed (RPM)'), '3150');
     expect(verdictOf('Tachometer calibration')).toBe('fail');
-    expect(screen.getByText('The tachometer reads +5.0 % off the true speed; it should be within ±3 %.')).toBeInTheDocument();
+    expect(
+      screen.getByText('The tachometer reads +5.0 % off the true speed; it should be within ±3 %.'),
+    ).toBeInTheDocument();
   });
 
   it('sends numbers and lists what stops completion, item by item', async () => {
     const completionProblems = [
-      { field: 'charging', message: 'Charging voltage at cruising RPM: not finished. Choose the battery chemistry.' },
-      { field: 'checks.killSwitch', message: 'Kill switch and lanyard: not finished. Not checked yet.' },
+      {
+        field: 'charging',
+        message: 'Charging voltage at cruising RPM: not finished. Choose the battery chemistry.',
+      },
+      {
+        field: 'checks.killSwitch',
+        message: 'Kill switch and lanyard: not finished. Not checked yet.',
+      },
     ];
     const { calls } = stubFetch({
-      [`POST /api/engines/${engineId}/checklist/complete`]: problem(400, 'The request has invalid fields', 'The checklist cannot be completed yet: 2 items need attention.', completionProblems),
+      [`POST /api/engines/${engineId}/checklist/complete`]: problem(
+        400,
+        'The request has invalid fields',
+        'The checklist cannot be completed yet: 2 items need attention.',
+        completionProblems,
+      ),
     });
     const user = userEvent.setup();
     renderPage(<ChecklistForm checklist={unsaved} engine={engine} />);
 
     await user.type(screen.getByLabelText('Voltage at the battery (V)'), '14,4');
-    await user.click(within(screen.getByRole('radiogroup', { name: 'Steering' })).getByText('Pass'));
+    await user.click(
+      within(screen.getByRole('radiogroup', { name: 'Steering' })).getByText('Pass'),
+    );
     await user.click(screen.getByRole('button', { name: 'Complete checklist' }));
 
     const alert = await screen.findByRole('alert');
     expect(alert).toHaveTextContent('Not completed yet');
-    expect(alert).toHaveTextContent('Charging voltage at cruising RPM: not finished. Choose the battery chemistry.');
+    expect(alert).toHaveTextContent(
+      'Charging voltage at cruising RPM: not finished. Choose the battery chemistry.',
+    );
     expect(alert).toHaveTextContent('Kill switch and lanyard: not finished.');
-    expect(calls[0].body).toMatchObject({ charging: { measuredV: 14.4, chemistry: null }, checks: { steering: { result: 'pass' }, leaks: { result: null } } });
+    expect(calls[0].body).toMatchObject({
+      charging: { measuredV: 14.4, chemistry: null },
+      checks: { steering: { result: 'pass' }, leaks: { result: null } },
+    });
   });
 
   it('names a measured value that is not a number', async () => {

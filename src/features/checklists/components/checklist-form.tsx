@@ -1,7 +1,11 @@
 import { useMemo, useState } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { ChecklistInputSchema, type ChecklistFormInput, type ChecklistInput } from '../../../../shared/checklists/checklist.schema';
+import {
+  ChecklistInputSchema,
+  type ChecklistFormInput,
+  type ChecklistInput,
+} from '../../../../shared/checklists/checklist.schema';
 import type { ChecklistView } from '../../../../shared/checklists/checklist-view';
 import { evaluateChecklist } from '../../../../shared/checklists/evaluate-checklist';
 import type { ChecklistEngine } from '../../../../shared/checklists/evaluation';
@@ -15,14 +19,32 @@ import { useCompleteChecklist, useSaveChecklist } from '../api';
 import { liveEntries } from '../form-values';
 import { CheckItems } from './check-items';
 import { ChecklistSummaryBar } from './checklist-summary';
-import { ChargingFields, FullThrottleFields, IdleFields, TachometerFields } from './measured-fields';
+import {
+  ChargingFields,
+  FullThrottleFields,
+  IdleFields,
+  TachometerFields,
+} from './measured-fields';
 import { MeasuredItem } from './measured-item';
 
 const FIELD_PATHS = [
-  'tachometer.measuredHz', 'tachometer.referenceRpm', 'tachometer.tachReadingRpm', 'tachometer.note',
-  'charging.chemistry', 'charging.measuredV', 'charging.batteryTemperatureC', 'charging.atRpm', 'charging.note',
-  'idleInGear.idleRpm', 'idleInGear.specMinRpm', 'idleInGear.specMaxRpm', 'idleInGear.note',
-  'fullThrottle.rpm', 'fullThrottle.speedKn', 'fullThrottle.note', 'notes',
+  'tachometer.measuredHz',
+  'tachometer.referenceRpm',
+  'tachometer.tachReadingRpm',
+  'tachometer.note',
+  'charging.chemistry',
+  'charging.measuredV',
+  'charging.batteryTemperatureC',
+  'charging.atRpm',
+  'charging.note',
+  'idleInGear.idleRpm',
+  'idleInGear.specMinRpm',
+  'idleInGear.specMaxRpm',
+  'idleInGear.note',
+  'fullThrottle.rpm',
+  'fullThrottle.speedKn',
+  'fullThrottle.note',
+  'notes',
 ] as const satisfies readonly Path<ChecklistFormInput>[];
 
 interface ChecklistFormProps {
@@ -39,7 +61,11 @@ export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormPro
   const [refusals, setRefusals] = useState<string[]>([]);
   const [notice, setNotice] = useState<string | null>(null);
   const completed = Boolean(checklist.completedAt);
-  const { register, control, handleSubmit, setError, reset, formState } = useForm<ChecklistFormInput, unknown, ChecklistInput>({
+  const { register, control, handleSubmit, setError, reset, formState } = useForm<
+    ChecklistFormInput,
+    unknown,
+    ChecklistInput
+  >({
     resolver: zodResolver(ChecklistInputSchema),
     defaultValues: checklist.entries,
   });
@@ -53,52 +79,98 @@ export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormPro
 
   const onError = (error: unknown) => {
     const leftOver = applyServerFieldErrors(error, setError, FIELD_PATHS);
-    setRefusals(leftOver.length ? leftOver : isApiError(error) && error.fieldErrors.length ? [] : [errorMessage(error)]);
+    setRefusals(
+      leftOver.length
+        ? leftOver
+        : isApiError(error) && error.fieldErrors.length
+          ? []
+          : [errorMessage(error)],
+    );
   };
   const send = (action: typeof save, done: string) =>
     handleSubmit((input) => {
       setRefusals([]);
       setNotice(null);
-      action.mutate(input, { onSuccess: ({ checklist: stored }) => { reset(stored.entries); setNotice(done); }, onError });
+      action.mutate(input, {
+        onSuccess: ({ checklist: stored }) => {
+          reset(stored.entries);
+          setNotice(done);
+        },
+        onError,
+      });
     });
-  const onSave = send(save, 'Saved. The checklist can be finished later, on this or another device.');
+  const onSave = send(
+    save,
+    'Saved. The checklist can be finished later, on this or another device.',
+  );
   const onComplete = send(complete, 'Checklist completed.');
 
   return (
-    <form noValidate onSubmit={onSave} className="flex flex-col gap-5" aria-label="Commissioning checklist">
+    <form
+      noValidate
+      onSubmit={onSave}
+      className="flex flex-col gap-5"
+      aria-label="Commissioning checklist"
+    >
       <ChecklistSummaryBar summary={evaluation.summary} />
       {completed && (
         <p className="rounded-md border-4 border-ink p-3 font-bold">
-          Completed by {checklist.completedBy?.name} on {formatDate(checklist.completedAt!)}. It is kept as the record of the handover.
+          Completed by {checklist.completedBy?.name} on {formatDate(checklist.completedAt!)}. It is
+          kept as the record of the handover.
         </p>
       )}
       <h2 className="text-xl font-bold">Measured at handover</h2>
       <MeasuredItem id="tachometer" evaluation={byId.get('tachometer')!} {...fields}>
         <TachometerFields {...fields} hasSignal={signalSourceOf(engine) !== null} />
       </MeasuredItem>
-      <MeasuredItem id="charging" evaluation={byId.get('charging')!} {...fields}><ChargingFields {...fields} /></MeasuredItem>
-      <MeasuredItem id="idleInGear" evaluation={byId.get('idleInGear')!} {...fields}><IdleFields {...fields} /></MeasuredItem>
-      <MeasuredItem id="fullThrottle" evaluation={byId.get('fullThrottle')!} {...fields}><FullThrottleFields {...fields} /></MeasuredItem>
+      <MeasuredItem id="charging" evaluation={byId.get('charging')!} {...fields}>
+        <ChargingFields {...fields} />
+      </MeasuredItem>
+      <MeasuredItem id="idleInGear" evaluation={byId.get('idleInGear')!} {...fields}>
+        <IdleFields {...fields} />
+      </MeasuredItem>
+      <MeasuredItem id="fullThrottle" evaluation={byId.get('fullThrottle')!} {...fields}>
+        <FullThrottleFields {...fields} />
+      </MeasuredItem>
       <h2 className="text-xl font-bold">Rigging and safety</h2>
       <CheckItems {...fields} evaluations={evaluation.items} />
       <label className="flex flex-col gap-1 font-semibold">
         Notes for the record
-        <textarea rows={3} disabled={completed} className="rounded-md border-2 border-line bg-surface p-3 font-normal text-ink" {...register('notes')} />
+        <textarea
+          rows={3}
+          disabled={completed}
+          className="rounded-md border-2 border-line bg-surface p-3 font-normal text-ink"
+          {...register('notes')}
+        />
       </label>
       {refusals.length > 0 && (
         <Alert title={complete.isError ? 'Not completed yet' : 'Not saved'}>
-          <ul className="list-disc pl-5">{refusals.map((r) => <li key={r}>{r}</li>)}</ul>
+          <ul className="list-disc pl-5">
+            {refusals.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
         </Alert>
       )}
-      {notice && <p role="status" className="font-semibold">{notice}</p>}
+      {notice && (
+        <p role="status" className="font-semibold">
+          {notice}
+        </p>
+      )}
       {!completed && (
         <div className="flex flex-wrap gap-3">
-          <Button type="submit" variant="secondary" pending={save.isPending} pendingLabel="Saving…">Save for later</Button>
-          <Button onClick={onComplete} pending={complete.isPending} pendingLabel="Completing…">Complete checklist</Button>
+          <Button type="submit" variant="secondary" pending={save.isPending} pendingLabel="Saving…">
+            Save for later
+          </Button>
+          <Button onClick={onComplete} pending={complete.isPending} pendingLabel="Completing…">
+            Complete checklist
+          </Button>
         </div>
       )}
       {checklist.updatedBy && !completed && (
-        <p className="text-sm text-muted">Last saved by {checklist.updatedBy.name}, {formatDate(checklist.updatedAt!)}.</p>
+        <p className="text-sm text-muted">
+          Last saved by {checklist.updatedBy.name}, {formatDate(checklist.updatedAt!)}.
+        </p>
       )}
     </form>
   );

@@ -11,17 +11,36 @@ const LOOK: Record<ItemVerdict, { word: string; mark: string; frame: string }> =
   pass: { word: 'Pass', mark: '✓', frame: 'border-ink bg-ink text-paper' },
   fail: { word: 'Fail', mark: '✕', frame: 'border-danger bg-surface text-ink' },
   open: { word: 'Open', mark: '', frame: 'border-dashed border-ink bg-surface text-ink' },
-  'not-applicable': { word: 'Not applicable', mark: '–', frame: 'border-line bg-surface text-muted' },
+  'not-applicable': {
+    word: 'Not applicable',
+    mark: '–',
+    frame: 'border-line bg-surface text-muted',
+  },
 };
 
-const HATCH: CSSProperties = { backgroundImage: 'repeating-linear-gradient(135deg, var(--rs-danger) 0 3px, transparent 3px 7px)' };
+const HATCH: CSSProperties = {
+  backgroundImage: 'repeating-linear-gradient(135deg, var(--rs-danger) 0 3px, transparent 3px 7px)',
+};
 
 export function VerdictPill({ verdict, className }: { verdict: ItemVerdict; className?: string }) {
   const { word, mark, frame } = LOOK[verdict];
   return (
-    <span data-verdict={verdict} className={cx('inline-flex shrink-0 items-center gap-1.5 rounded-full border-2 py-0.5 pl-1 pr-3 text-sm font-bold', frame, className)}>
-      <span aria-hidden="true" className={cx('flex size-5 items-center justify-center rounded-full border-2 border-current text-xs', verdict === 'open' && 'border-dashed')}
-        style={verdict === 'fail' ? HATCH : undefined}>
+    <span
+      data-verdict={verdict}
+      className={cx(
+        'inline-flex shrink-0 items-center gap-1.5 rounded-full border-2 py-0.5 pl-1 pr-3 text-sm font-bold',
+        frame,
+        className,
+      )}
+    >
+      <span
+        aria-hidden="true"
+        className={cx(
+          'flex size-5 items-center justify-center rounded-full border-2 border-current text-xs',
+          verdict === 'open' && 'border-dashed',
+        )}
+        style={verdict === 'fail' ? HATCH : undefined}
+      >
         {verdict === 'fail' ? '' : mark}
       </span>
       {verdict === 'fail' && <span aria-hidden="true">{mark}</span>}
@@ -36,7 +55,9 @@ export function ItemOutcome({ judgement, id }: { judgement: ItemJudgement; id?: 
     <div id={id} aria-live="polite" className="flex flex-col gap-2">
       {judgement.reasons.length > 0 && (
         <ul className="list-disc space-y-1 pl-5">
-          {judgement.reasons.map((reason) => <li key={reason}>{reason}</li>)}
+          {judgement.reasons.map((reason) => (
+            <li key={reason}>{reason}</li>
+          ))}
         </ul>
       )}
       {judgement.figures.length > 0 && (

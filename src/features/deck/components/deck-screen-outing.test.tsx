@@ -18,13 +18,21 @@ describe('the deck run screen, during an outing', () => {
     await db.vessels.put(testVessel([port]));
     await startOuting(db, VESSEL_ID, [refOf(port)], startedAt);
     // The dock run needs 10 minutes in band at idle (built-in program, common practice).
-    await store(port, [{ kind: 'reading', at: startedAt, phaseId: 'dock-run', rpm: 800, throttle: 'idle' } as never]);
+    await store(port, [
+      { kind: 'reading', at: startedAt, phaseId: 'dock-run', rpm: 800, throttle: 'idle' } as never,
+    ]);
     const user = userEvent.setup();
     show('technician');
-    expect(await screen.findByText('Phase done. Move on to \u201cBelow half throttle, changing speed\u201d?')).toBeInTheDocument();
+    expect(
+      await screen.findByText(
+        'Phase done. Move on to \u201cBelow half throttle, changing speed\u201d?',
+      ),
+    ).toBeInTheDocument();
     await user.click(screen.getByText('All phases (3)'));
     const phases = screen.getByRole('list', { name: 'Port: phases' });
-    expect(within(phases).getAllByRole('listitem')[0]).toHaveTextContent('First run at the dock · workshop · done');
+    expect(within(phases).getAllByRole('listitem')[0]).toHaveTextContent(
+      'First run at the dock · workshop · done',
+    );
     await user.click(screen.getByRole('button', { name: 'Move on' }));
     expect(await screen.findByText('Phase 2 of 3')).toBeInTheDocument();
     const advance = (await db.events.toArray()).find((e) => e.kind === 'phase-advance');
@@ -41,7 +49,9 @@ describe('the deck run screen, during an outing', () => {
     await user.type(speed, '95');
     await user.type(screen.getByRole('textbox', { name: 'Fuel flow (L/h)' }), '18,5');
     await user.click(screen.getByRole('button', { name: 'Keep details' }));
-    expect(await screen.findByText('The speed over ground (speedKn) must be at most 80 kn.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('The speed over ground (speedKn) must be at most 80 kn.'),
+    ).toBeInTheDocument();
     await user.clear(speed);
     await user.type(speed, '21.4');
     await user.click(screen.getByRole('button', { name: 'Keep details' }));
@@ -51,7 +61,12 @@ describe('the deck run screen, during an outing', () => {
     await user.click(screen.getByRole('button', { name: 'Log reading' }));
     await waitFor(async () => {
       const [reading] = (await db.events.toArray()).filter((e) => e.kind === 'reading');
-      expect(reading?.event).toMatchObject({ rpm: 2600, speedKn: 21.4, speedSource: 'typed', fuelLph: 18.5 });
+      expect(reading?.event).toMatchObject({
+        rpm: 2600,
+        speedKn: 21.4,
+        speedSource: 'typed',
+        fuelLph: 18.5,
+      });
     });
   });
 
@@ -69,4 +84,3 @@ describe('the deck run screen, during an outing', () => {
     expect(kinds).toEqual(['session-start', 'phase-advance', 'session-stop', 'session-start']);
   });
 });
-

@@ -14,7 +14,17 @@ export async function store(run: RunRecord, events: Array<Omit<RunEvent, 'id' | 
   await db.events.bulkPut(
     events.map((e) => {
       const event = { ...e, id: eventId(), engineId: run.engine.id } as RunEvent;
-      return { id: event.id, runId: run.id, engineId: run.engine.id, at: event.at, kind: event.kind, event, origin: 'device' as const, sync: 'pending' as const, createdAt: event.at };
+      return {
+        id: event.id,
+        runId: run.id,
+        engineId: run.engine.id,
+        at: event.at,
+        kind: event.kind,
+        event,
+        origin: 'device' as const,
+        sync: 'pending' as const,
+        createdAt: event.at,
+      };
     }),
   );
 }
@@ -25,13 +35,25 @@ export async function outingOn(runs: RunRecord[], minutesAgo = 5) {
   await db.runs.bulkPut(runs);
   await db.vessels.put(testVessel(runs));
   await startOuting(db, VESSEL_ID, runs.map(refOf), startedAt);
-  for (const run of runs) await store(run, [{ kind: 'phase-advance', at: startedAt + 1, phaseId: 'below-half' } as never]);
+  for (const run of runs)
+    await store(run, [
+      { kind: 'phase-advance', at: startedAt + 1, phaseId: 'below-half' } as never,
+    ]);
   return startedAt;
 }
 
-export const readingAt = (at: number, rpm: number, throttle = 'half') => ({ kind: 'reading', at, phaseId: 'below-half', rpm, throttle }) as never;
+export const readingAt = (at: number, rpm: number, throttle = 'half') =>
+  ({ kind: 'reading', at, phaseId: 'below-half', rpm, throttle }) as never;
 
 export const clearDevice = () =>
-  Promise.all([db.events.clear(), db.runs.clear(), db.vessels.clear(), db.outings.clear(), db.photos.clear(), db.runPatches.clear()]);
+  Promise.all([
+    db.events.clear(),
+    db.runs.clear(),
+    db.vessels.clear(),
+    db.outings.clear(),
+    db.photos.clear(),
+    db.runPatches.clear(),
+  ]);
 
-export const showDeck = (role: 'skipper' | 'technician' = 'skipper') => renderPage(<DeckScreen vesselId={VESSEL_ID} role={role} />);
+export const showDeck = (role: 'skipper' | 'technician' = 'skipper') =>
+  renderPage(<DeckScreen vesselId={VESSEL_ID} role={role} />);

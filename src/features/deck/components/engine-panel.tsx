@@ -1,7 +1,14 @@
 import { Button } from '../../../components/ui/button';
 import { cx } from '../../../components/ui/cx';
 import type { EngineSnapshot } from '../engine-snapshot';
-import { ceilingText, clockText, clockWords, rpmRangeText, shortSpan, THROTTLE_LABEL } from '../format';
+import {
+  ceilingText,
+  clockText,
+  clockWords,
+  rpmRangeText,
+  shortSpan,
+  THROTTLE_LABEL,
+} from '../format';
 import { AlertList } from './alert-list';
 import { BandState, type DeckState } from './band-state';
 import { PhaseList } from './phase-list';
@@ -25,12 +32,24 @@ interface EnginePanelProps {
 }
 
 /** One engine at a glance: phase, band, the big state, time in band done and left, progress. */
-export function EnginePanel({ snapshot, label, role, onAdvance, advancing, wide = false }: EnginePanelProps) {
+export function EnginePanel({
+  snapshot,
+  label,
+  role,
+  onAdvance,
+  advancing,
+  wide = false,
+}: EnginePanelProps) {
   const { live, phase, phases } = snapshot;
   const headingId = `engine-${snapshot.engineId}`;
   return (
-    <section aria-labelledby={headingId} className="flex min-w-0 flex-col gap-2 rounded-lg border-2 border-line bg-surface p-2 sm:p-4">
-      <h2 id={headingId} className="truncate text-lg font-extrabold uppercase tracking-wide">{label}</h2>
+    <section
+      aria-labelledby={headingId}
+      className="flex min-w-0 flex-col gap-2 rounded-lg border-2 border-line bg-surface p-2 sm:p-4"
+    >
+      <h2 id={headingId} className="truncate text-lg font-extrabold uppercase tracking-wide">
+        {label}
+      </h2>
       {phase && (
         <div>
           <p className="text-sm text-muted">
@@ -48,20 +67,30 @@ export function EnginePanel({ snapshot, label, role, onAdvance, advancing, wide 
       <AlertList alerts={snapshot.alerts} reminders={snapshot.reminders} />
       <dl className="flex flex-col">
         <dt className="text-sm font-semibold">Time in band</dt>
-        <dd className={cx('figures font-extrabold leading-none', wide ? 'text-6xl' : 'text-[2rem] sm:text-5xl')}
-          aria-label={clockWords(live.phaseDoneMs)} data-testid="time-in-band">
+        <dd
+          className={cx(
+            'figures font-extrabold leading-none',
+            wide ? 'text-6xl' : 'text-[2rem] sm:text-5xl',
+          )}
+          aria-label={clockWords(live.phaseDoneMs)}
+          data-testid="time-in-band"
+        >
           {clockText(live.phaseDoneMs)}
         </dd>
         <div className="mt-1 flex items-baseline justify-between gap-2">
           <dt className="text-sm font-semibold">Left</dt>
-          <dd className={cx('figures font-bold', wide ? 'text-3xl' : 'text-xl sm:text-3xl')} aria-label={clockWords(live.phaseLeftMs)}>
+          <dd
+            className={cx('figures font-bold', wide ? 'text-3xl' : 'text-xl sm:text-3xl')}
+            aria-label={clockWords(live.phaseLeftMs)}
+          >
             {clockText(live.phaseLeftMs, 'up')}
           </dd>
         </div>
       </dl>
       <ProgressBar share={live.phaseProgress} label={`${label}: this phase`} />
       <p className="text-sm">
-        Overall <span className="figures font-bold">{Math.floor(live.overallProgress * 100)} %</span>
+        Overall{' '}
+        <span className="figures font-bold">{Math.floor(live.overallProgress * 100)} %</span>
       </p>
       <LastReading snapshot={snapshot} />
       <NextPhase snapshot={snapshot} role={role} onAdvance={onAdvance} advancing={advancing} />
@@ -73,29 +102,51 @@ export function EnginePanel({ snapshot, label, role, onAdvance, advancing, wide 
 function LastReading({ snapshot }: { snapshot: EngineSnapshot }) {
   const { live, lastReading, waitingForWorkshop } = snapshot;
   if (waitingForWorkshop) {
-    return <p className="text-sm">The workshop runs this phase at the dock. It shows as done here once they have logged it.</p>;
+    return (
+      <p className="text-sm">
+        The workshop runs this phase at the dock. It shows as done here once they have logged it.
+      </p>
+    );
   }
-  if (!lastReading) return <p className="text-sm">No reading yet: time counts from the first one.</p>;
+  if (!lastReading)
+    return <p className="text-sm">No reading yet: time counts from the first one.</p>;
   const held = live.heldReading;
   return (
     <p className="text-sm">
-      Last <span className="figures font-bold">{lastReading.rpm} rpm</span> at {THROTTLE_LABEL[lastReading.throttle]}
+      Last <span className="figures font-bold">{lastReading.rpm} rpm</span> at{' '}
+      {THROTTLE_LABEL[lastReading.throttle]}
       {held ? ` · counts ${shortSpan(held.holdEndsMs - live.nowMs)} more` : ' · not counting now'}
     </p>
   );
 }
 
-function NextPhase({ snapshot, role, onAdvance, advancing }: Omit<EnginePanelProps, 'label' | 'wide'>) {
+function NextPhase({
+  snapshot,
+  role,
+  onAdvance,
+  advancing,
+}: Omit<EnginePanelProps, 'label' | 'wide'>) {
   const { phaseComplete, nextPhase } = snapshot;
   if (!phaseComplete) return null;
-  if (!nextPhase) return <p className="rounded-md border-2 border-ink p-2 font-semibold">Every phase has its time in band. The workshop can now review the run.</p>;
+  if (!nextPhase)
+    return (
+      <p className="rounded-md border-2 border-ink p-2 font-semibold">
+        Every phase has its time in band. The workshop can now review the run.
+      </p>
+    );
   if (nextPhase.performedBy === 'workshop' && role === 'skipper') {
-    return <p className="rounded-md border-2 border-ink p-2 font-semibold">This phase is done. The next one, &ldquo;{nextPhase.name}&rdquo;, is run by the workshop.</p>;
+    return (
+      <p className="rounded-md border-2 border-ink p-2 font-semibold">
+        This phase is done. The next one, &ldquo;{nextPhase.name}&rdquo;, is run by the workshop.
+      </p>
+    );
   }
   return (
     <div className="flex flex-col gap-2 rounded-md border-2 border-ink p-2">
       <p className="font-semibold">Phase done. Move on to &ldquo;{nextPhase.name}&rdquo;?</p>
-      <Button onClick={() => onAdvance(nextPhase.id)} pending={advancing} pendingLabel="Moving on…">Move on</Button>
+      <Button onClick={() => onAdvance(nextPhase.id)} pending={advancing} pendingLabel="Moving on…">
+        Move on
+      </Button>
     </div>
   );
 }

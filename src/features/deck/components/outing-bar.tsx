@@ -7,8 +7,10 @@ import { clockText } from '../format';
 const WAKE_WORDS: Record<WakeLockStatus, string | null> = {
   on: 'Screen kept awake.',
   off: null,
-  refused: 'This device would not keep the screen awake: set a longer screen timeout, or tap the screen now and then.',
-  unsupported: 'This browser cannot keep the screen awake: set a longer screen timeout while you run.',
+  refused:
+    'This device would not keep the screen awake: set a longer screen timeout, or tap the screen now and then.',
+  unsupported:
+    'This browser cannot keep the screen awake: set a longer screen timeout while you run.',
 };
 
 interface OutingBarProps {
@@ -24,27 +26,52 @@ export function OutingBar({ outing, nowMs, wakeLock, onChange, pending }: Outing
   const [ending, setEnding] = useState(false);
   const paused = outing.pausedAt !== null;
   return (
-    <section aria-label="Outing" className="flex flex-col gap-2 rounded-lg border-2 border-ink bg-surface p-3">
+    <section
+      aria-label="Outing"
+      className="flex flex-col gap-2 rounded-lg border-2 border-ink bg-surface p-3"
+    >
       <p className="flex flex-wrap items-baseline gap-x-2 font-bold">
         <span>{paused ? 'Outing paused' : 'Outing under way'}</span>
         <span className="figures">{clockText(nowMs - outing.startedAt)}</span>
       </p>
       <div className="grid grid-cols-2 gap-2">
         {paused ? (
-          <Button onClick={() => onChange('resume')} pending={pending}>Resume</Button>
+          <Button onClick={() => onChange('resume')} pending={pending}>
+            Resume
+          </Button>
         ) : (
-          <Button variant="secondary" onClick={() => onChange('pause')} pending={pending}>Pause</Button>
+          <Button variant="secondary" onClick={() => onChange('pause')} pending={pending}>
+            Pause
+          </Button>
         )}
-        <Button variant="secondary" onClick={() => setEnding(true)} disabled={ending}>End outing</Button>
+        <Button variant="secondary" onClick={() => setEnding(true)} disabled={ending}>
+          End outing
+        </Button>
       </div>
       {paused && <p className="text-sm">Engine time does not count while paused.</p>}
-      {WAKE_WORDS[wakeLock] && <p className="text-sm" role={wakeLock === 'on' ? undefined : 'status'}>{WAKE_WORDS[wakeLock]}</p>}
+      {WAKE_WORDS[wakeLock] && (
+        <p className="text-sm" role={wakeLock === 'on' ? undefined : 'status'}>
+          {WAKE_WORDS[wakeLock]}
+        </p>
+      )}
       {ending && (
         <div role="alert" className="flex flex-col gap-2 rounded-md border-2 border-ink p-2">
-          <p className="font-semibold">End the outing? Engine time stops counting for every engine in it.</p>
+          <p className="font-semibold">
+            End the outing? Engine time stops counting for every engine in it.
+          </p>
           <div className="flex gap-2">
-            <Button onClick={() => { setEnding(false); onChange('end'); }} pending={pending}>Yes, end it</Button>
-            <Button variant="secondary" onClick={() => setEnding(false)}>Keep going</Button>
+            <Button
+              onClick={() => {
+                setEnding(false);
+                onChange('end');
+              }}
+              pending={pending}
+            >
+              Yes, end it
+            </Button>
+            <Button variant="secondary" onClick={() => setEnding(false)}>
+              Keep going
+            </Button>
           </div>
         </div>
       )}

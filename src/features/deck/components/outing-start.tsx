@@ -32,27 +32,56 @@ export function OutingStart({ choices, onStart, pending, error }: OutingStartPro
     onStart(picked);
   };
 
-  const toggle = (runId: string, on: boolean) => setPicked((now) => (on ? [...now, runId] : now.filter((id) => id !== runId)));
+  const toggle = (runId: string, on: boolean) =>
+    setPicked((now) => (on ? [...now, runId] : now.filter((id) => id !== runId)));
   return (
-    <section aria-labelledby="outing-start" className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3">
-      <h2 id="outing-start" className="text-xl font-bold">Start an outing</h2>
-      {choices.length > 1 && <p>Twin engines are usually run together: both are chosen. Untick one to run it alone.</p>}
+    <section
+      aria-labelledby="outing-start"
+      className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3"
+    >
+      <h2 id="outing-start" className="text-xl font-bold">
+        Start an outing
+      </h2>
+      {choices.length > 1 && (
+        <p>Twin engines are usually run together: both are chosen. Untick one to run it alone.</p>
+      )}
       <fieldset className="flex flex-col">
         <legend className="font-semibold">Engines</legend>
         {choices.map((choice) =>
           choice.blocked === null ? (
-            <Checkbox key={choice.runId} checked={picked.includes(choice.runId)} onChange={(e) => toggle(choice.runId, e.target.checked)}>
+            <Checkbox
+              key={choice.runId}
+              checked={picked.includes(choice.runId)}
+              onChange={(e) => toggle(choice.runId, e.target.checked)}
+            >
               {choice.label}
             </Checkbox>
           ) : (
-            <p key={choice.runId} className="flex min-h-touch items-center text-muted">{choice.label}: {choice.blocked}</p>
+            <p key={choice.runId} className="flex min-h-touch items-center text-muted">
+              {choice.label}: {choice.blocked}
+            </p>
           ),
         )}
       </fieldset>
       <CautionCard />
-      <Checkbox checked={read} onChange={(e) => setRead(e.target.checked)}>I have read the cautions</Checkbox>
-      {(problem ?? error) && <p role="alert" className="font-semibold text-danger"><span aria-hidden="true">⚠ </span>{problem ?? error}</p>}
-      <Button className="min-h-16 text-xl" onClick={start} pending={pending} pendingLabel="Starting…" disabled={open.length === 0}>Start outing</Button>
+      <Checkbox checked={read} onChange={(e) => setRead(e.target.checked)}>
+        I have read the cautions
+      </Checkbox>
+      {(problem ?? error) && (
+        <p role="alert" className="font-semibold text-danger">
+          <span aria-hidden="true">⚠ </span>
+          {problem ?? error}
+        </p>
+      )}
+      <Button
+        className="min-h-16 text-xl"
+        onClick={start}
+        pending={pending}
+        pendingLabel="Starting…"
+        disabled={open.length === 0}
+      >
+        Start outing
+      </Button>
     </section>
   );
 }

@@ -12,11 +12,15 @@ const STATUS: Record<PhaseStatus, { mark: string; word: string }> = {
 export function PhaseList({ rows, label }: { rows: PhaseRow[]; label: string }) {
   return (
     <details className="text-sm">
-      <summary className="flex min-h-touch cursor-pointer items-center font-semibold">All phases ({rows.length})</summary>
+      <summary className="flex min-h-touch cursor-pointer items-center font-semibold">
+        All phases ({rows.length})
+      </summary>
       <ol aria-label={`${label}: phases`} className="flex flex-col gap-1">
         {rows.map(({ phase, status, progress }) => (
           <li key={phase.id} className="flex gap-2">
-            <span aria-hidden="true" className="w-4 shrink-0 text-center">{STATUS[status].mark}</span>
+            <span aria-hidden="true" className="w-4 shrink-0 text-center">
+              {STATUS[status].mark}
+            </span>
             <span>
               <span className="font-semibold">{phase.name}</span>
               {' · '}

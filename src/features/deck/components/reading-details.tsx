@@ -7,7 +7,12 @@ import { TextField } from '../../../components/ui/field';
 import type { PhotoInput } from '../deck-store';
 import type { GpsFix } from '../device';
 import { PhotoError, preparePhoto } from '../photo';
-import { ReadingDetailsSchema, type ReadingDetails, type ReadingDetailsInput, type ReadingDetailsValues } from '../reading-details.schema';
+import {
+  ReadingDetailsSchema,
+  type ReadingDetails,
+  type ReadingDetailsInput,
+  type ReadingDetailsValues,
+} from '../reading-details.schema';
 
 interface ReadingDetailsFormProps {
   initial: ReadingDetailsInput;
@@ -28,11 +33,23 @@ const GPS_WORDS: Record<GpsFix['status'], string> = {
 };
 
 /** Speed, fuel flow, hour meter, note and photo: one tap away from the pad, kept for the next reading. */
-export default function ReadingDetailsForm({ initial, initialPhoto, gps, gpsOn, onGpsChange, onDone, onCancel }: ReadingDetailsFormProps) {
+export default function ReadingDetailsForm({
+  initial,
+  initialPhoto,
+  gps,
+  gpsOn,
+  onGpsChange,
+  onDone,
+  onCancel,
+}: ReadingDetailsFormProps) {
   const [photo, setPhoto] = useState<PhotoInput | null>(initialPhoto);
   const [photoError, setPhotoError] = useState<string | null>(null);
   const [photoBusy, setPhotoBusy] = useState(false);
-  const { register, handleSubmit, formState, getValues } = useForm<ReadingDetailsInput, unknown, ReadingDetailsValues>({
+  const { register, handleSubmit, formState, getValues } = useForm<
+    ReadingDetailsInput,
+    unknown,
+    ReadingDetailsValues
+  >({
     resolver: zodResolver(ReadingDetailsSchema),
     defaultValues: initial,
   });
@@ -51,31 +68,86 @@ export default function ReadingDetailsForm({ initial, initialPhoto, gps, gpsOn, 
     }
   };
 
-  const gpsSpeed = gpsOn && gps.speedKn !== null ? `${gps.speedKn} kn from GPS` : GPS_WORDS[gps.status];
+  const gpsSpeed =
+    gpsOn && gps.speedKn !== null ? `${gps.speedKn} kn from GPS` : GPS_WORDS[gps.status];
   return (
-    <form noValidate aria-label="Reading details" className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3"
-      onSubmit={handleSubmit((values) => onDone({ values, input: getValues(), photo }))}>
-      <Checkbox checked={gpsOn} onChange={(e) => onGpsChange(e.target.checked)}>Speed over ground from GPS</Checkbox>
+    <form
+      noValidate
+      aria-label="Reading details"
+      className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3"
+      onSubmit={handleSubmit((values) => onDone({ values, input: getValues(), photo }))}
+    >
+      <Checkbox checked={gpsOn} onChange={(e) => onGpsChange(e.target.checked)}>
+        Speed over ground from GPS
+      </Checkbox>
       {gpsOn ? (
-        <p className="text-sm" role="status">{gpsSpeed}</p>
+        <p className="text-sm" role="status">
+          {gpsSpeed}
+        </p>
       ) : (
-        <TextField label="Speed over ground (kn)" inputMode="decimal" autoComplete="off" error={formState.errors.speedKn?.message} {...register('speedKn')} />
+        <TextField
+          label="Speed over ground (kn)"
+          inputMode="decimal"
+          autoComplete="off"
+          error={formState.errors.speedKn?.message}
+          {...register('speedKn')}
+        />
       )}
-      <TextField label="Fuel flow (L/h)" inputMode="decimal" autoComplete="off" error={formState.errors.fuelLph?.message} {...register('fuelLph')} />
-      <TextField label="Hour meter (h)" inputMode="decimal" autoComplete="off" error={formState.errors.hourMeter?.message} {...register('hourMeter')} />
-      <TextField label="Note" autoComplete="off" error={formState.errors.note?.message} {...register('note')} />
+      <TextField
+        label="Fuel flow (L/h)"
+        inputMode="decimal"
+        autoComplete="off"
+        error={formState.errors.fuelLph?.message}
+        {...register('fuelLph')}
+      />
+      <TextField
+        label="Hour meter (h)"
+        inputMode="decimal"
+        autoComplete="off"
+        error={formState.errors.hourMeter?.message}
+        {...register('hourMeter')}
+      />
+      <TextField
+        label="Note"
+        autoComplete="off"
+        error={formState.errors.note?.message}
+        {...register('note')}
+      />
       <label className="flex flex-col gap-1 font-semibold">
         Photo (hour meter, tachometer…)
-        <input type="file" accept="image/*" capture="environment" className="min-h-touch font-normal"
-          onChange={(e) => void choosePhoto(e.target.files?.[0])} aria-describedby={photoError ? 'photo-error' : undefined} />
+        <input
+          type="file"
+          accept="image/*"
+          capture="environment"
+          className="min-h-touch font-normal"
+          onChange={(e) => void choosePhoto(e.target.files?.[0])}
+          aria-describedby={photoError ? 'photo-error' : undefined}
+        />
       </label>
-      {photoBusy && <p role="status" className="text-sm">Making the photo smaller…</p>}
-      {photo && !photoBusy && <p className="text-sm">Photo ready: {photo.width}×{photo.height}, kept on this phone until it can be sent.</p>}
-      {photoError && <p id="photo-error" className="text-sm font-semibold text-danger"><span aria-hidden="true">⚠ </span>{photoError}</p>}
+      {photoBusy && (
+        <p role="status" className="text-sm">
+          Making the photo smaller…
+        </p>
+      )}
+      {photo && !photoBusy && (
+        <p className="text-sm">
+          Photo ready: {photo.width}×{photo.height}, kept on this phone until it can be sent.
+        </p>
+      )}
+      {photoError && (
+        <p id="photo-error" className="text-sm font-semibold text-danger">
+          <span aria-hidden="true">⚠ </span>
+          {photoError}
+        </p>
+      )}
       <p className="text-sm text-muted">These details go with the next reading you log.</p>
       <div className="flex gap-2">
-        <Button type="submit" disabled={photoBusy}>Keep details</Button>
-        <Button variant="secondary" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" disabled={photoBusy}>
+          Keep details
+        </Button>
+        <Button variant="secondary" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

@@ -13,27 +13,57 @@ export function AssignProgram({ engineId }: { engineId: string }) {
   const [programId, setProgramId] = useState('');
   const active = (programs.data ?? []).filter((program) => !program.retiredAt);
   const chosen = programId || active[0]?.id || '';
-  const fieldErrors = isApiError(assign.error) ? assign.error.fieldErrors.map((e) => e.message) : [];
-  const problemText = assign.error ? [errorMessage(assign.error), ...fieldErrors.filter((m) => m !== errorMessage(assign.error))] : [];
+  const fieldErrors = isApiError(assign.error)
+    ? assign.error.fieldErrors.map((e) => e.message)
+    : [];
+  const problemText = assign.error
+    ? [errorMessage(assign.error), ...fieldErrors.filter((m) => m !== errorMessage(assign.error))]
+    : [];
 
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm">
-        The program sets the phases the skipper runs. Check it against the engine maker&rsquo;s manual first: the manual comes first.
+        The program sets the phases the skipper runs. Check it against the engine maker&rsquo;s
+        manual first: the manual comes first.
       </p>
-      <SelectField label="Break-in program" value={chosen} disabled={programs.isPending} onChange={(event) => setProgramId(event.target.value)}>
+      <SelectField
+        label="Break-in program"
+        value={chosen}
+        disabled={programs.isPending}
+        onChange={(event) => setProgramId(event.target.value)}
+      >
         {programs.isPending && <option value="">Loading programs…</option>}
-        {active.map((program) => <option key={program.id} value={program.id}>{program.name}</option>)}
+        {active.map((program) => (
+          <option key={program.id} value={program.id}>
+            {program.name}
+          </option>
+        ))}
       </SelectField>
-      {programs.isError && <Alert title="Could not load the programs">{errorMessage(programs.error)}</Alert>}
-      <Button className="self-start" disabled={!chosen} pending={assign.isPending} pendingLabel="Assigning…"
-        onClick={() => assign.mutate({ engineId, programId: chosen })}>
+      {programs.isError && (
+        <Alert title="Could not load the programs">{errorMessage(programs.error)}</Alert>
+      )}
+      <Button
+        className="self-start"
+        disabled={!chosen}
+        pending={assign.isPending}
+        pendingLabel="Assigning…"
+        onClick={() => assign.mutate({ engineId, programId: chosen })}
+      >
         Assign program
       </Button>
-      {problemText.length > 0 && <Alert title="The program was not assigned">{problemText.map((m) => <p key={m}>{m}</p>)}</Alert>}
+      {problemText.length > 0 && (
+        <Alert title="The program was not assigned">
+          {problemText.map((m) => (
+            <p key={m}>{m}</p>
+          ))}
+        </Alert>
+      )}
       {assign.data && (
         <p role="status" className="font-semibold">
-          Run created. <Link to={`/runs/${assign.data.run.id}`} className="underline underline-offset-4">Open the run</Link>
+          Run created.{' '}
+          <Link to={`/runs/${assign.data.run.id}`} className="underline underline-offset-4">
+            Open the run
+          </Link>
         </p>
       )}
     </div>

@@ -17,15 +17,35 @@ export function BandFields({ index }: { index: number }) {
       </SelectField>
       {kind === 'absolute' ? (
         <div className="grid gap-3 sm:grid-cols-2">
-          <TextField label="Lowest rpm" inputMode="numeric" error={error('rpmMin')} {...register(`${base}.rpmMin`, numberOptions)} />
-          <TextField label="Highest rpm" inputMode="numeric" error={error('rpmMax')} {...register(`${base}.rpmMax`, numberOptions)} />
+          <TextField
+            label="Lowest rpm"
+            inputMode="numeric"
+            error={error('rpmMin')}
+            {...register(`${base}.rpmMin`, numberOptions)}
+          />
+          <TextField
+            label="Highest rpm"
+            inputMode="numeric"
+            error={error('rpmMax')}
+            {...register(`${base}.rpmMax`, numberOptions)}
+          />
         </div>
       ) : (
         <div className="grid gap-3 sm:grid-cols-2">
-          <TextField label="Lowest share" inputMode="decimal" hint="0.5 means half of rated rpm" error={error('shareMin')}
-            {...register(`${base}.shareMin`, numberOptions)} />
-          <TextField label="Highest share" inputMode="decimal" hint="1 means rated full-throttle rpm" error={error('shareMax')}
-            {...register(`${base}.shareMax`, numberOptions)} />
+          <TextField
+            label="Lowest share"
+            inputMode="decimal"
+            hint="0.5 means half of rated rpm"
+            error={error('shareMin')}
+            {...register(`${base}.shareMin`, numberOptions)}
+          />
+          <TextField
+            label="Highest share"
+            inputMode="decimal"
+            hint="1 means rated full-throttle rpm"
+            error={error('shareMax')}
+            {...register(`${base}.shareMax`, numberOptions)}
+          />
         </div>
       )}
     </fieldset>

@@ -31,25 +31,62 @@ export function PhaseFields({ index, count, onMove, onRemove }: PhaseFieldsProps
       <div className="flex flex-col gap-4">
         <TextField label="Phase name" error={error('name')} {...register(`${base}.name`)} />
         <div className="grid gap-3 sm:grid-cols-3">
-          <SelectField label="Performed by" error={error('performedBy')} {...register(`${base}.performedBy`)}>
+          <SelectField
+            label="Performed by"
+            error={error('performedBy')}
+            {...register(`${base}.performedBy`)}
+          >
             <option value="workshop">The workshop</option>
             <option value="skipper">The skipper</option>
           </SelectField>
-          <TextField label="Required minutes in band" inputMode="numeric" error={error('requiredMinutes')}
-            {...register(`${base}.requiredMinutes`, numberOptions)} />
-          <SelectField label="Throttle ceiling" error={error('throttleCeiling')} {...register(`${base}.throttleCeiling`)}>
-            {THROTTLE_CEILINGS.map((ceiling) => <option key={ceiling} value={ceiling}>{ceilingLabel[ceiling]}</option>)}
+          <TextField
+            label="Required minutes in band"
+            inputMode="numeric"
+            error={error('requiredMinutes')}
+            {...register(`${base}.requiredMinutes`, numberOptions)}
+          />
+          <SelectField
+            label="Throttle ceiling"
+            error={error('throttleCeiling')}
+            {...register(`${base}.throttleCeiling`)}
+          >
+            {THROTTLE_CEILINGS.map((ceiling) => (
+              <option key={ceiling} value={ceiling}>
+                {ceilingLabel[ceiling]}
+              </option>
+            ))}
           </SelectField>
         </div>
         <BandFields index={index} />
         <RulesFields index={index} />
         <Field label="Instructions" error={error('instructions')}>
-          {(control) => <textarea {...control} rows={3} className={`${controlClass} py-2`} {...register(`${base}.instructions`)} />}
+          {(control) => (
+            <textarea
+              {...control}
+              rows={3}
+              className={`${controlClass} py-2`}
+              {...register(`${base}.instructions`)}
+            />
+          )}
         </Field>
         <div className="flex flex-wrap gap-2">
-          <Button variant="secondary" disabled={index === 0} onClick={() => onMove(index, index - 1)}>Move up</Button>
-          <Button variant="secondary" disabled={index === count - 1} onClick={() => onMove(index, index + 1)}>Move down</Button>
-          <Button variant="secondary" disabled={count === 1} onClick={() => onRemove(index)}>Remove phase</Button>
+          <Button
+            variant="secondary"
+            disabled={index === 0}
+            onClick={() => onMove(index, index - 1)}
+          >
+            Move up
+          </Button>
+          <Button
+            variant="secondary"
+            disabled={index === count - 1}
+            onClick={() => onMove(index, index + 1)}
+          >
+            Move down
+          </Button>
+          <Button variant="secondary" disabled={count === 1} onClick={() => onRemove(index)}>
+            Remove phase
+          </Button>
         </div>
       </div>
     </Card>

@@ -21,27 +21,63 @@ const definition: Program = {
   notes: '',
   source: 'Common practice; the engine maker’s manual comes first.',
   phases: [
-    { id: 'p1', name: 'Dock run at idle', performedBy: 'workshop', requiredMinutes: 15, throttleCeiling: 'idle', // common practice
-      band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.2 }, rules: {}, instructions: 'Check the tell-tale stream.' },
-    { id: 'p2', name: 'Below half throttle', performedBy: 'skipper', requiredMinutes: 60, throttleCeiling: 'half', // common practice
-      band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.5 }, rules: { changeSpeedEveryMinutes: 15 }, instructions: 'Vary speed.' },
-    { id: 'p3', name: 'Up to three-quarter', performedBy: 'skipper', requiredMinutes: 60, throttleCeiling: 'three-quarter', // common practice
-      band: { kind: 'absolute', rpmMin: 2000, rpmMax: 4500 }, rules: {}, instructions: 'Vary speed.' },
+    {
+      id: 'p1',
+      name: 'Dock run at idle',
+      performedBy: 'workshop',
+      requiredMinutes: 15,
+      throttleCeiling: 'idle', // common practice
+      band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.2 },
+      rules: {},
+      instructions: 'Check the tell-tale stream.',
+    },
+    {
+      id: 'p2',
+      name: 'Below half throttle',
+      performedBy: 'skipper',
+      requiredMinutes: 60,
+      throttleCeiling: 'half', // common practice
+      band: { kind: 'share-of-rated', shareMin: 0, shareMax: 0.5 },
+      rules: { changeSpeedEveryMinutes: 15 },
+      instructions: 'Vary speed.',
+    },
+    {
+      id: 'p3',
+      name: 'Up to three-quarter',
+      performedBy: 'skipper',
+      requiredMinutes: 60,
+      throttleCeiling: 'three-quarter', // common practice
+      band: { kind: 'absolute', rpmMin: 2000, rpmMax: 4500 },
+      rules: {},
+      instructions: 'Vary speed.',
+    },
   ],
 };
 
 const program: ProgramDetail = {
-  id, name: definition.name, builtInKey: null, copiedFromId: null, retiredAt: null, suits: definition.suits,
-  phaseCount: 3, totalMinutes: 135, firstService: definition.firstService, updatedAt: '2026-05-02T08:00:00.000Z', definition,
+  id,
+  name: definition.name,
+  builtInKey: null,
+  copiedFromId: null,
+  retiredAt: null,
+  suits: definition.suits,
+  phaseCount: 3,
+  totalMinutes: 135,
+  firstService: definition.firstService,
+  updatedAt: '2026-05-02T08:00:00.000Z',
+  definition,
 };
 
 const phaseCount = () => screen.getAllByRole('region', { name: /^Phase \d+$/ }).length;
 
 describe('ProgramForm', () => {
   it('shows the server’s field error beside the named field of the right phase', async () => {
-    const message = 'The highest rpm of the band (rpmMax) is above the engine’s rated full-throttle rpm.';
+    const message =
+      'The highest rpm of the band (rpmMax) is above the engine’s rated full-throttle rpm.';
     const { calls } = stubFetch({
-      [`PUT /api/programs/${id}`]: problem(400, 'Invalid program', 'Check the marked fields.', [{ field: 'phases.2.band.rpmMax', message }]),
+      [`PUT /api/programs/${id}`]: problem(400, 'Invalid program', 'Check the marked fields.', [
+        { field: 'phases.2.band.rpmMax', message },
+      ]),
     });
     const user = userEvent.setup();
     renderPage(<ProgramForm program={program} />);
@@ -54,12 +90,18 @@ describe('ProgramForm', () => {
     expect(rpmMax).toHaveAttribute('aria-invalid', 'true');
     expect(rpmMax).toHaveAccessibleDescription(expect.stringContaining(message));
     expect(within(screen.getByRole('region', { name: 'Phase 2' })).queryByText(message)).toBeNull();
-    expect(calls[0]?.body).toMatchObject({ name: definition.name, phases: [{ id: 'p1' }, { id: 'p2' }, { id: 'p3' }] });
+    expect(calls[0]?.body).toMatchObject({
+      name: definition.name,
+      phases: [{ id: 'p1' }, { id: 'p2' }, { id: 'p3' }],
+    });
   });
 
   it('adds and removes phases, and sends the changed list', async () => {
     const { calls } = stubFetch({
-      [`PUT /api/programs/${id}`]: ({ body }) => ({ status: 200, body: { program: { ...program, definition: body } } }),
+      [`PUT /api/programs/${id}`]: ({ body }) => ({
+        status: 200,
+        body: { program: { ...program, definition: body } },
+      }),
     });
     const user = userEvent.setup();
     renderPage(<ProgramForm program={program} />);
@@ -67,22 +109,41 @@ describe('ProgramForm', () => {
 
     await user.click(screen.getByRole('button', { name: 'Add phase' }));
     expect(phaseCount()).toBe(4);
-    await user.type(within(screen.getByRole('region', { name: 'Phase 4' })).getByLabelText('Phase name'), 'Full throttle bursts');
-    await user.type(within(screen.getByRole('region', { name: 'Phase 4' })).getByLabelText('Instructions'), 'Short bursts only.');
+    await user.type(
+      within(screen.getByRole('region', { name: 'Phase 4' })).getByLabelText('Phase name'),
+      'Full throttle bursts',
+    );
+    await user.type(
+      within(screen.getByRole('region', { name: 'Phase 4' })).getByLabelText('Instructions'),
+      'Short bursts only.',
+    );
 
-    await user.click(within(screen.getByRole('region', { name: 'Phase 1' })).getByRole('button', { name: 'Remove phase' }));
+    await user.click(
+      within(screen.getByRole('region', { name: 'Phase 1' })).getByRole('button', {
+        name: 'Remove phase',
+      }),
+    );
     expect(phaseCount()).toBe(3);
-    expect(within(screen.getByRole('region', { name: 'Phase 1' })).getByLabelText('Phase name')).toHaveValue('Below half throttle');
+    expect(
+      within(screen.getByRole('region', { name: 'Phase 1' })).getByLabelText('Phase name'),
+    ).toHaveValue('Below half throttle');
 
     await user.click(screen.getByRole('button', { name: 'Save program' }));
     expect(await screen.findByText('Program saved.')).toBeInTheDocument();
     const sent = calls[0]?.body as Program;
-    expect(sent.phases.map((phase) => phase.name)).toEqual(['Below half throttle', 'Up to three-quarter', 'Full throttle bursts']);
+    expect(sent.phases.map((phase) => phase.name)).toEqual([
+      'Below half throttle',
+      'Up to three-quarter',
+      'Full throttle bursts',
+    ]);
   });
 
   it('moves a phase down and keeps an empty rule as no limit', async () => {
     const { calls } = stubFetch({
-      [`PUT /api/programs/${id}`]: ({ body }) => ({ status: 200, body: { program: { ...program, definition: body } } }),
+      [`PUT /api/programs/${id}`]: ({ body }) => ({
+        status: 200,
+        body: { program: { ...program, definition: body } },
+      }),
     });
     const user = userEvent.setup();
     renderPage(<ProgramForm program={program} />);

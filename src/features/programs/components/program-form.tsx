@@ -1,7 +1,11 @@
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { MAX_PHASES, ProgramSchema, type Program } from '../../../../shared/programs/program.schema';
+import {
+  MAX_PHASES,
+  ProgramSchema,
+  type Program,
+} from '../../../../shared/programs/program.schema';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
@@ -9,12 +13,21 @@ import { controlClass, Field, TextField } from '../../../components/ui/field';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useSaveProgram, type ProgramDetail } from '../api';
-import { formFieldPaths, newPhase, errorAt, numberOptions, type ProgramFormValues } from '../form-values';
+import {
+  formFieldPaths,
+  newPhase,
+  errorAt,
+  numberOptions,
+  type ProgramFormValues,
+} from '../form-values';
 import { PhaseFields } from './phase-fields';
 
 /** Edits a workshop's own program. The server checks it again and names any field it refuses. */
 export function ProgramForm({ program }: { program: ProgramDetail }) {
-  const form = useForm<ProgramFormValues, unknown, Program>({ resolver: zodResolver(ProgramSchema), defaultValues: program.definition });
+  const form = useForm<ProgramFormValues, unknown, Program>({
+    resolver: zodResolver(ProgramSchema),
+    defaultValues: program.definition,
+  });
   const { register, control, handleSubmit, setError, reset, formState } = form;
   const phases = useFieldArray({ control, name: 'phases' });
   const save = useSaveProgram(program.id);
@@ -34,38 +47,94 @@ export function ProgramForm({ program }: { program: ProgramDetail }) {
         const fields = formFieldPaths(definition.phases.length) as Path<ProgramFormValues>[];
         const leftOver = applyServerFieldErrors(failure, setError, fields);
         const placed = isApiError(failure) && failure.fieldErrors.length > leftOver.length;
-        setProblems(placed ? [...leftOver, 'Check the fields marked ⚠ above.'] : leftOver.length ? leftOver : [errorMessage(failure)]);
+        setProblems(
+          placed
+            ? [...leftOver, 'Check the fields marked ⚠ above.']
+            : leftOver.length
+              ? leftOver
+              : [errorMessage(failure)],
+        );
       },
     });
   });
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label="Edit program">
+      <form
+        noValidate
+        onSubmit={onSubmit}
+        className="flex flex-col gap-5"
+        aria-label="Edit program"
+      >
         <Card title="Program">
           <div className="flex flex-col gap-4">
             <TextField label="Program name" error={error('name')} {...register('name')} />
             <Field label="Notes" error={error('notes')}>
-              {(c) => <textarea {...c} rows={3} className={`${controlClass} py-2`} {...register('notes')} />}
+              {(c) => (
+                <textarea
+                  {...c}
+                  rows={3}
+                  className={`${controlClass} py-2`}
+                  {...register('notes')}
+                />
+              )}
             </Field>
             <div className="grid gap-3 sm:grid-cols-2">
-              <TextField label="First service after (engine hours)" inputMode="decimal" error={error('firstService.hours') ?? error('firstService.root') ?? error('firstService')}
-                {...register('firstService.hours', numberOptions)} />
-              <TextField label="First service after (months)" inputMode="numeric" error={error('firstService.months')}
-                {...register('firstService.months', numberOptions)} />
+              <TextField
+                label="First service after (engine hours)"
+                inputMode="decimal"
+                error={
+                  error('firstService.hours') ?? error('firstService.root') ?? error('firstService')
+                }
+                {...register('firstService.hours', numberOptions)}
+              />
+              <TextField
+                label="First service after (months)"
+                inputMode="numeric"
+                error={error('firstService.months')}
+                {...register('firstService.months', numberOptions)}
+              />
             </div>
           </div>
         </Card>
         <h2 className="text-xl font-bold">Phases ({phases.fields.length})</h2>
         {phases.fields.map((field, index) => (
-          <PhaseFields key={field.id} index={index} count={phases.fields.length} onMove={phases.move} onRemove={phases.remove} />
+          <PhaseFields
+            key={field.id}
+            index={index}
+            count={phases.fields.length}
+            onMove={phases.move}
+            onRemove={phases.remove}
+          />
         ))}
-        <Button variant="secondary" className="self-start" disabled={phases.fields.length >= MAX_PHASES} onClick={() => phases.append(newPhase())}>
+        <Button
+          variant="secondary"
+          className="self-start"
+          disabled={phases.fields.length >= MAX_PHASES}
+          onClick={() => phases.append(newPhase())}
+        >
           Add phase
         </Button>
-        {problems.length > 0 && <Alert title="The program was not saved">{problems.map((p) => <p key={p}>{p}</p>)}</Alert>}
-        {saved && <p role="status" className="font-semibold">Program saved.</p>}
-        <Button type="submit" className="self-start" pending={save.isPending} pendingLabel="Saving…">Save program</Button>
+        {problems.length > 0 && (
+          <Alert title="The program was not saved">
+            {problems.map((p) => (
+              <p key={p}>{p}</p>
+            ))}
+          </Alert>
+        )}
+        {saved && (
+          <p role="status" className="font-semibold">
+            Program saved.
+          </p>
+        )}
+        <Button
+          type="submit"
+          className="self-start"
+          pending={save.isPending}
+          pendingLabel="Saving…"
+        >
+          Save program
+        </Button>
       </form>
     </FormProvider>
   );

@@ -10,9 +10,12 @@ const bandText = (band: Phase['band']) =>
 
 function rulesText({ rules }: Phase): string[] {
   return [
-    rules.changeSpeedEveryMinutes !== undefined && `Change speed at least every ${rules.changeSpeedEveryMinutes} min`,
-    rules.fullThrottleMaxSeconds !== undefined && `Full throttle at most ${rules.fullThrottleMaxSeconds} s at a time`,
-    rules.fullThrottleMaxMinutesPerHour !== undefined && `At most ${rules.fullThrottleMaxMinutesPerHour} min of full throttle in any hour`,
+    rules.changeSpeedEveryMinutes !== undefined &&
+      `Change speed at least every ${rules.changeSpeedEveryMinutes} min`,
+    rules.fullThrottleMaxSeconds !== undefined &&
+      `Full throttle at most ${rules.fullThrottleMaxSeconds} s at a time`,
+    rules.fullThrottleMaxMinutesPerHour !== undefined &&
+      `At most ${rules.fullThrottleMaxMinutesPerHour} min of full throttle in any hour`,
     rules.idleMaxMinutes !== undefined && `Idle at most ${rules.idleMaxMinutes} min at a time`,
   ].filter((rule): rule is string => Boolean(rule));
 }
@@ -42,7 +45,13 @@ export function ProgramView({ definition }: { definition: Program }) {
                 <dt className="font-semibold">Band</dt>
                 <dd className="figures">{bandText(phase.band)}</dd>
               </dl>
-              {rulesText(phase).length > 0 && <ul className="mt-2 list-disc pl-5">{rulesText(phase).map((r) => <li key={r}>{r}</li>)}</ul>}
+              {rulesText(phase).length > 0 && (
+                <ul className="mt-2 list-disc pl-5">
+                  {rulesText(phase).map((r) => (
+                    <li key={r}>{r}</li>
+                  ))}
+                </ul>
+              )}
               <p className="mt-2 whitespace-pre-line">{phase.instructions}</p>
             </Card>
           </li>

@@ -12,7 +12,11 @@ interface ProgramsTableProps {
   onRetire: (id: string, retire: boolean) => void;
 }
 
-export function ProgramMarks({ program }: { program: Pick<ProgramSummary, 'builtInKey' | 'retiredAt'> }) {
+export function ProgramMarks({
+  program,
+}: {
+  program: Pick<ProgramSummary, 'builtInKey' | 'retiredAt'>;
+}) {
   return (
     <span className="flex flex-wrap gap-1">
       {program.builtInKey && <Pill tone="solid">Built-in</Pill>}
@@ -21,12 +25,28 @@ export function ProgramMarks({ program }: { program: Pick<ProgramSummary, 'built
   );
 }
 
-function RowActions({ program, busy, onCopy, onRetire }: Omit<ProgramsTableProps, 'programs' | 'canManage'> & { program: ProgramSummary }) {
+function RowActions({
+  program,
+  busy,
+  onCopy,
+  onRetire,
+}: Omit<ProgramsTableProps, 'programs' | 'canManage'> & { program: ProgramSummary }) {
   return (
     <div className="flex flex-wrap gap-2">
-      <Button variant="secondary" disabled={busy} aria-label={`Copy ${program.name}`} onClick={() => onCopy(program.id)}>Copy</Button>
-      <Button variant="secondary" disabled={busy} aria-label={`${program.retiredAt ? 'Reinstate' : 'Retire'} ${program.name}`}
-        onClick={() => onRetire(program.id, !program.retiredAt)}>
+      <Button
+        variant="secondary"
+        disabled={busy}
+        aria-label={`Copy ${program.name}`}
+        onClick={() => onCopy(program.id)}
+      >
+        Copy
+      </Button>
+      <Button
+        variant="secondary"
+        disabled={busy}
+        aria-label={`${program.retiredAt ? 'Reinstate' : 'Retire'} ${program.name}`}
+        onClick={() => onRetire(program.id, !program.retiredAt)}
+      >
         {program.retiredAt ? 'Reinstate' : 'Retire'}
       </Button>
     </div>
@@ -34,7 +54,12 @@ function RowActions({ program, busy, onCopy, onRetire }: Omit<ProgramsTableProps
 }
 
 const nameLink = (program: ProgramSummary) => (
-  <Link to={`/programs/${program.id}`} className="flex min-h-touch items-center font-semibold underline underline-offset-4">{program.name}</Link>
+  <Link
+    to={`/programs/${program.id}`}
+    className="flex min-h-touch items-center font-semibold underline underline-offset-4"
+  >
+    {program.name}
+  </Link>
 );
 
 /** Cards on phones, a table on wider screens; only one of the two is shown (and read out) at a time. */
@@ -48,13 +73,17 @@ export function ProgramsTable(props: ProgramsTableProps) {
             {nameLink(program)}
             <ProgramMarks program={program} />
             <p className="mt-1">{engineKindLabel[program.suits.engineKind]}</p>
-            <p className="figures">{program.phaseCount} phases · {formatHours(program.totalMinutes)}</p>
+            <p className="figures">
+              {program.phaseCount} phases · {formatHours(program.totalMinutes)}
+            </p>
             <p className="mb-2">First service {formatInterval(program.firstService)}</p>
             {canManage && <RowActions program={program} {...props} />}
           </li>
         ))}
       </ul>
-      <div className="hidden sm:block"><WideTable {...props} /></div>
+      <div className="hidden sm:block">
+        <WideTable {...props} />
+      </div>
     </>
   );
 }
@@ -69,7 +98,11 @@ function WideTable({ programs, canManage, ...actions }: ProgramsTableProps) {
           <Th>Phases</Th>
           <Th>Total</Th>
           <Th>First service</Th>
-          {canManage && <Th><span className="sr-only">Actions</span></Th>}
+          {canManage && (
+            <Th>
+              <span className="sr-only">Actions</span>
+            </Th>
+          )}
         </tr>
       </thead>
       <tbody>
@@ -84,7 +117,9 @@ function WideTable({ programs, canManage, ...actions }: ProgramsTableProps) {
             <Td className="figures">{formatHours(program.totalMinutes)}</Td>
             <Td>{formatInterval(program.firstService)}</Td>
             {canManage && (
-              <Td><RowActions program={program} {...actions} /></Td>
+              <Td>
+                <RowActions program={program} {...actions} />
+              </Td>
             )}
           </tr>
         ))}

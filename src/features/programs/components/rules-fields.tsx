@@ -20,8 +20,13 @@ export function RulesFields({ index }: { index: number }) {
         {RULES.map(({ key, label }) => {
           const name = `phases.${index}.rules.${key}` as const;
           return (
-            <TextField key={key} label={label} inputMode="decimal" error={errorAt(formState.errors, name)}
-              {...register(name, numberOptions)} />
+            <TextField
+              key={key}
+              label={label}
+              inputMode="decimal"
+              error={errorAt(formState.errors, name)}
+              {...register(name, numberOptions)}
+            />
           );
         })}
       </div>

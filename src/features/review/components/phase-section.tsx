@@ -31,15 +31,22 @@ function Figures({ phase }: { phase: ReviewPhase }) {
 }
 
 function Reasons({ phase }: { phase: ReviewPhase }) {
-  if (phase.reasons.length === 0) return <p>Nothing to remark: every rule of this phase was kept.</p>;
+  if (phase.reasons.length === 0)
+    return <p>Nothing to remark: every rule of this phase was kept.</p>;
   return (
     <ul className="flex flex-col gap-2" aria-label={`What the log shows for ${phase.name}`}>
       {phase.reasons.map((reason, i) => (
         <li key={i} className="flex gap-2">
-          <span aria-hidden="true" className="font-bold">{reason.code === 'short-of-time' ? '…' : '▲'}</span>
+          <span aria-hidden="true" className="font-bold">
+            {reason.code === 'short-of-time' ? '…' : '▲'}
+          </span>
           <span>
             {reason.message}
-            {reason.fromMs !== null && reason.toMs !== null && <span className="block text-sm text-muted figures">{formatSpan(reason.fromMs, reason.toMs)}</span>}
+            {reason.fromMs !== null && reason.toMs !== null && (
+              <span className="block text-sm text-muted figures">
+                {formatSpan(reason.fromMs, reason.toMs)}
+              </span>
+            )}
           </span>
         </li>
       ))}
@@ -48,15 +55,33 @@ function Reasons({ phase }: { phase: ReviewPhase }) {
 }
 
 /** One phase: its band, its figures, every reason in words and when, and the chart. */
-export function PhaseSection({ phase, chart, index, ratedRpmMax }: { phase: ReviewPhase; chart: PhaseChart; index: number; ratedRpmMax: number }) {
+export function PhaseSection({
+  phase,
+  chart,
+  index,
+  ratedRpmMax,
+}: {
+  phase: ReviewPhase;
+  chart: PhaseChart;
+  index: number;
+  ratedRpmMax: number;
+}) {
   return (
     <Card level={3} aria-labelledby={`phase-${phase.id}`}>
       <div className="mb-3 flex flex-wrap items-start justify-between gap-2">
         <div>
-          <h3 id={`phase-${phase.id}`} className="text-lg font-bold">{index + 1}. {phase.name}</h3>
+          <h3 id={`phase-${phase.id}`} className="text-lg font-bold">
+            {index + 1}. {phase.name}
+          </h3>
           <p className="text-muted">
-            {phase.performedBy === 'workshop' ? 'By the workshop' : 'By the skipper'} · band <span className="figures">{phase.band.rpmMin}–{phase.band.rpmMax}</span> rpm, {CEILING_WORDS[phase.throttleCeiling]}
-            {phase.firstAt !== null && phase.lastAt !== null && <> · run {formatSpan(phase.firstAt, phase.lastAt)}</>}
+            {phase.performedBy === 'workshop' ? 'By the workshop' : 'By the skipper'} · band{' '}
+            <span className="figures">
+              {phase.band.rpmMin}–{phase.band.rpmMax}
+            </span>{' '}
+            rpm, {CEILING_WORDS[phase.throttleCeiling]}
+            {phase.firstAt !== null && phase.lastAt !== null && (
+              <> · run {formatSpan(phase.firstAt, phase.lastAt)}</>
+            )}
           </p>
         </div>
         <VerdictMark verdict={phase.verdict} />
@@ -65,9 +90,17 @@ export function PhaseSection({ phase, chart, index, ratedRpmMax }: { phase: Revi
         <Figures phase={phase} />
         <Reasons phase={phase} />
         <figure className="flex flex-col gap-2">
-          <figcaption><ChartSummary phase={phase} chart={chart} /></figcaption>
+          <figcaption>
+            <ChartSummary phase={phase} chart={chart} />
+          </figcaption>
           {chart.points.length > 0 && (
-            <Suspense fallback={<p role="status" className="text-muted">Loading the chart…</p>}>
+            <Suspense
+              fallback={
+                <p role="status" className="text-muted">
+                  Loading the chart…
+                </p>
+              }
+            >
               <RunChart chart={chart} ratedRpmMax={ratedRpmMax} title={phase.name} />
             </Suspense>
           )}

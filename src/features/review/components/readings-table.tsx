@@ -17,27 +17,58 @@ export function ReadingsTable({ runId, total }: { runId: string; total: number }
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-center gap-3">
-        <a href={readingsCsvUrl(runId)} download className={buttonClass('secondary')}>Download all readings (CSV)</a>
+        <a href={readingsCsvUrl(runId)} download className={buttonClass('secondary')}>
+          Download all readings (CSV)
+        </a>
         <p className="text-muted">{total} readings, oldest first. Times are the device&rsquo;s.</p>
       </div>
       {readings.isPending && <Loading label="Loading readings…" />}
-      {readings.isError && <LoadError error={readings.error} what="the readings" onRetry={() => readings.refetch()} />}
+      {readings.isError && (
+        <LoadError error={readings.error} what="the readings" onRetry={() => readings.refetch()} />
+      )}
       {readings.data && readings.data.readings.length > 0 && (
         <Table>
-          <caption className="sr-only">Readings {offset + 1} to {last} of {readings.data.total}</caption>
+          <caption className="sr-only">
+            Readings {offset + 1} to {last} of {readings.data.total}
+          </caption>
           <thead>
-            <tr><Th>Time</Th><Th>Phase</Th><Th>RPM</Th><Th>Throttle</Th><Th>Band</Th><Th>Speed</Th><Th>Hour meter</Th><Th>Note</Th></tr>
+            <tr>
+              <Th>Time</Th>
+              <Th>Phase</Th>
+              <Th>RPM</Th>
+              <Th>Throttle</Th>
+              <Th>Band</Th>
+              <Th>Speed</Th>
+              <Th>Hour meter</Th>
+              <Th>Note</Th>
+            </tr>
           </thead>
           <tbody>
             {readings.data.readings.map((r) => (
               <tr key={r.id}>
                 <Td className="figures whitespace-nowrap">{formatMoment(r.at)}</Td>
                 <Td>{r.phaseName}</Td>
-                <Td className="figures">{r.rpm}{r.rpmSource === 'frequency' && r.frequencyHz !== null ? ` (${r.frequencyHz} Hz)` : ''}</Td>
+                <Td className="figures">
+                  {r.rpm}
+                  {r.rpmSource === 'frequency' && r.frequencyHz !== null
+                    ? ` (${r.frequencyHz} Hz)`
+                    : ''}
+                </Td>
                 <Td>{r.throttle}</Td>
-                <Td className="whitespace-nowrap">{r.band ? <><span aria-hidden="true">{BAND_MARK[r.band]} </span>{BAND_WORDS[r.band]}</> : '—'}</Td>
+                <Td className="whitespace-nowrap">
+                  {r.band ? (
+                    <>
+                      <span aria-hidden="true">{BAND_MARK[r.band]} </span>
+                      {BAND_WORDS[r.band]}
+                    </>
+                  ) : (
+                    '—'
+                  )}
+                </Td>
                 <Td className="figures">{r.speedKn !== null ? `${r.speedKn} kn` : '—'}</Td>
-                <Td className="figures">{r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}</Td>
+                <Td className="figures">
+                  {r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}
+                </Td>
                 <Td>{r.note ?? ''}</Td>
               </tr>
             ))}
@@ -46,9 +77,23 @@ export function ReadingsTable({ runId, total }: { runId: string; total: number }
       )}
       {readings.data && readings.data.total > PAGE && (
         <nav aria-label="Readings pages" className="flex flex-wrap items-center gap-3">
-          <Button variant="secondary" disabled={offset === 0} onClick={() => setOffset(Math.max(0, offset - PAGE))}>Earlier</Button>
-          <span className="figures">{offset + 1}–{last} of {readings.data.total}</span>
-          <Button variant="secondary" disabled={last >= readings.data.total} onClick={() => setOffset(offset + PAGE)}>Later</Button>
+          <Button
+            variant="secondary"
+            disabled={offset === 0}
+            onClick={() => setOffset(Math.max(0, offset - PAGE))}
+          >
+            Earlier
+          </Button>
+          <span className="figures">
+            {offset + 1}–{last} of {readings.data.total}
+          </span>
+          <Button
+            variant="secondary"
+            disabled={last >= readings.data.total}
+            onClick={() => setOffset(offset + PAGE)}
+          >
+            Later
+          </Button>
         </nav>
       )}
     </div>

@@ -1,7 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
-import { SignOffInputSchema, type SignOffFormValues, type SignOffInput } from '../../../../shared/review/review.schema';
+import {
+  SignOffInputSchema,
+  type SignOffFormValues,
+  type SignOffInput,
+} from '../../../../shared/review/review.schema';
 import type { DecisionView } from '../../../../shared/review/views';
 import type { Verdict } from '../../../../shared/runs/phase-tally';
 import { Alert } from '../../../components/ui/alert';
@@ -12,15 +16,35 @@ import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { useSignOff } from '../api';
 
 const CHOICES = [
-  { value: 'confirm', label: 'Confirm and sign off', hint: 'Freezes the run, issues the PDF certificate and e-mails it to the skipper.' },
-  { value: 'return', label: 'Return to the skipper', hint: 'Opens logging again and e-mails the skipper your comments and what the log shows.' },
+  {
+    value: 'confirm',
+    label: 'Confirm and sign off',
+    hint: 'Freezes the run, issues the PDF certificate and e-mails it to the skipper.',
+  },
+  {
+    value: 'return',
+    label: 'Return to the skipper',
+    hint: 'Opens logging again and e-mails the skipper your comments and what the log shows.',
+  },
 ] as const;
 
 /** The technician's decision on a submitted run. */
-export function SignOffForm({ runId, verdict, onDecided }: { runId: string; verdict: Verdict; onDecided?: (result: DecisionView) => void }) {
+export function SignOffForm({
+  runId,
+  verdict,
+  onDecided,
+}: {
+  runId: string;
+  verdict: Verdict;
+  onDecided?: (result: DecisionView) => void;
+}) {
   const signOff = useSignOff(runId, onDecided);
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, control, handleSubmit, setError, formState } = useForm<SignOffFormValues, unknown, SignOffInput>({
+  const { register, control, handleSubmit, setError, formState } = useForm<
+    SignOffFormValues,
+    unknown,
+    SignOffInput
+  >({
     resolver: zodResolver(SignOffInputSchema),
     defaultValues: { decision: 'confirm', comments: '' },
   });
@@ -30,7 +54,8 @@ export function SignOffForm({ runId, verdict, onDecided }: { runId: string; verd
     signOff.mutate(input, {
       onError: (error) => {
         const leftOver = applyServerFieldErrors(error, setError, ['decision', 'comments']);
-        const onFieldsOnly = isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
+        const onFieldsOnly =
+          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
         if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
       },
     });
@@ -41,21 +66,59 @@ export function SignOffForm({ runId, verdict, onDecided }: { runId: string; verd
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1 font-semibold">Decision</legend>
         {CHOICES.map((choice) => (
-          <label key={choice.value} className="flex min-h-touch cursor-pointer items-start gap-3 rounded-md border-2 border-line p-3 has-[:checked]:border-ink">
-            <input type="radio" value={choice.value} className="mt-1 size-5 accent-[var(--rs-accent)]" {...register('decision')} />
-            <span><span className="font-bold">{choice.label}</span><span className="block text-sm text-muted">{choice.hint}</span></span>
+          <label
+            key={choice.value}
+            className="flex min-h-touch cursor-pointer items-start gap-3 rounded-md border-2 border-line p-3 has-[:checked]:border-ink"
+          >
+            <input
+              type="radio"
+              value={choice.value}
+              className="mt-1 size-5 accent-[var(--rs-accent)]"
+              {...register('decision')}
+            />
+            <span>
+              <span className="font-bold">{choice.label}</span>
+              <span className="block text-sm text-muted">{choice.hint}</span>
+            </span>
           </label>
         ))}
         {formState.errors.decision?.message && (
-          <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger"><span aria-hidden="true">⚠</span>{formState.errors.decision.message}</p>
+          <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
+            <span aria-hidden="true">⚠</span>
+            {formState.errors.decision.message}
+          </p>
         )}
       </fieldset>
-      <Field label="Comments" error={formState.errors.comments?.message}
-        hint={decision === 'return' ? 'Say what the skipper should do next.' : verdict === 'complete' ? 'Optional; printed on the certificate.' : 'The computation does not judge this run complete: say why you confirm it. Printed on the certificate.'}>
-        {(control) => <textarea {...control} rows={4} className={`${controlClass} py-2`} {...register('comments')} />}
+      <Field
+        label="Comments"
+        error={formState.errors.comments?.message}
+        hint={
+          decision === 'return'
+            ? 'Say what the skipper should do next.'
+            : verdict === 'complete'
+              ? 'Optional; printed on the certificate.'
+              : 'The computation does not judge this run complete: say why you confirm it. Printed on the certificate.'
+        }
+      >
+        {(control) => (
+          <textarea
+            {...control}
+            rows={4}
+            className={`${controlClass} py-2`}
+            {...register('comments')}
+          />
+        )}
       </Field>
-      <p className="text-sm">The engine maker&rsquo;s manual and warranty terms come first: sign off only what they accept.</p>
-      <Button type="submit" className="self-start" pending={signOff.isPending} pendingLabel="Saving…">
+      <p className="text-sm">
+        The engine maker&rsquo;s manual and warranty terms come first: sign off only what they
+        accept.
+      </p>
+      <Button
+        type="submit"
+        className="self-start"
+        pending={signOff.isPending}
+        pendingLabel="Saving…"
+      >
         {decision === 'return' ? 'Return the run' : 'Sign off the run'}
       </Button>
     </form>

@@ -12,7 +12,9 @@ function Line({ line }: { line: OutboxLine }) {
         <span className="font-semibold">{line.what}</span>
         <span className="font-mono text-sm tabular-nums">{when(line.at)}</span>
       </div>
-      {line.sync === 'rejected' && <p className="text-sm font-semibold text-danger">Refused: {line.reason}</p>}
+      {line.sync === 'rejected' && (
+        <p className="text-sm font-semibold text-danger">Refused: {line.reason}</p>
+      )}
     </li>
   );
 }
@@ -30,27 +32,51 @@ export function SyncDetails({ onClose }: { onClose: () => void }) {
   const refused = lines.filter((l) => l.sync === 'rejected');
   const waiting = lines.filter((l) => l.sync === 'pending');
   return (
-    <dialog ref={dialog} onClose={onClose} aria-labelledby="sync-title"
-      className="m-auto w-[min(34rem,94vw)] rounded-lg border-2 border-ink bg-paper p-4 text-ink backdrop:bg-ink/60">
-      <h2 id="sync-title" className="text-xl font-bold">Sync with the workshop</h2>
+    <dialog
+      ref={dialog}
+      onClose={onClose}
+      aria-labelledby="sync-title"
+      className="m-auto w-[min(34rem,94vw)] rounded-lg border-2 border-ink bg-paper p-4 text-ink backdrop:bg-ink/60"
+    >
+      <h2 id="sync-title" className="text-xl font-bold">
+        Sync with the workshop
+      </h2>
       <p className="mt-1 text-sm">
-        {status.lastSyncAt ? `Last synced ${when(status.lastSyncAt)}.` : 'Not synced yet on this device.'}{' '}
+        {status.lastSyncAt
+          ? `Last synced ${when(status.lastSyncAt)}.`
+          : 'Not synced yet on this device.'}{' '}
         {status.lastError && <strong>{status.lastError}</strong>}
       </p>
       <div className="mt-3 flex gap-2">
-        <Button pending={status.syncing} onClick={() => void requestSync()}>Sync now</Button>
-        <Button variant="secondary" onClick={onClose}>Close</Button>
+        <Button pending={status.syncing} onClick={() => void requestSync()}>
+          Sync now
+        </Button>
+        <Button variant="secondary" onClick={onClose}>
+          Close
+        </Button>
       </div>
       {refused.length > 0 && (
         <section className="mt-4">
           <h3 className="font-bold">Refused by the server ({refused.length})</h3>
           <p className="text-sm">These stay on this device; show them to your workshop.</p>
-          <ul>{refused.map((l) => <Line key={l.id} line={l} />)}</ul>
+          <ul>
+            {refused.map((l) => (
+              <Line key={l.id} line={l} />
+            ))}
+          </ul>
         </section>
       )}
       <section className="mt-4">
         <h3 className="font-bold">Waiting to send ({waiting.length})</h3>
-        {waiting.length === 0 ? <p className="text-sm">Nothing is waiting.</p> : <ul className="max-h-72 overflow-y-auto">{waiting.map((l) => <Line key={l.id} line={l} />)}</ul>}
+        {waiting.length === 0 ? (
+          <p className="text-sm">Nothing is waiting.</p>
+        ) : (
+          <ul className="max-h-72 overflow-y-auto">
+            {waiting.map((l) => (
+              <Line key={l.id} line={l} />
+            ))}
+          </ul>
+        )}
       </section>
     </dialog>
   );

@@ -16,7 +16,15 @@ describe('InviteForm', () => {
     const { calls } = stubFetch({
       'POST /api/invites': {
         status: 201,
-        body: { invite: { id: 'inv-1', email: 'crew@example.com', role: 'skipper', expiresAt: '2026-06-01T12:00:00Z' }, link: '/invite/tok_0123456789abcdefghij' },
+        body: {
+          invite: {
+            id: 'inv-1',
+            email: 'crew@example.com',
+            role: 'skipper',
+            expiresAt: '2026-06-01T12:00:00Z',
+          },
+          link: '/invite/tok_0123456789abcdefghij',
+        },
       },
       'GET /api/users': { status: 200, body: { users: [], invites: [] } },
     });
@@ -27,13 +35,21 @@ describe('InviteForm', () => {
     await user.click(screen.getByRole('checkbox', { name: 'Kittiwake' }));
     await user.click(screen.getByRole('button', { name: 'Send invite' }));
 
-    expect(await screen.findByLabelText('Invite link')).toHaveValue('http://localhost:3000/invite/tok_0123456789abcdefghij');
-    expect(calls[0].body).toEqual({ email: 'crew@example.com', role: 'skipper', vesselIds: [vesselId] });
+    expect(await screen.findByLabelText('Invite link')).toHaveValue(
+      'http://localhost:3000/invite/tok_0123456789abcdefghij',
+    );
+    expect(calls[0].body).toEqual({
+      email: 'crew@example.com',
+      role: 'skipper',
+      vesselIds: [vesselId],
+    });
     expect(screen.getByLabelText('E-mail')).toHaveValue('');
   });
 
   it('links no vessels when inviting staff', async () => {
-    const { calls } = stubFetch({ 'POST /api/invites': problem(409, 'Conflict', 'That person already belongs to the workshop.') });
+    const { calls } = stubFetch({
+      'POST /api/invites': problem(409, 'Conflict', 'That person already belongs to the workshop.'),
+    });
     const user = userEvent.setup();
     renderPage(<InviteForm vessels={[{ id: vesselId, name: 'Kittiwake' }]} />);
 
@@ -42,7 +58,9 @@ describe('InviteForm', () => {
     expect(screen.queryByRole('checkbox', { name: 'Kittiwake' })).not.toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Send invite' }));
 
-    expect(await screen.findByRole('alert')).toHaveTextContent('That person already belongs to the workshop.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'That person already belongs to the workshop.',
+    );
     expect(calls[0].body).toEqual({ email: 'mech@example.com', role: 'technician', vesselIds: [] });
   });
 
@@ -54,7 +72,9 @@ describe('InviteForm', () => {
     await user.type(screen.getByLabelText('E-mail'), 'not-an-address');
     await user.click(screen.getByRole('button', { name: 'Send invite' }));
 
-    expect(await screen.findByText('Enter a valid e-mail address, like name@example.com.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('Enter a valid e-mail address, like name@example.com.'),
+    ).toBeInTheDocument();
     expect(fetchMock).not.toHaveBeenCalled();
   });
 });

@@ -19,7 +19,11 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
   const invite = useInvite();
   const [sent, setSent] = useState<SentInvite | null>(null);
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, control, handleSubmit, setError, reset, formState } = useForm<InviteFormValues, unknown, InviteInput>({
+  const { register, control, handleSubmit, setError, reset, formState } = useForm<
+    InviteFormValues,
+    unknown,
+    InviteInput
+  >({
     resolver: zodResolver(InviteInputSchema),
     defaultValues: { email: '', role: 'skipper', vesselIds: [] },
   });
@@ -36,7 +40,8 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
       },
       onError: (error) => {
         const leftOver = applyServerFieldErrors(error, setError, ['email', 'role', 'vesselIds']);
-        const onFieldsOnly = isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
+        const onFieldsOnly =
+          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
         if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
       },
     });
@@ -46,11 +51,20 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
     <div className="flex flex-col gap-4">
       <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
         {refusal && <Alert title="Invite not sent">{refusal}</Alert>}
-        <TextField label="E-mail" type="email" autoComplete="off" autoCapitalize="none" spellCheck={false}
-          error={formState.errors.email?.message} {...register('email')} />
+        <TextField
+          label="E-mail"
+          type="email"
+          autoComplete="off"
+          autoCapitalize="none"
+          spellCheck={false}
+          error={formState.errors.email?.message}
+          {...register('email')}
+        />
         <SelectField label="Role" error={formState.errors.role?.message} {...register('role')}>
           {ROLES.map((value) => (
-            <option key={value} value={value}>{roleLabel[value]}</option>
+            <option key={value} value={value}>
+              {roleLabel[value]}
+            </option>
           ))}
         </SelectField>
         {role === 'skipper' && vessels.length > 0 && (
@@ -58,12 +72,21 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
             control={control}
             name="vesselIds"
             render={({ field, fieldState }) => (
-              <VesselChoice vessels={vessels} value={field.value ?? []} onChange={field.onChange}
-                error={fieldState.error?.message ?? formState.errors.vesselIds?.root?.message} />
+              <VesselChoice
+                vessels={vessels}
+                value={field.value ?? []}
+                onChange={field.onChange}
+                error={fieldState.error?.message ?? formState.errors.vesselIds?.root?.message}
+              />
             )}
           />
         )}
-        <Button type="submit" pending={invite.isPending} pendingLabel="Sending invite…" className="self-start">
+        <Button
+          type="submit"
+          pending={invite.isPending}
+          pendingLabel="Sending invite…"
+          className="self-start"
+        >
           Send invite
         </Button>
       </form>

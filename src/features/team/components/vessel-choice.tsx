@@ -20,8 +20,11 @@ export function VesselChoice({ vessels, value, onChange, error }: VesselChoicePr
     <fieldset className="flex flex-col gap-1">
       <legend className="font-semibold">Link to vessels (optional)</legend>
       {vessels.map((vessel) => (
-        <Checkbox key={vessel.id} checked={value.includes(vessel.id)}
-          onChange={(event) => toggle(vessel.id, event.target.checked)}>
+        <Checkbox
+          key={vessel.id}
+          checked={value.includes(vessel.id)}
+          onChange={(event) => toggle(vessel.id, event.target.checked)}
+        >
           {vessel.name}
         </Checkbox>
       ))}

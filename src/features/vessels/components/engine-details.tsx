@@ -23,9 +23,13 @@ export function EngineDetails({ engine }: { engine: EngineSummary }) {
         <dt className="text-muted">Serial</dt>
         <dd className="figures break-all">{engine.serialNumber}</dd>
         <dt className="text-muted">Rated full throttle</dt>
-        <dd><RatedRpm engine={engine} /></dd>
+        <dd>
+          <RatedRpm engine={engine} />
+        </dd>
         <dt className="text-muted">Fuel and cycle</dt>
-        <dd>{capitalise(engine.fuel)}, {cycleLabel[engine.cycle]}</dd>
+        <dd>
+          {capitalise(engine.fuel)}, {cycleLabel[engine.cycle]}
+        </dd>
         {engine.ratedPowerKw !== null && (
           <>
             <dt className="text-muted">Rated power</dt>

@@ -11,22 +11,35 @@ export function EngineFacts({ engine }: { engine: EngineView }) {
     engine.propBlades !== null ? `${engine.propBlades} blades` : null,
     engine.propDiameterIn !== null ? `${engine.propDiameterIn} in diameter` : null,
     engine.propPitchIn !== null ? `${engine.propPitchIn} in pitch` : null,
-  ].filter(Boolean).join(', ');
+  ]
+    .filter(Boolean)
+    .join(', ');
   const tach = [
     tachSourceLabel[engine.tachSource],
     engine.poles !== null ? `${engine.poles} poles` : null,
     engine.pulleyRatio !== null ? `pulley ratio ${engine.pulleyRatio}` : null,
-  ].filter(Boolean).join(', ');
+  ]
+    .filter(Boolean)
+    .join(', ');
   const facts: Array<[string, string, boolean?]> = [
     ['Serial number', engine.serialNumber, true],
     ['Installation', installationLabel[engine.installation]],
-    ['Fuel and cycle', `${engine.fuel === 'petrol' ? 'Petrol' : 'Diesel'}, ${cycleWord[engine.cycle]}`],
+    [
+      'Fuel and cycle',
+      `${engine.fuel === 'petrol' ? 'Petrol' : 'Diesel'}, ${cycleWord[engine.cycle]}`,
+    ],
     ['Rated power', engine.ratedPowerKw !== null ? `${engine.ratedPowerKw} kW` : '—', true],
     ['Rated full throttle', `${formatRpmRange(engine.ratedRpmMin, engine.ratedRpmMax)} RPM`, true],
     ['Gear ratio', engine.gearRatio !== null ? `${engine.gearRatio}:1` : '—', true],
     ['Propeller', propeller || '—'],
     ['Tachometer signal', tach],
-    ['Hour meter at commissioning', engine.hourMeterAtCommissioning !== null ? `${formatHours(engine.hourMeterAtCommissioning)} h` : '—', true],
+    [
+      'Hour meter at commissioning',
+      engine.hourMeterAtCommissioning !== null
+        ? `${formatHours(engine.hourMeterAtCommissioning)} h`
+        : '—',
+      true,
+    ],
     ['Commissioned', orDash(engine.commissionedOn && formatDate(engine.commissionedOn))],
   ];
   return (

@@ -29,7 +29,9 @@ describe('EngineForm', () => {
 
     await user.click(screen.getByRole('button', { name: 'Add engine' }));
 
-    expect(await screen.findByText('5 fields need attention: see the marked fields below.')).toBeInTheDocument();
+    expect(
+      await screen.findByText('5 fields need attention: see the marked fields below.'),
+    ).toBeInTheDocument();
     expect(field('Maker')).toHaveAccessibleDescription('Enter the maker.');
     expect(field('Model')).toHaveAccessibleDescription('Enter the model.');
     expect(field('Serial number')).toHaveAccessibleDescription('Enter the serial number.');
@@ -51,15 +53,25 @@ describe('EngineForm', () => {
     await user.type(field('Propeller pitch (in)'), 'nineteen');
     await user.click(screen.getByRole('button', { name: 'Add engine' }));
 
-    expect(await screen.findByText('Rated RPM high end must be above the low end.')).toBeInTheDocument();
-    expect(field('Rated full-throttle RPM, high end')).toHaveAccessibleDescription('Rated RPM high end must be above the low end.');
-    expect(field('Poles of the coil or alternator')).toHaveAccessibleDescription(expect.stringContaining('Poles come in pairs: enter an even number.'));
-    expect(field('Propeller pitch (in)')).toHaveAccessibleDescription('Propeller pitch must be a number.');
+    expect(
+      await screen.findByText('Rated RPM high end must be above the low end.'),
+    ).toBeInTheDocument();
+    expect(field('Rated full-throttle RPM, high end')).toHaveAccessibleDescription(
+      'Rated RPM high end must be above the low end.',
+    );
+    expect(field('Poles of the coil or alternator')).toHaveAccessibleDescription(
+      expect.stringContaining('Poles come in pairs: enter an even number.'),
+    );
+    expect(field('Propeller pitch (in)')).toHaveAccessibleDescription(
+      'Propeller pitch must be a number.',
+    );
     expect(fetchMock).not.toHaveBeenCalled();
   });
 
   it('sends numbers (a comma as the decimal point) and shows the tachometer setting', async () => {
-    const { calls } = stubFetch({ 'POST /api/engines': { status: 201, body: { engine: { id: 'e-1' } } } });
+    const { calls } = stubFetch({
+      'POST /api/engines': { status: 201, body: { engine: { id: 'e-1' } } },
+    });
     const onSaved = vi.fn();
     const user = userEvent.setup();
     renderPage(<EngineForm vesselId={vesselId} onSaved={onSaved} />);
@@ -69,19 +81,34 @@ describe('EngineForm', () => {
     await user.selectOptions(field('Signal source'), 'charging-coil');
     await user.type(field('Poles of the coil or alternator'), '12');
     // 12-pole coil: 12 on a poles dial, 6 on a pulses-per-rev dial (common practice).
-    expect(screen.getByText(/12 on a dial labelled in poles, or 6 on one labelled in pulses per revolution/)).toBeInTheDocument();
+    expect(
+      screen.getByText(
+        /12 on a dial labelled in poles, or 6 on one labelled in pulses per revolution/,
+      ),
+    ).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Add engine' }));
 
     await vi.waitFor(() => expect(onSaved).toHaveBeenCalledWith({ id: 'e-1' }));
     expect(calls[0].body).toMatchObject({
-      vesselId, maker: 'Kestrel', serialNumber: 'KT-25-000871', ratedRpmMin: 5000, ratedRpmMax: 6000,
-      gearRatio: 2.08, tachSource: 'charging-coil', poles: 12, pulleyRatio: null, commissionedOn: null,
+      vesselId,
+      maker: 'Kestrel',
+      serialNumber: 'KT-25-000871',
+      ratedRpmMin: 5000,
+      ratedRpmMax: 6000,
+      gearRatio: 2.08,
+      tachSource: 'charging-coil',
+      poles: 12,
+      pulleyRatio: null,
+      commissionedOn: null,
     });
   });
 
   it('puts the server’s serial-number refusal on the serial number field', async () => {
-    const message = 'Serial number KT-25-000871 is already recorded on the single engine of Gannet.';
-    stubFetch({ 'POST /api/engines': problem(409, 'Conflict', message, [{ field: 'serialNumber', message }]) });
+    const message =
+      'Serial number KT-25-000871 is already recorded on the single engine of Gannet.';
+    stubFetch({
+      'POST /api/engines': problem(409, 'Conflict', message, [{ field: 'serialNumber', message }]),
+    });
     const user = userEvent.setup();
     renderPage(<EngineForm vesselId={vesselId} onSaved={() => {}} />);
 

@@ -1,7 +1,12 @@
 import { useState } from 'react';
 import { useForm, useWatch, type Control } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
-import { ENGINE_FIELDS, EngineInputSchema, type EngineFormInput, type EngineInput } from '../../../../shared/engines/engine.schema';
+import {
+  ENGINE_FIELDS,
+  EngineInputSchema,
+  type EngineFormInput,
+  type EngineInput,
+} from '../../../../shared/engines/engine.schema';
 import { tachDialSetting } from '../../../../shared/engine-speed/engine-speed';
 import { SignalSourceSchema } from '../../../../shared/engine-speed/signal-source.schema';
 import type { EngineRow, EngineView } from '../../../../shared/vessels/vessel-view';
@@ -11,7 +16,12 @@ import { SelectField } from '../../../components/ui/field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { applyServerFieldErrors } from '../../../lib/form-errors';
 import { useSaveEngine } from '../engine-api';
-import { CommissioningFields, IdentityFields, RatingFields, TachFields } from './engine-form-fields';
+import {
+  CommissioningFields,
+  IdentityFields,
+  RatingFields,
+  TachFields,
+} from './engine-form-fields';
 
 interface EngineFormProps {
   /** The engine being edited; a new engine when absent. */
@@ -23,7 +33,13 @@ interface EngineFormProps {
   onCancel?: () => void;
 }
 
-const blank: Partial<EngineFormInput> = { position: 'single', installation: 'outboard', fuel: 'petrol', cycle: 'four-stroke', tachSource: 'none' };
+const blank: Partial<EngineFormInput> = {
+  position: 'single',
+  installation: 'outboard',
+  fuel: 'petrol',
+  cycle: 'four-stroke',
+  tachSource: 'none',
+};
 
 function valuesOf(engine: EngineView | undefined, vesselId: string): Partial<EngineFormInput> {
   if (!engine) return { ...blank, vesselId };
@@ -34,7 +50,10 @@ function valuesOf(engine: EngineView | undefined, vesselId: string): Partial<Eng
 
 /** The number to dial into the helm tachometer, once the signal source is complete. */
 function useDialHint(control: Control<EngineFormInput>): string | null {
-  const [kind, poles, pulleyRatio] = useWatch({ control, name: ['tachSource', 'poles', 'pulleyRatio'] });
+  const [kind, poles, pulleyRatio] = useWatch({
+    control,
+    name: ['tachSource', 'poles', 'pulleyRatio'],
+  });
   const source = SignalSourceSchema.safeParse({ kind, poles, pulleyRatio });
   if (!source.success) return null;
   const polesDial = tachDialSetting(source.data, 'poles');
@@ -47,7 +66,11 @@ function useDialHint(control: Control<EngineFormInput>): string | null {
 export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: EngineFormProps) {
   const save = useSaveEngine();
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, control, handleSubmit, setError, formState } = useForm<EngineFormInput, unknown, EngineInput>({
+  const { register, control, handleSubmit, setError, formState } = useForm<
+    EngineFormInput,
+    unknown,
+    EngineInput
+  >({
     resolver: zodResolver(EngineInputSchema),
     defaultValues: valuesOf(engine, vesselId),
   });
@@ -56,28 +79,44 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
 
   const onSubmit = handleSubmit((input) => {
     setRefusal(null);
-    save.mutate({ id: engine?.id, input }, {
-      onSuccess: ({ engine: saved }) => onSaved(saved),
-      onError: (error) => {
-        const leftOver = applyServerFieldErrors(error, setError, ENGINE_FIELDS);
-        const onFieldsOnly = isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
-        if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+    save.mutate(
+      { id: engine?.id, input },
+      {
+        onSuccess: ({ engine: saved }) => onSaved(saved),
+        onError: (error) => {
+          const leftOver = applyServerFieldErrors(error, setError, ENGINE_FIELDS);
+          const onFieldsOnly =
+            isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
+          if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+        },
       },
-    });
+    );
   });
 
   const fieldErrorCount = Object.keys(errors).length;
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label={engine ? 'Edit engine' : 'New engine'}>
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      className="flex flex-col gap-5"
+      aria-label={engine ? 'Edit engine' : 'New engine'}
+    >
       {refusal && <Alert title="Engine not saved">{refusal}</Alert>}
       {fieldErrorCount > 0 && (
         <p role="alert" className="font-semibold text-danger">
-          {fieldErrorCount === 1 ? 'One field needs attention' : `${fieldErrorCount} fields need attention`}: see the marked fields below.
+          {fieldErrorCount === 1
+            ? 'One field needs attention'
+            : `${fieldErrorCount} fields need attention`}
+          : see the marked fields below.
         </p>
       )}
       {vessels && (
         <SelectField label="Vessel" error={errors.vesselId?.message} {...register('vesselId')}>
-          {vessels.map((v) => <option key={v.id} value={v.id}>{v.name}</option>)}
+          {vessels.map((v) => (
+            <option key={v.id} value={v.id}>
+              {v.name}
+            </option>
+          ))}
         </SelectField>
       )}
       <IdentityFields register={register} errors={errors} />
@@ -85,8 +124,14 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
       <TachFields register={register} errors={errors} dialHint={dialHint} />
       <CommissioningFields register={register} errors={errors} />
       <div className="flex flex-wrap gap-3">
-        <Button type="submit" pending={save.isPending} pendingLabel="Saving engine…">{engine ? 'Save engine' : 'Add engine'}</Button>
-        {onCancel && <Button variant="secondary" onClick={onCancel}>Cancel</Button>}
+        <Button type="submit" pending={save.isPending} pendingLabel="Saving engine…">
+          {engine ? 'Save engine' : 'Add engine'}
+        </Button>
+        {onCancel && (
+          <Button variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
       </div>
     </form>
   );

@@ -18,13 +18,32 @@ const columns: Record<Column, (e: EngineRow) => SortValue> = {
   commissioned: (e) => e.commissionedOn,
   checklist: (e) => checklistOrder[checklistStateOf(e)],
 };
-const labels: Record<Column, string> = { engine: 'Engine', serial: 'Serial', vessel: 'Vessel', rated: 'Rated full throttle', commissioned: 'Commissioned', checklist: 'Checklist' };
+const labels: Record<Column, string> = {
+  engine: 'Engine',
+  serial: 'Serial',
+  vessel: 'Vessel',
+  rated: 'Rated full throttle',
+  commissioned: 'Commissioned',
+  checklist: 'Checklist',
+};
 
-export const engineName = (e: Pick<EngineRow, 'position' | 'maker' | 'model'>) => `${positionLabel[e.position]} · ${e.maker} ${e.model}`;
+export const engineName = (e: Pick<EngineRow, 'position' | 'maker' | 'model'>) =>
+  `${positionLabel[e.position]} · ${e.maker} ${e.model}`;
 
 /** Engines as a sortable table on wide screens and as cards on phones; each opens its engine page. */
-export function EnginesList({ engines, showVessel = true, emptyText = 'No engines recorded yet.' }: { engines: EngineRow[]; showVessel?: boolean; emptyText?: string }) {
-  const { sorted, sort, sortBy, setSort } = useSorting<EngineRow, Column>(engines, columns, { key: showVessel ? 'vessel' : 'engine', direction: 'ascending' });
+export function EnginesList({
+  engines,
+  showVessel = true,
+  emptyText = 'No engines recorded yet.',
+}: {
+  engines: EngineRow[];
+  showVessel?: boolean;
+  emptyText?: string;
+}) {
+  const { sorted, sort, sortBy, setSort } = useSorting<EngineRow, Column>(engines, columns, {
+    key: showVessel ? 'vessel' : 'engine',
+    direction: 'ascending',
+  });
   const shown = (Object.keys(labels) as Column[]).filter((c) => showVessel || c !== 'vessel');
   if (engines.length === 0) return <p className="py-4">{emptyText}</p>;
   return (
@@ -32,34 +51,93 @@ export function EnginesList({ engines, showVessel = true, emptyText = 'No engine
       <div className="hidden sm:block">
         <Table>
           <caption className="sr-only">Engines, sortable by each column</caption>
-          <thead><tr>{shown.map((c) => <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />)}</tr></thead>
+          <thead>
+            <tr>
+              {shown.map((c) => (
+                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
+              ))}
+            </tr>
+          </thead>
           <tbody>
             {sorted.map((e) => (
               <tr key={e.id}>
-                <Td><Link to={`/engines/${e.id}`} className="font-bold underline underline-offset-4">{engineName(e)}</Link> <ArchivedPill archivedAt={e.archivedAt} /></Td>
+                <Td>
+                  <Link to={`/engines/${e.id}`} className="font-bold underline underline-offset-4">
+                    {engineName(e)}
+                  </Link>{' '}
+                  <ArchivedPill archivedAt={e.archivedAt} />
+                </Td>
                 <Td className="figures">{e.serialNumber}</Td>
-                {showVessel && <Td><Link to={`/vessels/${e.vessel.id}`} className="underline underline-offset-4">{e.vessel.name}</Link></Td>}
-                <Td className="figures whitespace-nowrap">{formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM</Td>
-                <Td>{e.commissionedOn ? formatDate(e.commissionedOn) : <span className="text-muted">—</span>}</Td>
-                <Td><Link to={`/engines/${e.id}/checklist`} aria-label={`Checklist of ${engineName(e)}, ${e.serialNumber}`}><ChecklistPill engine={e} /></Link></Td>
+                {showVessel && (
+                  <Td>
+                    <Link to={`/vessels/${e.vessel.id}`} className="underline underline-offset-4">
+                      {e.vessel.name}
+                    </Link>
+                  </Td>
+                )}
+                <Td className="figures whitespace-nowrap">
+                  {formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM
+                </Td>
+                <Td>
+                  {e.commissionedOn ? (
+                    formatDate(e.commissionedOn)
+                  ) : (
+                    <span className="text-muted">—</span>
+                  )}
+                </Td>
+                <Td>
+                  <Link
+                    to={`/engines/${e.id}/checklist`}
+                    aria-label={`Checklist of ${engineName(e)}, ${e.serialNumber}`}
+                  >
+                    <ChecklistPill engine={e} />
+                  </Link>
+                </Td>
               </tr>
             ))}
           </tbody>
         </Table>
       </div>
       <div className="flex flex-col gap-3 sm:hidden">
-        <SortSelect options={Object.fromEntries(shown.map((c) => [c, labels[c]])) as Record<Column, string>} sort={sort} onChange={setSort} />
+        <SortSelect
+          options={Object.fromEntries(shown.map((c) => [c, labels[c]])) as Record<Column, string>}
+          sort={sort}
+          onChange={setSort}
+        />
         <ul className="flex flex-col gap-3" aria-label="Engines">
           {sorted.map((e) => (
             <li key={e.id}>
-              <Card level={3} title={<Link to={`/engines/${e.id}`} className="flex min-h-touch items-center underline underline-offset-4">{engineName(e)}</Link>}>
+              <Card
+                level={3}
+                title={
+                  <Link
+                    to={`/engines/${e.id}`}
+                    className="flex min-h-touch items-center underline underline-offset-4"
+                  >
+                    {engineName(e)}
+                  </Link>
+                }
+              >
                 <p className="figures">{e.serialNumber}</p>
-                {showVessel && <p><span className="text-muted">On </span>{e.vessel.name}</p>}
-                <p><span className="text-muted">Rated </span><span className="figures">{formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM</span></p>
+                {showVessel && (
+                  <p>
+                    <span className="text-muted">On </span>
+                    {e.vessel.name}
+                  </p>
+                )}
+                <p>
+                  <span className="text-muted">Rated </span>
+                  <span className="figures">
+                    {formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM
+                  </span>
+                </p>
                 <div className="mt-2 flex flex-wrap items-center gap-2">
                   <ChecklistPill engine={e} /> <ArchivedPill archivedAt={e.archivedAt} />
                 </div>
-                <Link to={`/engines/${e.id}/checklist`} className="mt-2 flex min-h-touch items-center font-semibold underline underline-offset-4">
+                <Link
+                  to={`/engines/${e.id}/checklist`}
+                  className="mt-2 flex min-h-touch items-center font-semibold underline underline-offset-4"
+                >
                   Commissioning checklist
                 </Link>
               </Card>

@@ -22,11 +22,17 @@ export function FleetTable({ vessels }: { vessels: VesselSummary[] }) {
         {vessels.map((vessel) => (
           <tr key={vessel.id}>
             <Td>
-              <Link to={`/vessels/${vessel.id}`} className="font-bold underline underline-offset-4">{vessel.name}</Link>
+              <Link to={`/vessels/${vessel.id}`} className="font-bold underline underline-offset-4">
+                {vessel.name}
+              </Link>
               <p className="text-sm text-muted">{vesselFacts(vessel)}</p>
               <p className="figures text-sm">{vessel.hin}</p>
             </Td>
-            <Td>{vessel.skippers.map((s) => s.name).join(', ') || <span className="text-muted">none yet</span>}</Td>
+            <Td>
+              {vessel.skippers.map((s) => s.name).join(', ') || (
+                <span className="text-muted">none yet</span>
+              )}
+            </Td>
             <EngineColumns vessel={vessel} />
           </tr>
         ))}
@@ -37,13 +43,37 @@ export function FleetTable({ vessels }: { vessels: VesselSummary[] }) {
 
 function EngineColumns({ vessel }: { vessel: VesselSummary }) {
   if (vessel.engines.length === 0) {
-    return <Td colSpan={3} className="text-muted">No engines recorded yet</Td>;
+    return (
+      <Td colSpan={3} className="text-muted">
+        No engines recorded yet
+      </Td>
+    );
   }
   return (
     <>
-      <Td>{vessel.engines.map((e) => <p key={e.id}><Link to={`/engines/${e.id}`} className="underline underline-offset-4">{engineTitle(e)}</Link></p>)}</Td>
-      <Td>{vessel.engines.map((e) => <p key={e.id} className="figures">{e.serialNumber}</p>)}</Td>
-      <Td>{vessel.engines.map((e) => <p key={e.id}><RatedRpm engine={e} /></p>)}</Td>
+      <Td>
+        {vessel.engines.map((e) => (
+          <p key={e.id}>
+            <Link to={`/engines/${e.id}`} className="underline underline-offset-4">
+              {engineTitle(e)}
+            </Link>
+          </p>
+        ))}
+      </Td>
+      <Td>
+        {vessel.engines.map((e) => (
+          <p key={e.id} className="figures">
+            {e.serialNumber}
+          </p>
+        ))}
+      </Td>
+      <Td>
+        {vessel.engines.map((e) => (
+          <p key={e.id}>
+            <RatedRpm engine={e} />
+          </p>
+        ))}
+      </Td>
     </>
   );
 }

@@ -24,10 +24,17 @@ export function SkipperLinks({ vessel }: { vessel: VesselView }) {
       ) : (
         <ul className="flex flex-col gap-2" aria-label={`Skippers of ${vessel.name}`}>
           {vessel.skippers.map((s) => (
-            <li key={s.id} className="flex flex-wrap items-center justify-between gap-2 rounded-md border-2 border-line px-3 py-1">
+            <li
+              key={s.id}
+              className="flex flex-wrap items-center justify-between gap-2 rounded-md border-2 border-line px-3 py-1"
+            >
               <span className="font-semibold">{s.name}</span>
               {!readOnly && (
-                <Button variant="quiet" disabled={link.isPending} onClick={() => link.mutate({ vesselId: vessel.id, userId: s.id, linked: false })}>
+                <Button
+                  variant="quiet"
+                  disabled={link.isPending}
+                  onClick={() => link.mutate({ vesselId: vessel.id, userId: s.id, linked: false })}
+                >
                   Unlink {s.name}
                 </Button>
               )}
@@ -35,23 +42,47 @@ export function SkipperLinks({ vessel }: { vessel: VesselView }) {
           ))}
         </ul>
       )}
-      {skippers.isError && <LoadError error={skippers.error} what="the skippers" onRetry={() => skippers.refetch()} />}
-      {!readOnly && skippers.data && (choices.length === 0 ? (
-        <p className="text-sm text-muted">Every skipper of the workshop is linked. Invite a new skipper from the Team page.</p>
-      ) : (
-        <div className="flex flex-wrap items-end gap-3">
-          <div className="min-w-56 flex-1">
-            <SelectField label="Link a skipper" value={chosen} onChange={(e) => setChosen(e.target.value)}>
-              <option value="">Choose a skipper…</option>
-              {choices.map((s) => <option key={s.id} value={s.id}>{s.name} ({s.email})</option>)}
-            </SelectField>
+      {skippers.isError && (
+        <LoadError error={skippers.error} what="the skippers" onRetry={() => skippers.refetch()} />
+      )}
+      {!readOnly &&
+        skippers.data &&
+        (choices.length === 0 ? (
+          <p className="text-sm text-muted">
+            Every skipper of the workshop is linked. Invite a new skipper from the Team page.
+          </p>
+        ) : (
+          <div className="flex flex-wrap items-end gap-3">
+            <div className="min-w-56 flex-1">
+              <SelectField
+                label="Link a skipper"
+                value={chosen}
+                onChange={(e) => setChosen(e.target.value)}
+              >
+                <option value="">Choose a skipper…</option>
+                {choices.map((s) => (
+                  <option key={s.id} value={s.id}>
+                    {s.name} ({s.email})
+                  </option>
+                ))}
+              </SelectField>
+            </div>
+            <Button
+              variant="secondary"
+              disabled={!chosen}
+              pending={link.isPending}
+              pendingLabel="Linking…"
+              onClick={() =>
+                link.mutate(
+                  { vesselId: vessel.id, userId: chosen, linked: true },
+                  { onSuccess: () => setChosen('') },
+                )
+              }
+            >
+              Link skipper
+            </Button>
           </div>
-          <Button variant="secondary" disabled={!chosen} pending={link.isPending} pendingLabel="Linking…"
-            onClick={() => link.mutate({ vesselId: vessel.id, userId: chosen, linked: true }, { onSuccess: () => setChosen('') })}>
-            Link skipper
-          </Button>
-        </div>
-      ))}
+        ))}
     </div>
   );
 }

@@ -7,36 +7,82 @@ import { SortableTh, SortSelect } from './sortable-th';
 
 type Column = 'name' | 'email' | 'vessels';
 type Row = SkipperOption & { vessels: Array<{ id: string; name: string }> };
-const columns: Record<Column, (s: Row) => SortValue> = { name: (s) => s.name, email: (s) => s.email, vessels: (s) => s.vessels.length };
+const columns: Record<Column, (s: Row) => SortValue> = {
+  name: (s) => s.name,
+  email: (s) => s.email,
+  vessels: (s) => s.vessels.length,
+};
 const labels: Record<Column, string> = { name: 'Skipper', email: 'E-mail', vessels: 'Vessels' };
 
 const folded = (text: string) => text.toLocaleLowerCase('en-GB');
-const matches = (row: Row, q: string) => !q || [row.name, row.email, ...row.vessels.map((v) => v.name)].some((t) => folded(t).includes(folded(q)));
+const matches = (row: Row, q: string) =>
+  !q ||
+  [row.name, row.email, ...row.vessels.map((v) => v.name)].some((t) =>
+    folded(t).includes(folded(q)),
+  );
 
 function VesselLinks({ vessels }: { vessels: Row['vessels'] }) {
   if (vessels.length === 0) return <span className="text-muted">none linked</span>;
-  return <>{vessels.map((v, i) => <span key={v.id}>{i > 0 && ', '}<Link to={`/vessels/${v.id}`} className="underline underline-offset-4">{v.name}</Link></span>)}</>;
+  return (
+    <>
+      {vessels.map((v, i) => (
+        <span key={v.id}>
+          {i > 0 && ', '}
+          <Link to={`/vessels/${v.id}`} className="underline underline-offset-4">
+            {v.name}
+          </Link>
+        </span>
+      ))}
+    </>
+  );
 }
 
 /** The workshop's skippers and the vessels each may log; linking is done on the vessel's page. */
-export function SkippersList({ skippers, vesselNames, q }: { skippers: SkipperOption[]; vesselNames: Map<string, string>; q: string }) {
+export function SkippersList({
+  skippers,
+  vesselNames,
+  q,
+}: {
+  skippers: SkipperOption[];
+  vesselNames: Map<string, string>;
+  q: string;
+}) {
   const rows: Row[] = skippers
-    .map((s) => ({ ...s, vessels: s.vesselIds.filter((id) => vesselNames.has(id)).map((id) => ({ id, name: vesselNames.get(id)! })) }))
+    .map((s) => ({
+      ...s,
+      vessels: s.vesselIds
+        .filter((id) => vesselNames.has(id))
+        .map((id) => ({ id, name: vesselNames.get(id)! })),
+    }))
     .filter((row) => matches(row, q));
-  const { sorted, sort, sortBy, setSort } = useSorting<Row, Column>(rows, columns, { key: 'name', direction: 'ascending' });
-  if (rows.length === 0) return <p className="py-4">No skippers match. Skippers join through an invite from the Team page.</p>;
+  const { sorted, sort, sortBy, setSort } = useSorting<Row, Column>(rows, columns, {
+    key: 'name',
+    direction: 'ascending',
+  });
+  if (rows.length === 0)
+    return (
+      <p className="py-4">No skippers match. Skippers join through an invite from the Team page.</p>
+    );
   return (
     <>
       <div className="hidden sm:block">
         <Table>
           <caption className="sr-only">Skippers, sortable by each column</caption>
-          <thead><tr>{(Object.keys(labels) as Column[]).map((c) => <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />)}</tr></thead>
+          <thead>
+            <tr>
+              {(Object.keys(labels) as Column[]).map((c) => (
+                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
+              ))}
+            </tr>
+          </thead>
           <tbody>
             {sorted.map((s) => (
               <tr key={s.id}>
                 <Td className="font-bold">{s.name}</Td>
                 <Td className="break-all">{s.email}</Td>
-                <Td><VesselLinks vessels={s.vessels} /></Td>
+                <Td>
+                  <VesselLinks vessels={s.vessels} />
+                </Td>
               </tr>
             ))}
           </tbody>
@@ -49,7 +95,10 @@ export function SkippersList({ skippers, vesselNames, q }: { skippers: SkipperOp
             <li key={s.id}>
               <Card level={3} title={s.name}>
                 <p className="break-all text-muted">{s.email}</p>
-                <p><span className="text-muted">Vessels </span><VesselLinks vessels={s.vessels} /></p>
+                <p>
+                  <span className="text-muted">Vessels </span>
+                  <VesselLinks vessels={s.vessels} />
+                </p>
               </Card>
             </li>
           ))}

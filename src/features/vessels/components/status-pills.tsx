@@ -6,7 +6,10 @@ export type ChecklistState = 'not-started' | 'in-progress' | 'completed';
 export const checklistStateOf = (engine: Pick<EngineRow, 'checklist'>): ChecklistState =>
   !engine.checklist ? 'not-started' : engine.checklist.completedAt ? 'completed' : 'in-progress';
 
-const words: Record<ChecklistState, { word: string; mark: string; tone: 'solid' | 'outline' | 'quiet' }> = {
+const words: Record<
+  ChecklistState,
+  { word: string; mark: string; tone: 'solid' | 'outline' | 'quiet' }
+> = {
   completed: { word: 'Checklist done', mark: '✓', tone: 'solid' },
   'in-progress': { word: 'Checklist started', mark: '◐', tone: 'outline' },
   'not-started': { word: 'No checklist yet', mark: '○', tone: 'quiet' },
@@ -25,5 +28,9 @@ export function ChecklistPill({ engine }: { engine: Pick<EngineRow, 'checklist'>
 
 export function ArchivedPill({ archivedAt }: { archivedAt: string | null | undefined }) {
   if (!archivedAt) return null;
-  return <Pill tone="quiet" className="border-dashed">Archived</Pill>;
+  return (
+    <Pill tone="quiet" className="border-dashed">
+      Archived
+    </Pill>
+  );
 }

@@ -12,8 +12,20 @@ export function vesselFacts(vessel: VesselSummary): string {
  * A vessel and its engines. `showSkippers` is for workshop staff, who look after many boats; their
  * card also leads to the vessel's page.
  */
-export function VesselCard({ vessel, showSkippers = false }: { vessel: VesselSummary; showSkippers?: boolean }) {
-  const title = showSkippers ? <Link to={`/vessels/${vessel.id}`} className="underline underline-offset-4">{vessel.name}</Link> : vessel.name;
+export function VesselCard({
+  vessel,
+  showSkippers = false,
+}: {
+  vessel: VesselSummary;
+  showSkippers?: boolean;
+}) {
+  const title = showSkippers ? (
+    <Link to={`/vessels/${vessel.id}`} className="underline underline-offset-4">
+      {vessel.name}
+    </Link>
+  ) : (
+    vessel.name
+  );
   return (
     <Card title={title}>
       <p className="text-muted">{vesselFacts(vessel)}</p>
@@ -24,7 +36,9 @@ export function VesselCard({ vessel, showSkippers = false }: { vessel: VesselSum
       {showSkippers && (
         <p className="mt-1">
           <span className="text-muted">Skippers </span>
-          {vessel.skippers.length ? vessel.skippers.map((s) => s.name).join(', ') : 'none linked yet'}
+          {vessel.skippers.length
+            ? vessel.skippers.map((s) => s.name).join(', ')
+            : 'none linked yet'}
         </p>
       )}
       {vessel.engines.length === 0 ? (

@@ -2,7 +2,12 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { VESSEL_TYPES, VesselInputSchema, vesselTypeLabel, type VesselInput } from '../../../../shared/vessels/vessel.schema';
+import {
+  VESSEL_TYPES,
+  VesselInputSchema,
+  vesselTypeLabel,
+  type VesselInput,
+} from '../../../../shared/vessels/vessel.schema';
 import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
@@ -15,45 +20,106 @@ import { toNumberOrNull } from '../form-values';
 type VesselFormValues = z.input<typeof VesselInputSchema>;
 const FIELDS = ['name', 'hin', 'type', 'lengthM', 'homePort'] as const;
 
-export function VesselForm({ vessel, onSaved, onCancel }: { vessel?: VesselView; onSaved: (vessel: VesselView) => void; onCancel?: () => void }) {
+export function VesselForm({
+  vessel,
+  onSaved,
+  onCancel,
+}: {
+  vessel?: VesselView;
+  onSaved: (vessel: VesselView) => void;
+  onCancel?: () => void;
+}) {
   const save = useSaveVessel();
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState } = useForm<VesselFormValues, unknown, VesselInput>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    VesselFormValues,
+    unknown,
+    VesselInput
+  >({
     resolver: zodResolver(VesselInputSchema),
     defaultValues: vessel
-      ? { name: vessel.name, hin: vessel.hin, type: vessel.type, lengthM: vessel.lengthM, homePort: vessel.homePort }
+      ? {
+          name: vessel.name,
+          hin: vessel.hin,
+          type: vessel.type,
+          lengthM: vessel.lengthM,
+          homePort: vessel.homePort,
+        }
       : { name: '', hin: '', type: 'runabout', lengthM: null, homePort: '' },
   });
   const errors = formState.errors;
 
   const onSubmit = handleSubmit((input) => {
     setRefusal(null);
-    save.mutate({ id: vessel?.id, input }, {
-      onSuccess: ({ vessel: saved }) => onSaved(saved),
-      onError: (error) => {
-        const leftOver = applyServerFieldErrors(error, setError, FIELDS);
-        if (!(isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0)) setRefusal(leftOver.join(' ') || errorMessage(error));
+    save.mutate(
+      { id: vessel?.id, input },
+      {
+        onSuccess: ({ vessel: saved }) => onSaved(saved),
+        onError: (error) => {
+          const leftOver = applyServerFieldErrors(error, setError, FIELDS);
+          if (!(isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0))
+            setRefusal(leftOver.join(' ') || errorMessage(error));
+        },
       },
-    });
+    );
   });
 
   return (
-    <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label={vessel ? 'Edit vessel' : 'New vessel'}>
+    <form
+      noValidate
+      onSubmit={onSubmit}
+      className="flex flex-col gap-4"
+      aria-label={vessel ? 'Edit vessel' : 'New vessel'}
+    >
       {refusal && <Alert title="Vessel not saved">{refusal}</Alert>}
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Vessel name" autoComplete="off" error={errors.name?.message} {...register('name')} />
-        <TextField label="Hull identification number (HIN)" hint="Optional; 12 to 14 letters and digits" autoComplete="off"
-          autoCapitalize="characters" spellCheck={false} className="figures" error={errors.hin?.message} {...register('hin')} />
+        <TextField
+          label="Vessel name"
+          autoComplete="off"
+          error={errors.name?.message}
+          {...register('name')}
+        />
+        <TextField
+          label="Hull identification number (HIN)"
+          hint="Optional; 12 to 14 letters and digits"
+          autoComplete="off"
+          autoCapitalize="characters"
+          spellCheck={false}
+          className="figures"
+          error={errors.hin?.message}
+          {...register('hin')}
+        />
         <SelectField label="Type" error={errors.type?.message} {...register('type')}>
-          {VESSEL_TYPES.map((t) => <option key={t} value={t}>{vesselTypeLabel[t]}</option>)}
+          {VESSEL_TYPES.map((t) => (
+            <option key={t} value={t}>
+              {vesselTypeLabel[t]}
+            </option>
+          ))}
         </SelectField>
-        <TextField label="Length (m)" inputMode="decimal" autoComplete="off" className="figures" error={errors.lengthM?.message}
-          {...register('lengthM', { setValueAs: toNumberOrNull })} />
-        <TextField label="Home port" autoComplete="off" error={errors.homePort?.message} {...register('homePort')} />
+        <TextField
+          label="Length (m)"
+          inputMode="decimal"
+          autoComplete="off"
+          className="figures"
+          error={errors.lengthM?.message}
+          {...register('lengthM', { setValueAs: toNumberOrNull })}
+        />
+        <TextField
+          label="Home port"
+          autoComplete="off"
+          error={errors.homePort?.message}
+          {...register('homePort')}
+        />
       </div>
       <div className="flex flex-wrap gap-3">
-        <Button type="submit" pending={save.isPending} pendingLabel="Saving vessel…">{vessel ? 'Save vessel' : 'Add vessel'}</Button>
-        {onCancel && <Button variant="secondary" onClick={onCancel}>Cancel</Button>}
+        <Button type="submit" pending={save.isPending} pendingLabel="Saving vessel…">
+          {vessel ? 'Save vessel' : 'Add vessel'}
+        </Button>
+        {onCancel && (
+          <Button variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+        )}
       </div>
     </form>
   );

@@ -15,15 +15,29 @@ const columns: Record<Column, (v: VesselView) => SortValue> = {
   skippers: (v) => v.skippers.map((s) => s.name).join(', '),
   engines: (v) => v.engines.length,
 };
-const labels: Record<Column, string> = { name: 'Vessel', type: 'Type', homePort: 'Home port', skippers: 'Skippers', engines: 'Engines' };
+const labels: Record<Column, string> = {
+  name: 'Vessel',
+  type: 'Type',
+  homePort: 'Home port',
+  skippers: 'Skippers',
+  engines: 'Engines',
+};
 
 const enginesText = (v: VesselView) =>
-  v.engines.length === 0 ? 'none yet' : v.engines.map((e) => `${e.position} ${e.maker} ${e.model}`).join('; ');
+  v.engines.length === 0
+    ? 'none yet'
+    : v.engines.map((e) => `${e.position} ${e.maker} ${e.model}`).join('; ');
 
 /** Vessels as a sortable table on wide screens and as cards on phones. */
 export function VesselsList({ vessels }: { vessels: VesselView[] }) {
-  const { sorted, sort, sortBy, setSort } = useSorting<VesselView, Column>(vessels, columns, { key: 'name', direction: 'ascending' });
-  if (vessels.length === 0) return <p className="py-4">No vessels match. Change the search or the filter, or add a vessel.</p>;
+  const { sorted, sort, sortBy, setSort } = useSorting<VesselView, Column>(vessels, columns, {
+    key: 'name',
+    direction: 'ascending',
+  });
+  if (vessels.length === 0)
+    return (
+      <p className="py-4">No vessels match. Change the search or the filter, or add a vessel.</p>
+    );
   return (
     <>
       {/* display:none keeps the hidden layout out of the accessibility tree. */}
@@ -31,20 +45,38 @@ export function VesselsList({ vessels }: { vessels: VesselView[] }) {
         <Table>
           <caption className="sr-only">Vessels, sortable by each column</caption>
           <thead>
-            <tr>{(Object.keys(labels) as Column[]).map((c) => <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />)}</tr>
+            <tr>
+              {(Object.keys(labels) as Column[]).map((c) => (
+                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
+              ))}
+            </tr>
           </thead>
           <tbody>
             {sorted.map((v) => (
               <tr key={v.id}>
                 <Td>
-                  <Link to={`/vessels/${v.id}`} className="font-bold underline underline-offset-4">{v.name}</Link>{' '}
+                  <Link to={`/vessels/${v.id}`} className="font-bold underline underline-offset-4">
+                    {v.name}
+                  </Link>{' '}
                   <ArchivedPill archivedAt={v.archivedAt} />
                   {v.hin && <p className="figures text-sm text-muted">{v.hin}</p>}
                 </Td>
-                <Td>{vesselTypeLabel[v.type]}{v.lengthM !== null && <span className="figures text-muted"> · {v.lengthM} m</span>}</Td>
+                <Td>
+                  {vesselTypeLabel[v.type]}
+                  {v.lengthM !== null && (
+                    <span className="figures text-muted"> · {v.lengthM} m</span>
+                  )}
+                </Td>
                 <Td>{v.homePort || <span className="text-muted">—</span>}</Td>
-                <Td>{v.skippers.map((s) => s.name).join(', ') || <span className="text-muted">none linked</span>}</Td>
-                <Td><span className="figures font-bold">{v.engines.length}</span> <span className="text-sm text-muted">{enginesText(v)}</span></Td>
+                <Td>
+                  {v.skippers.map((s) => s.name).join(', ') || (
+                    <span className="text-muted">none linked</span>
+                  )}
+                </Td>
+                <Td>
+                  <span className="figures font-bold">{v.engines.length}</span>{' '}
+                  <span className="text-sm text-muted">{enginesText(v)}</span>
+                </Td>
               </tr>
             ))}
           </tbody>
@@ -55,11 +87,35 @@ export function VesselsList({ vessels }: { vessels: VesselView[] }) {
         <ul className="flex flex-col gap-3" aria-label="Vessels">
           {sorted.map((v) => (
             <li key={v.id}>
-              <Card level={3} title={<Link to={`/vessels/${v.id}`} className="flex min-h-touch items-center underline underline-offset-4">{v.name}</Link>}>
+              <Card
+                level={3}
+                title={
+                  <Link
+                    to={`/vessels/${v.id}`}
+                    className="flex min-h-touch items-center underline underline-offset-4"
+                  >
+                    {v.name}
+                  </Link>
+                }
+              >
                 <ArchivedPill archivedAt={v.archivedAt} />
-                <p className="text-muted">{[vesselTypeLabel[v.type], v.lengthM !== null ? `${v.lengthM} m` : null, v.homePort].filter(Boolean).join(' · ')}</p>
-                <p><span className="text-muted">Skippers </span>{v.skippers.map((s) => s.name).join(', ') || 'none linked'}</p>
-                <p><span className="text-muted">Engines </span>{enginesText(v)}</p>
+                <p className="text-muted">
+                  {[
+                    vesselTypeLabel[v.type],
+                    v.lengthM !== null ? `${v.lengthM} m` : null,
+                    v.homePort,
+                  ]
+                    .filter(Boolean)
+                    .join(' · ')}
+                </p>
+                <p>
+                  <span className="text-muted">Skippers </span>
+                  {v.skippers.map((s) => s.name).join(', ') || 'none linked'}
+                </p>
+                <p>
+                  <span className="text-muted">Engines </span>
+                  {enginesText(v)}
+                </p>
               </Card>
             </li>
           ))}
