@@ -1,6 +1,8 @@
 import { z } from 'zod/mini';
 import '../zod-english';
 import { RunEventSchema } from '../runs/run-event.schema';
+import type { RunDetail } from '../runs/run-view';
+import type { VesselView } from '../vessels/vessel-view';
 
 /*
  * The sync protocol between a device and the server.
@@ -99,6 +101,34 @@ export const PullQuerySchema = z.object({
     2000,
   ),
 });
+
+/** An event as a pull answers it: the run it belongs to and when the server received it. */
+export const PulledEventSchema = z.object({
+  runId: z.string(),
+  receivedAt: z.number(),
+  event: RunEventSchema,
+});
+export type PulledEvent = z.infer<typeof PulledEventSchema>;
+
+const isRecord = (value: unknown) => typeof value === 'object' && value !== null;
+
+/**
+ * What GET /api/sync/pull answers: events changed after the cursor (in change order), the runs
+ * that changed, and always every visible run id and vessel, so a device notices a run it may no
+ * longer see. The server builds its answer as this type; the device checks a page with it
+ * before storing anything. Runs and vessels are the API's own views, checked here only as
+ * records: their fields are the server's making, and their full schemas would bring classic zod
+ * onto the deck.
+ */
+export const PullResponseSchema = z.object({
+  cursor: z.number().check(z.int(), z.nonnegative()),
+  more: z.boolean(),
+  runIds: z.array(z.string()),
+  runs: z.array(z.custom<RunDetail>(isRecord)),
+  events: z.array(PulledEventSchema),
+  vessels: z.array(z.custom<VesselView>(isRecord)),
+});
+export type PullResponse = z.infer<typeof PullResponseSchema>;
 
 /** A day: a device clock further off than this is flagged on the run for the workshop. */
 export const CLOCK_SKEW_FLAG_MS = 24 * 60 * 60 * 1000;

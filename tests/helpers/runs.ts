@@ -3,12 +3,9 @@ import type { Express } from 'express';
 import { DEMO, signedInAgent } from './test-server.js';
 
 type Vessel = { name: string; engines: Array<{ id: string; position: string }> };
-export type RunDetail = {
-  id: string;
-  engine: { id: string };
-  program: { phases: Array<{ id: string }> };
-  bands: Record<string, { rpmMin: number; rpmMax: number }>;
-};
+import type { RunDetail } from '../../shared/runs/run-view.js';
+
+export type { RunDetail };
 
 /** Assigns a built-in program to a demo engine as the demo technician and returns the new run. */
 export async function assignRun(

@@ -12,6 +12,7 @@ import { Vessel } from '../vessels/vessel.entity.js';
 import { visibleRunsWhere, visibleVesselIds } from './run-access.js';
 import { Run } from './run.entity.js';
 import { reserveChangeSeq } from '../sync/change-seq.js';
+import type { RunDetail, RunView } from '../../../shared/runs/run-view.js';
 
 export class RunsService {
   constructor(private readonly dataSource: DataSource) {}
@@ -119,13 +120,13 @@ export class RunsService {
 }
 
 /** Everything a device needs to run and judge the break-in offline: the view plus the frozen program and bands. */
-export const toRunDetail = (run: Run, vesselName: string) => ({
+export const toRunDetail = (run: Run, vesselName: string): RunDetail => ({
   ...toRunView(run, vesselName),
   program: run.program,
   bands: run.bands,
 });
 
-function toRunView(run: Run, vesselName: string) {
+function toRunView(run: Run, vesselName: string): RunView {
   const engine = run.engine!;
   return {
     id: run.id,

@@ -15,6 +15,7 @@ import {
   startTestServer,
   type TestServer,
 } from '../../../tests/helpers/test-server.js';
+import { PullResponseSchema } from '../../../shared/sync/sync.schema.js';
 import { RunEventRow } from '../runs/run-event.entity.js';
 import { Run } from '../runs/run.entity.js';
 
@@ -202,6 +203,8 @@ describe('pull', () => {
   it('returns each change once from a cursor', async () => {
     const tech = await skipper();
     const first = (await tech.get('/api/sync/pull?cursor=0')).body;
+    // The answer is what the device checks a page against before storing it.
+    expect(PullResponseSchema.safeParse(first).error).toBeUndefined();
     const ids = first.events.map((e: { event: { id: string } }) => e.event.id);
     expect(new Set(ids).size).toBe(ids.length);
     expect(first.runs.map((r: { id: string }) => r.id)).toEqual(

@@ -5,8 +5,10 @@ import {
   PushItemSchema,
   type PushBatch,
   type PushItem,
+  type PullResponse,
   type PushResult,
 } from '../../../shared/sync/sync.schema.js';
+import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { NotFoundError } from '../../lib/errors.js';
 import { fieldErrors } from '../../middleware/validate.js';
@@ -61,7 +63,7 @@ export class SyncService {
    * the runs that changed, and always the list of visible runs and vessels, so a device notices
    * a run it may no longer see or one newly shared with it.
    */
-  async pull(user: SessionUser, cursor: number, limit: number) {
+  async pull(user: SessionUser, cursor: number, limit: number): Promise<PullResponse> {
     const where = {
       ...(await visibleRunsWhere(this.dataSource, user)),
       ...(user.role === 'skipper' ? {} : { state: In([...STAFF_DEVICE_STATES]) }),
@@ -104,7 +106,7 @@ export class SyncService {
       events: events.map(({ runId, receivedAt, body }) => ({
         runId,
         receivedAt,
-        event: JSON.parse(body),
+        event: JSON.parse(body) as RunEvent,
       })),
       vessels: await this.vessels.listFor(user),
     };

@@ -1,0 +1,42 @@
+import type { RpmBand } from '../programs/phase-band.schema';
+import type { Program } from '../programs/program.schema';
+import type { RunState } from './run.schema';
+
+/** A run as the API lists it (GET /api/runs, /api/engines/:id/runs). */
+export interface RunView {
+  id: string;
+  state: RunState;
+  vessel: { id: string; name: string };
+  engine: {
+    id: string;
+    position: string;
+    maker: string;
+    model: string;
+    serialNumber: string;
+    ratedRpmMin: number;
+    ratedRpmMax: number;
+  };
+  programId: string;
+  programName: string;
+  phaseCount: number;
+  totalMinutes: number;
+  currentPhaseId: string | null;
+  notes: string;
+  /** How far the device clock was off the server's, when more than a day (see sync rules). */
+  clockSkewMs: number | null;
+  /** Device time of the newest event, epoch ms. */
+  lastEventAt: number | null;
+  submittedAt: string | null;
+  signedOffAt: string | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+/**
+ * Everything a device needs to run and judge the break-in offline: the view plus the program
+ * frozen at assignment and each phase's band resolved for this engine (GET /api/runs/:id, pull).
+ */
+export interface RunDetail extends RunView {
+  program: Program;
+  bands: Record<string, RpmBand>;
+}
