@@ -11,8 +11,10 @@ import {
 } from 'typeorm';
 import type { VesselType } from '../../../shared/vessels/vessel.schema.js';
 import { Workshop } from '../workshops/workshop.entity.js';
-import { Engine } from './engine.entity.js';
-import { VesselSkipper } from './vessel-skipper.entity.js';
+// The children name their vessel; the vessel names them by entity name and imports only their
+// types, so the entity modules form no import cycle.
+import type { Engine } from './engine.entity.js';
+import type { VesselSkipper } from './vessel-skipper.entity.js';
 
 @Entity('vessel')
 export class Vessel {
@@ -43,10 +45,10 @@ export class Vessel {
   @Column('text', { default: '' })
   homePort: string;
 
-  @OneToMany(() => Engine, (engine) => engine.vessel)
+  @OneToMany('Engine', (engine: Engine) => engine.vessel)
   engines?: Engine[];
 
-  @OneToMany(() => VesselSkipper, (link) => link.vessel)
+  @OneToMany('VesselSkipper', (link: VesselSkipper) => link.vessel)
   skippers?: VesselSkipper[];
 
   @CreateDateColumn({ type: 'datetime' })
