@@ -12,8 +12,8 @@ import { teamQueries } from '../features/team/api';
 import { vesselQueries } from '../features/vessels/api';
 import { AppShell } from './shell/app-shell';
 import { RouteError } from './shell/route-error';
-import { safeNextPath, signInPath } from './shell/sign-in-path';
-import { ReloadPage, Splash } from './shell/splash';
+import { safeNextPath, signInPath } from '../shell/sign-in-path';
+import { ReloadPage, Splash } from '../shell/splash';
 
 const errorElement = <RouteError />;
 

@@ -1,9 +1,9 @@
 import { Component, useEffect, useState, type ReactNode } from 'react';
 import type { SessionUser } from '../../shared/auth/auth.schema';
-import { describeError } from '../app/shell/error-words';
-import { signInPath } from '../app/shell/sign-in-path';
-import { PageFrame, ProblemPanel } from '../app/shell/page-frame';
-import { ReloadPage, Splash } from '../app/shell/splash';
+import { describeError } from '../shell/error-words';
+import { signInPath } from '../shell/sign-in-path';
+import { PageFrame, ProblemPanel } from '../shell/page-frame';
+import { ReloadPage, Splash } from '../shell/splash';
 import { buttonClass } from '../components/ui/button';
 import { fetchSessionUser } from '../features/auth/session-user';
 import { usePathname } from '../features/deck/deck-navigation';

@@ -4,9 +4,9 @@ import { signOutOnServer } from '../features/auth/session-user';
 import { DeckLink } from '../features/deck/components/deck-link';
 import { errorMessage } from '../lib/api-client';
 import { clearUserData } from '../lib/db';
-import { navBarClass, navIcons, navLinkClass } from '../app/shell/nav-look';
-import { navItemsFor } from '../app/shell/nav-items';
-import { SiteHeader } from '../app/shell/site-header';
+import { navBarClass, navIcons, navLinkClass } from '../shell/nav-look';
+import { navItemsFor } from '../shell/nav-items';
+import { SiteHeader } from '../shell/site-header';
 
 /** The same header and navigation as the workshop app; links outside the deck load that app. */
 export function DeckHeader({ user }: { user: SessionUser }) {

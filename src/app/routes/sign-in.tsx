@@ -1,7 +1,7 @@
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { AuthFrame } from '../shell/auth-frame';
-import { safeNextPath } from '../shell/sign-in-path';
+import { safeNextPath } from '../../shell/sign-in-path';
 
 export function SignInRoute() {
   const navigate = useNavigate();

@@ -3,7 +3,7 @@ import type { SessionUser } from '../../../shared/auth/auth.schema';
 import { useSignOut } from '../../features/auth/api';
 import { errorMessage } from '../../lib/api-client';
 import { MainNav } from './main-nav';
-import { SiteHeader } from './site-header';
+import { SiteHeader } from '../../shell/site-header';
 
 /** The workshop app's header: router links and the sign-out mutation around the shared header. */
 export function AppHeader({ user }: { user: SessionUser }) {

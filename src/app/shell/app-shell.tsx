@@ -3,10 +3,10 @@ import { Navigate, Outlet, useLocation } from 'react-router-dom';
 import { useMe } from '../../features/auth/api';
 import { clearUserData } from '../../lib/db';
 import { AppHeader } from './app-header';
-import { PageFrame } from './page-frame';
-import { Splash } from './splash';
+import { PageFrame } from '../../shell/page-frame';
+import { Splash } from '../../shell/splash';
 import { type SessionContext } from './session';
-import { signInPath } from './sign-in-path';
+import { signInPath } from '../../shell/sign-in-path';
 
 /**
  * The signed-in frame: header, navigation and the page. The route loader checks the session on

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { RingMark } from '../../components/ui/icons';
-import { DisplayModeMenu } from './display-mode-menu';
+import { DisplayModeMenu } from '../../shell/display-mode-menu';
 
 /** The frame of the pages used before signing in: the mark, the display mode and one panel. */
 export function AuthFrame({ title, children }: { title: string; children: ReactNode }) {

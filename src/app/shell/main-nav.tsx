@@ -1,7 +1,7 @@
 import { NavLink } from 'react-router-dom';
 import type { Role } from '../../../shared/auth/auth.schema';
-import { navBarClass, navIcons, navLinkClass } from './nav-look';
-import { navItemsFor } from './nav-items';
+import { navBarClass, navIcons, navLinkClass } from '../../shell/nav-look';
+import { navItemsFor } from '../../shell/nav-items';
 
 /**
  * One navigation for every screen size: a bar along the bottom edge on phones (within reach of the

@@ -1,7 +1,7 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router-dom';
-import { describeError } from './error-words';
+import { describeError } from '../../shell/error-words';
 import { buttonClass } from '../../components/ui/button';
-import { ProblemPanel } from './page-frame';
+import { ProblemPanel } from '../../shell/page-frame';
 
 function describe(error: unknown): { title: string; detail: string } {
   if (isRouteErrorResponse(error) && error.status === 404) {

@@ -1,4 +1,4 @@
-import { isApiError } from '../../lib/api-client';
+import { isApiError } from '../lib/api-client';
 
 /** What went wrong, in words, for any error a page can throw (the deck app uses it too). */
 export function describeError(error: unknown): { title: string; detail: string } {

@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
-import type { SessionUser } from '../../../shared/auth/auth.schema';
-import { Button } from '../../components/ui/button';
-import { ExitIcon, RingMark } from '../../components/ui/icons';
-import { SyncPill } from '../../features/sync/components/sync-pill';
-import { SyncRunner } from '../../features/sync/components/sync-runner';
+import type { SessionUser } from '../../shared/auth/auth.schema';
+import { Button } from '../components/ui/button';
+import { ExitIcon, RingMark } from '../components/ui/icons';
+import { SyncPill } from '../features/sync/components/sync-pill';
+import { SyncRunner } from '../features/sync/components/sync-runner';
 import { DisplayModeMenu } from './display-mode-menu';
 
 const roleWord = { skipper: 'Skipper', technician: 'Technician', manager: 'Manager' } as const;

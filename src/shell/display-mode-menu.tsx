@@ -1,8 +1,8 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { HalfIcon, MoonIcon, SunIcon } from '../../components/ui/icons';
-import { buttonClass } from '../../components/ui/button';
-import { cx } from '../../components/ui/cx';
-import { DISPLAY_MODES, useDisplayMode, type DisplayMode } from '../../lib/display-mode';
+import { HalfIcon, MoonIcon, SunIcon } from '../components/ui/icons';
+import { buttonClass } from '../components/ui/button';
+import { cx } from '../components/ui/cx';
+import { DISPLAY_MODES, useDisplayMode, type DisplayMode } from '../lib/display-mode';
 
 const modes: Record<DisplayMode, { label: string; note: string; Icon: typeof SunIcon }> = {
   day: { label: 'Day', note: 'Dark ink on paper, for sunlight', Icon: SunIcon },

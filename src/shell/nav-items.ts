@@ -1,4 +1,4 @@
-import type { Role } from '../../../shared/auth/auth.schema';
+import type { Role } from '../../shared/auth/auth.schema';
 
 export type NavIcon = 'vessels' | 'workshop' | 'team' | 'deck' | 'runs';
 

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Button } from '../../components/ui/button';
+import { Button } from '../components/ui/button';
 
 /** The signed-in page of either app: skip link, header, then the page. */
 export function PageFrame({ header, children }: { header: ReactNode; children: ReactNode }) {

@@ -1,7 +1,7 @@
-import { HullIcon, PeopleIcon, WrenchIcon } from '../../components/ui/icons';
-import { cx } from '../../components/ui/cx';
-import { DeckIcon } from '../../features/deck/components/deck-icon';
-import { RunsIcon } from '../../features/board/components/runs-icon';
+import { HullIcon, PeopleIcon, WrenchIcon } from '../components/ui/icons';
+import { cx } from '../components/ui/cx';
+import { DeckIcon } from '../features/deck/components/deck-icon';
+import { RunsIcon } from '../features/board/components/runs-icon';
 import type { NavIcon } from './nav-items';
 
 /** How the main navigation looks, shared by the workshop app's router links and the deck's plain links. */

@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { RingMark } from '../../components/ui/icons';
+import { RingMark } from '../components/ui/icons';
 
 export function Splash() {
   return (
