@@ -5,7 +5,7 @@ import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { createApp } from '../server/app.js';
-import { prepareData } from '../server/lib/bootstrap.js';
+import { prepareData } from '../server/prepare-data.js';
 import { openDatabase } from '../server/lib/database.js';
 import { createLogger } from '../server/lib/logger.js';
 import { hashPassword } from '../server/lib/passwords.js';

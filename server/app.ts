@@ -1,44 +1,56 @@
 import 'reflect-metadata';
 import fs from 'node:fs';
 import path from 'node:path';
-import express, { type Express } from 'express';
+import express, { type Express, type RequestHandler, type Router } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
-import { authRouter, type SignInLimit } from './features/auth/auth.router.js';
-import { AuthService } from './features/auth/auth.service.js';
-import { createLucia } from './features/auth/lucia.js';
-import { healthRouter } from './features/health/health.router.js';
-import { UsersService } from './features/users/users.service.js';
-import { usersRouter } from './features/users/users.router.js';
-import { workshopsRouter } from './features/workshops/workshops.router.js';
-import { ProgramsService } from './features/programs/programs.service.js';
-import { programsRouter } from './features/programs/programs.router.js';
-import { RunsService } from './features/runs/runs.service.js';
-import { runsRouter } from './features/runs/runs.router.js';
-import { SyncService } from './features/sync/sync.service.js';
-import { syncRouter } from './features/sync/sync.router.js';
-import { VesselsService } from './features/vessels/vessels.service.js';
-import { vesselsRouter } from './features/vessels/vessels.router.js';
-import { EnginesService } from './features/vessels/engines.service.js';
-import { enginesRouter } from './features/vessels/engines.router.js';
-import { SkipperLinksService } from './features/vessels/skipper-links.service.js';
-import { ChecklistsService } from './features/checklists/checklists.service.js';
-import { checklistsRouter } from './features/checklists/checklists.router.js';
 import { AttachmentStorage } from './features/attachments/attachment-storage.js';
-import { AttachmentsService } from './features/attachments/attachments.service.js';
 import { attachmentsRouter } from './features/attachments/attachments.router.js';
-import { loadConfig } from './lib/config.js';
+import { AttachmentsService } from './features/attachments/attachments.service.js';
+import { authRouter } from './features/auth/auth.router.js';
+import { AuthService } from './features/auth/auth.service.js';
+import { loadSession } from './features/auth/load-session.js';
+import { createLucia, type AppLucia } from './features/auth/lucia.js';
+import { signInLimiter, type SignInLimit } from './features/auth/sign-in-http.js';
+import { checklistsRouter } from './features/checklists/checklists.router.js';
+import { ChecklistsService, checklistsOf } from './features/checklists/checklists.service.js';
+import { healthRouter } from './features/health/health.router.js';
 import { devMailRouter } from './features/mail/dev-mail.router.js';
 import type { MailCatcher } from './features/mail/mail-catcher.js';
 import { Outbox } from './features/mail/outbox.js';
-import { reviewRoutes } from './features/review/review-routes.js';
-import type { Mailer } from './lib/mailer.js';
+import { programsRouter } from './features/programs/programs.router.js';
+import { ProgramsService } from './features/programs/programs.service.js';
+import { serviceDueRouter } from './features/reminders/service-due.router.js';
+import { ServiceDueService } from './features/reminders/service-due.service.js';
+import { BoardService } from './features/review/board.service.js';
+import { ReadingsService } from './features/review/readings.service.js';
+import { reviewRouter } from './features/review/review.router.js';
+import { ReviewService } from './features/review/review.service.js';
+import { RunSummaries } from './features/review/run-summaries.js';
+import { hasOpenRun } from './features/runs/run-access.js';
+import { runsRouter } from './features/runs/runs.router.js';
+import { RunsService } from './features/runs/runs.service.js';
+import { CertificateStore } from './features/signoff/certificate-store.js';
+import { signOffRouter } from './features/signoff/signoff.router.js';
+import { SignOffService } from './features/signoff/signoff.service.js';
+import { syncRouter } from './features/sync/sync.router.js';
+import { SyncService } from './features/sync/sync.service.js';
+import { teamRouter } from './features/team/team.router.js';
+import { TeamService } from './features/team/team.service.js';
+import { enginesRouter } from './features/vessels/engines.router.js';
+import { EnginesService } from './features/vessels/engines.service.js';
+import type { VesselRecordChecks } from './features/vessels/record-checks.js';
+import { SkipperLinksService } from './features/vessels/skipper-links.service.js';
+import { vesselsRouter } from './features/vessels/vessels.router.js';
+import { VesselsService } from './features/vessels/vessels.service.js';
+import { workshopsRouter } from './features/workshops/workshops.router.js';
 import { systemClock, type Clock } from './lib/clock.js';
+import { loadConfig } from './lib/config.js';
 import type { Logger } from './lib/logger.js';
+import type { Mailer } from './lib/mailer.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
 import { originCheck } from './middleware/origin-check.js';
-import { loadSession } from './middleware/session.js';
 
 export type AppDeps = {
   dataSource: DataSource;
@@ -61,76 +73,83 @@ export type AppDeps = {
 
 /** Builds the Express app from its dependencies; `server/index.ts` listens, tests call it directly. */
 export function createApp(deps: AppDeps): Express {
-  const clock = deps.clock ?? systemClock;
   const secure = deps.publicOrigin?.startsWith('https://') ?? false;
   const lucia = createLucia(deps.dataSource, { secureCookies: secure });
-  const auth = new AuthService(deps.dataSource, lucia, clock);
-
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
-  app.use(
-    helmet({
-      strictTransportSecurity: secure,
-      contentSecurityPolicy: {
-        directives: {
-          'img-src': ["'self'", 'data:', 'blob:'],
-          // On plain http (a laptop on the workshop LAN) upgrading would break every request.
-          'upgrade-insecure-requests': secure ? [] : null,
-        },
-      },
-    }),
-  );
-  app.use(
-    pinoHttp({
-      logger: deps.logger,
-      autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-      serializers: {
-        req: (req) => ({ method: req.method, url: req.url }),
-        res: (res) => ({ status: res.statusCode }),
-      },
-    }),
-  );
-
-  const api = express.Router();
-  // Sync batches are larger than anything else: that route parses its own body with its own limit.
-  const json = express.json({ limit: deps.jsonLimit ?? '100kb' });
-  api.use((req, res, next) => (req.path === '/sync/push' ? next() : json(req, res, next)));
-  api.use(originCheck(deps.publicOrigin));
-  api.use(loadSession(lucia));
-  api.use(healthRouter(deps.dataSource));
-  api.use(
-    '/auth',
-    authRouter(auth, lucia, deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 }),
-  );
-  const outbox = new Outbox(deps.mailer ?? null, deps.logger);
-  api.use(usersRouter(new UsersService(deps.dataSource, clock), auth, deps.publicOrigin, outbox));
-  const vessels = new VesselsService(deps.dataSource, clock);
-  api.use(vesselsRouter(vessels, new SkipperLinksService(deps.dataSource, vessels)));
-  api.use(enginesRouter(new EnginesService(deps.dataSource, clock)));
-  api.use(checklistsRouter(new ChecklistsService(deps.dataSource, clock)));
-  const storage = new AttachmentStorage(deps.dataDir ?? loadConfig().dataDir);
-  api.use(attachmentsRouter(new AttachmentsService(deps.dataSource, storage), storage));
-  api.use(syncRouter(new SyncService(deps.dataSource, clock, vessels)));
-  api.use(workshopsRouter(deps.dataSource));
-  api.use(programsRouter(new ProgramsService(deps.dataSource, clock)));
-  api.use(runsRouter(new RunsService(deps.dataSource)));
-  api.use(
-    reviewRoutes({
-      dataSource: deps.dataSource,
-      clock,
-      outbox,
-      dataDir: deps.dataDir ?? loadConfig().dataDir,
-    }),
-  );
-  api.use(apiNotFound);
-  app.use('/api', api);
+  app.use(securityHeaders(secure));
+  app.use(requestLog(deps.logger));
+  app.use('/api', apiRouter(deps, lucia));
   if (deps.mailbox) app.use('/dev/mail', devMailRouter(deps.mailbox, loadSession(lucia)));
-
   if (deps.clientDir && fs.existsSync(path.join(deps.clientDir, 'index.html')))
     serveClient(app, deps.clientDir);
   app.use(errorHandler(deps.logger));
   return app;
+}
+
+/** Every API route, mounted here and nowhere else, with the services each one uses. */
+function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
+  const { dataSource: db, publicOrigin } = deps;
+  const clock = deps.clock ?? systemClock;
+  const dataDir = deps.dataDir ?? loadConfig().dataDir;
+  const outbox = new Outbox(deps.mailer ?? null, deps.logger);
+  const limiter = signInLimiter(deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 });
+  const api = express.Router();
+  api.use(jsonBodies(deps.jsonLimit ?? '100kb'), originCheck(publicOrigin), loadSession(lucia));
+  api.use(healthRouter(db));
+  api.use('/auth', authRouter(new AuthService(db, lucia), lucia, limiter));
+  const team = new TeamService(db, lucia, clock);
+  api.use(teamRouter({ service: team, lucia, limiter, publicOrigin, outbox }));
+  const recordChecks: VesselRecordChecks = { hasOpenRun, checklistsOf };
+  const vessels = new VesselsService(db, recordChecks, clock);
+  api.use(vesselsRouter(vessels, new SkipperLinksService(db, vessels)));
+  api.use(enginesRouter(new EnginesService(db, recordChecks, clock)));
+  api.use(checklistsRouter(new ChecklistsService(db, clock)));
+  const storage = new AttachmentStorage(dataDir);
+  api.use(attachmentsRouter(new AttachmentsService(db, storage), storage));
+  api.use(syncRouter(new SyncService(db, clock, vessels)));
+  api.use(workshopsRouter(db));
+  api.use(programsRouter(new ProgramsService(db, clock)));
+  api.use(runsRouter(new RunsService(db)));
+  const summaries = new RunSummaries(db);
+  const board = new BoardService(db, summaries, clock);
+  api.use(reviewRouter(board, new ReviewService(db, clock), new ReadingsService(db)));
+  const store = new CertificateStore(dataDir);
+  api.use(signOffRouter(new SignOffService(db, clock, outbox, store)));
+  api.use(serviceDueRouter(new ServiceDueService(db, summaries, clock)));
+  api.use(apiNotFound);
+  return api;
+}
+
+/** Sync batches are larger than anything else: that route parses its own body with its own limit. */
+function jsonBodies(limit: string): RequestHandler {
+  const json = express.json({ limit });
+  return (req, res, next) => (req.path === '/sync/push' ? next() : json(req, res, next));
+}
+
+function securityHeaders(secure: boolean): RequestHandler {
+  return helmet({
+    strictTransportSecurity: secure,
+    contentSecurityPolicy: {
+      directives: {
+        'img-src': ["'self'", 'data:', 'blob:'],
+        // On plain http (a laptop on the workshop LAN) upgrading would break every request.
+        'upgrade-insecure-requests': secure ? [] : null,
+      },
+    },
+  });
+}
+
+function requestLog(logger: Logger): RequestHandler {
+  return pinoHttp({
+    logger,
+    autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+    serializers: {
+      req: (req) => ({ method: req.method, url: req.url }),
+      res: (res) => ({ status: res.statusCode }),
+    },
+  });
 }
 
 function serveClient(app: Express, clientDir: string) {

@@ -6,7 +6,7 @@ import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
 import { startWalCheckpointer } from './lib/wal-checkpointer.js';
 import { createLogger } from './lib/logger.js';
-import { prepareData } from './lib/bootstrap.js';
+import { prepareData } from './prepare-data.js';
 import { systemClock } from './lib/clock.js';
 import { startMail } from './features/mail/start-mail.js';
 import { Outbox } from './features/mail/outbox.js';

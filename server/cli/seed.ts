@@ -1,7 +1,7 @@
 import 'reflect-metadata';
 import { loadConfig } from '../lib/config.js';
 import { openDatabase } from '../lib/database.js';
-import { prepareData } from '../lib/bootstrap.js';
+import { prepareData } from '../prepare-data.js';
 
 const config = loadConfig();
 const dataSource = await openDatabase(config.databasePath);

@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { RunEvent } from '../../shared/runs/run-event.schema.js';
-import { reserveChangeSeq } from '../features/sync/change-seq.js';
+import { reserveChangeSeq } from '../lib/change-seq.js';
 import type { SimulatedEvent } from './simulate-outings.js';
 
 /** A demo event as stored: device time, arrival time and author. */

@@ -10,7 +10,7 @@ import { frozenPhases } from '../../shared/review/frozen-phases.js';
 import { CLOCK_SKEW_FLAG_MS } from '../../shared/sync/sync.schema.js';
 import { Program } from '../features/programs/program.entity.js';
 import { Run } from '../features/runs/run.entity.js';
-import { reserveChangeSeq } from '../features/sync/change-seq.js';
+import { reserveChangeSeq } from '../lib/change-seq.js';
 import { User } from '../features/users/user.entity.js';
 import { Engine } from '../features/vessels/engine.entity.js';
 import { VesselSkipper } from '../features/vessels/vessel-skipper.entity.js';

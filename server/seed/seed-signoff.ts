@@ -12,7 +12,7 @@ import { orderEvents } from '../../shared/runs/event-order.js';
 import { accountOrdered } from '../../shared/runs/run-accounting.js';
 import type { RunEvent } from '../../shared/runs/run-event.schema.js';
 import { recordAudit } from '../features/audit/audit.service.js';
-import type { RunContext } from '../features/review/run-context.js';
+import type { RunContext } from '../features/runs/run-context.js';
 import type { Run } from '../features/runs/run.entity.js';
 import { certificateContent } from '../features/signoff/certificate-content.js';
 import { certificateFilePath } from '../features/signoff/certificate-store.js';

@@ -8,7 +8,7 @@ import { createApp, type AppDeps } from '../../server/app.js';
 import type { Clock } from '../../server/lib/clock.js';
 import { openDatabase } from '../../server/lib/database.js';
 import { createLogger } from '../../server/lib/logger.js';
-import { prepareData } from '../../server/lib/bootstrap.js';
+import { prepareData } from '../../server/prepare-data.js';
 import { DEMO_PASSWORD } from '../../server/seed/demo-data.js';
 
 export const HOST = 'ringseat.test';

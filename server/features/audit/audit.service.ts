@@ -1,9 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { In, type DataSource, type EntityManager } from 'typeorm';
-import type { Run } from '../runs/run.entity.js';
-import { RunPatchRow } from '../sync/run-patch.entity.js';
-import { User } from '../users/user.entity.js';
-import type { AuditView } from '../../../shared/review/views.js';
+import type { EntityManager } from 'typeorm';
 import { AuditEntry } from './audit-entry.entity.js';
 
 export type AuditAction =
@@ -42,68 +38,3 @@ export async function recordAudit(manager: EntityManager, input: AuditInput): Pr
     detail: input.detail ?? '',
   });
 }
-
-export type { AuditView } from '../../../shared/review/views.js';
-
-/**
- * A run's trail, oldest first. Besides what was recorded here, two facts are read from where
- * they are kept anyway: the assignment (the run row names who assigned it and when) and each
- * submission (every device change is kept in run_patch with its author and arrival time).
- */
-export async function runTrail(dataSource: DataSource, run: Run): Promise<AuditView[]> {
-  const recorded = await dataSource
-    .getRepository(AuditEntry)
-    .find({ where: { recordType: 'run', recordId: run.id }, order: { at: 'ASC' } });
-  const patches = await dataSource
-    .getRepository(RunPatchRow)
-    .find({ where: { runId: run.id }, order: { receivedAt: 'ASC' } });
-  const submissions = patches.filter((p) => p.body.submit === true);
-  const userIds = [...new Set([run.assignedById, ...submissions.map((p) => p.authorId)])];
-  const names = new Map(
-    (
-      await dataSource
-        .getRepository(User)
-        .find({ where: { id: In(userIds) }, select: { id: true, name: true } })
-    ).map((u) => [u.id, u.name]),
-  );
-  const views: AuditView[] = recorded.map((e) => ({
-    action: e.action,
-    at: e.at.toISOString(),
-    actorName: e.actorName,
-    detail: e.detail,
-  }));
-  if (!recorded.some((e) => e.action === 'run-assigned')) {
-    views.push({
-      action: 'run-assigned',
-      at: run.createdAt.toISOString(),
-      actorName: names.get(run.assignedById) ?? 'A former member of staff',
-      detail: run.program.name,
-    });
-  }
-  for (const patch of submissions) {
-    views.push({
-      action: 'run-submitted',
-      at: new Date(patch.receivedAt).toISOString(),
-      actorName: names.get(patch.authorId) ?? 'A former user',
-      detail: '',
-    });
-  }
-  return views.sort(
-    (a, b) =>
-      a.at.localeCompare(b.at) ||
-      ACTION_ORDER.indexOf(a.action as AuditAction) - ACTION_ORDER.indexOf(b.action as AuditAction),
-  );
-}
-
-/** Order of actions recorded at the same instant: the way one leads to the next. */
-const ACTION_ORDER: AuditAction[] = [
-  'run-assigned',
-  'run-submitted',
-  'run-returned',
-  'run-signed-off',
-  'certificate-issued',
-  'mail-sent',
-  'mail-failed',
-  'certificate-downloaded',
-  'service-reminder-sent',
-];

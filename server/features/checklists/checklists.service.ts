@@ -148,3 +148,14 @@ export class ChecklistsService {
       id ? { id, name: nameOf.get(id) ?? 'a former member of staff' } : null;
   }
 }
+
+/** Each engine's checklist and whether it is complete (for the engines list). */
+export function checklistsOf(
+  manager: EntityManager,
+  engineIds: string[],
+): Promise<Array<{ engineId: string; completedAt: Date | null }>> {
+  return manager.getRepository(CommissioningChecklist).find({
+    select: { engineId: true, completedAt: true },
+    where: { engineId: In(engineIds) },
+  });
+}

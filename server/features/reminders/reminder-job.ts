@@ -6,7 +6,7 @@ import type { Logger } from '../../lib/logger.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { serviceReminderMail } from '../mail/mail-templates.js';
 import { outcomeWords, type Outbox } from '../mail/outbox.js';
-import { skippersOf } from '../review/run-context.js';
+import { skippersOf } from '../runs/run-context.js';
 import { Workshop } from '../workshops/workshop.entity.js';
 import { ServiceReminder } from './service-reminder.entity.js';
 import type { EngineServiceDue, ServiceDueService } from './service-due.service.js';

@@ -13,7 +13,7 @@ import {
 import type { Clock } from '../../lib/clock.js';
 import { NotFoundError } from '../../lib/errors.js';
 import type { RunSummaries } from '../review/run-summaries.js';
-import { visibleVesselIds } from '../runs/run-access.js';
+import { visibleVesselIds } from '../vessels/vessel-access.js';
 import { Workshop } from '../workshops/workshop.entity.js';
 import { ServiceReminder } from './service-reminder.entity.js';
 
@@ -108,7 +108,7 @@ export class ServiceDueService {
   }
 
   async forEngine(user: SessionUser, engineId: string) {
-    const visible = await visibleVesselIds(this.dataSource, user);
+    const visible = await visibleVesselIds(this.dataSource.manager, user);
     const found = (await this.forWorkshop(user.workshopId)).find((e) => e.engine.id === engineId);
     if (!found || (visible !== 'all' && !visible.includes(found.engine.vesselId)))
       throw new NotFoundError('engine', engineId);

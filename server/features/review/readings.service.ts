@@ -11,7 +11,7 @@ import {
 import type { ReadingsPage } from '../../../shared/review/views.js';
 import type { Reading } from '../../../shared/runs/run-event.schema.js';
 import type { Run } from '../runs/run.entity.js';
-import { visibleRun } from './run-context.js';
+import { visibleRun } from '../runs/run-access.js';
 
 type Row = { body: string; receivedAt: number };
 

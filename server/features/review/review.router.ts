@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import {
   BoardQuerySchema,
   ReadingsQuerySchema,
@@ -8,13 +7,10 @@ import {
 } from '../../../shared/review/review.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
+import { RunIdParamsSchema } from '../runs/run-params.js';
 import type { BoardService } from './board.service.js';
 import type { ReadingsService } from './readings.service.js';
 import type { ReviewService } from './review.service.js';
-
-export const RunIdParamsSchema = z.object({
-  id: z.uuid({ error: 'The run id in the address is not valid.' }),
-});
 
 export function reviewRouter(
   board: BoardService,

@@ -3,11 +3,11 @@ import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { RunReviewView } from '../../../shared/review/views.js';
 import { CLOCK_SKEW_FLAG_MS } from '../../../shared/sync/sync.schema.js';
 import type { Clock } from '../../lib/clock.js';
-import { runTrail } from '../audit/audit.service.js';
+import { runTrail } from './run-trail.js';
 import { Certificate } from '../signoff/certificate.entity.js';
 import { RunReview } from '../signoff/run-review.entity.js';
-import { loadRunContext, type RunContext } from './run-context.js';
-import { RunFiguresCache } from './run-figures.js';
+import { loadRunContext, type RunContext } from '../runs/run-context.js';
+import { RunFiguresCache } from '../runs/run-figures.js';
 
 const iso = (d: Date | null) => d?.toISOString() ?? null;
 

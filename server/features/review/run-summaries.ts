@@ -3,7 +3,7 @@ import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import type { Program } from '../../../shared/programs/program.schema.js';
 import { frozenPhases } from '../../../shared/review/frozen-phases.js';
 import { accountRun } from '../../../shared/runs/run-accounting.js';
-import { latestHourMeters, loadRunEvents } from './run-events.js';
+import { latestHourMeters, loadRunEvents } from '../runs/run-events.js';
 
 const BATCH = 200;
 

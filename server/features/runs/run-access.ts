@@ -1,25 +1,47 @@
-import { In, type DataSource, type FindOptionsWhere } from 'typeorm';
+import { In, type DataSource, type EntityManager, type FindOptionsWhere } from 'typeorm';
+import { OPEN_RUN_STATES } from '../../../shared/runs/run.schema.js';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
+import { NotFoundError } from '../../lib/errors.js';
+import { visibleVesselIds } from '../vessels/vessel-access.js';
 import { Run } from './run.entity.js';
 
-/** Vessel ids the user may see: every vessel of the workshop for staff, the linked ones for a skipper. */
-export async function visibleVesselIds(
-  dataSource: DataSource,
-  user: SessionUser,
-): Promise<string[] | 'all'> {
-  if (user.role !== 'skipper') return 'all';
-  const links = await dataSource.getRepository(VesselSkipper).find({ where: { userId: user.id } });
-  return links.map((l) => l.vesselId);
-}
+/*
+ * Who may see a run: the same rule as for its vessel (vessels/vessel-access.ts). Staff see every
+ * run of their workshop, a skipper the runs of linked vessels; anything else answers 404.
+ */
 
 /** The `where` that limits runs to those the user may see. */
 export async function visibleRunsWhere(
   dataSource: DataSource,
   user: SessionUser,
 ): Promise<FindOptionsWhere<Run>> {
-  const visible = await visibleVesselIds(dataSource, user);
+  const visible = await visibleVesselIds(dataSource.manager, user);
   return visible === 'all'
     ? { workshopId: user.workshopId }
     : { workshopId: user.workshopId, vesselId: In(visible) };
+}
+
+/** The run (with its engine) if the user may see it, else 404. */
+export async function visibleRun(
+  dataSource: DataSource,
+  user: SessionUser,
+  runId: string,
+): Promise<Run> {
+  const run = await dataSource
+    .getRepository(Run)
+    .findOne({ where: { id: runId, workshopId: user.workshopId }, relations: { engine: true } });
+  const visible = await visibleVesselIds(dataSource.manager, user);
+  if (!run || (visible !== 'all' && !visible.includes(run.vesselId)))
+    throw new NotFoundError('run', runId);
+  return run;
+}
+
+/** True when a run on the vessel or engine is not signed off yet (vessels refuse to archive then). */
+export function hasOpenRun(
+  manager: EntityManager,
+  where: { vesselId: string } | { engineId: string },
+): Promise<boolean> {
+  return manager
+    .getRepository(Run)
+    .exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
 }

@@ -1,13 +1,9 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { AssignProgramInputSchema } from '../../../shared/runs/run.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
+import { RunIdParamsSchema } from './run-params.js';
 import type { RunsService } from './runs.service.js';
-
-const IdParamsSchema = z.object({
-  id: z.uuid({ error: 'The run id in the address is not valid.' }),
-});
 
 export function runsRouter(service: RunsService): Router {
   const router = Router();
@@ -16,9 +12,14 @@ export function runsRouter(service: RunsService): Router {
     res.json({ runs: await service.list(currentUser(res)) });
   });
 
-  router.get('/runs/:id', requireRole(), validate({ params: IdParamsSchema }), async (req, res) => {
-    res.json({ run: await service.get(currentUser(res), String(req.params.id)) });
-  });
+  router.get(
+    '/runs/:id',
+    requireRole(),
+    validate({ params: RunIdParamsSchema }),
+    async (req, res) => {
+      res.json({ run: await service.get(currentUser(res), String(req.params.id)) });
+    },
+  );
 
   router.post(
     '/runs',

@@ -4,14 +4,14 @@ import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import { checkProgramForEngine, resolvePhaseBand } from '../../../shared/programs/resolve-band.js';
 import { OPEN_RUN_STATES, type AssignProgramInput } from '../../../shared/runs/run.schema.js';
-import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { ConflictError, ValidationError } from '../../lib/errors.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { Program } from '../programs/program.entity.js';
 import { Engine } from '../vessels/engine.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
-import { visibleRunsWhere, visibleVesselIds } from './run-access.js';
+import { visibleRun, visibleRunsWhere } from './run-access.js';
 import { Run } from './run.entity.js';
-import { reserveChangeSeq } from '../sync/change-seq.js';
+import { reserveChangeSeq } from '../../lib/change-seq.js';
 import type { RunDetail, RunView } from '../../../shared/runs/run-view.js';
 
 export class RunsService {
@@ -105,13 +105,8 @@ export class RunsService {
   }
 
   /** A run the user may see, or 404 (never 403, so ids of other workshops are not confirmed). */
-  async get(user: SessionUser, id: string) {
-    const run = await this.dataSource
-      .getRepository(Run)
-      .findOne({ where: { id, workshopId: user.workshopId }, relations: { engine: true } });
-    const visible = await visibleVesselIds(this.dataSource, user);
-    if (!run || (visible !== 'all' && !visible.includes(run.vesselId)))
-      throw new NotFoundError('run', id);
+  async get(user: SessionUser, id: string): Promise<RunDetail> {
+    const run = await visibleRun(this.dataSource, user, id);
     const vessel = await this.dataSource
       .getRepository(Vessel)
       .findOneOrFail({ where: { id: run.vesselId } });

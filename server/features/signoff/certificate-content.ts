@@ -1,7 +1,7 @@
 import type { PhaseChart } from '../../../shared/review/chart-series.js';
 import type { CertificateContent } from '../../../shared/review/certificate-content.js';
 import { calendarDateIn } from '../../../shared/review/first-service.js';
-import type { RunContext } from '../review/run-context.js';
+import type { RunContext } from '../runs/run-context.js';
 
 const minutes = (ms: number) => Math.round(ms / 600) / 100;
 const isoOrNull = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());

@@ -1,7 +1,7 @@
 import { firstServiceWords } from '../../../shared/review/certificate-words.js';
 import { certificateMail, returnedMail } from '../mail/mail-templates.js';
 import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
-import type { RunContext } from '../review/run-context.js';
+import type { RunContext } from '../runs/run-context.js';
 
 const engineTitle = (ctx: RunContext) =>
   `${ctx.engine.position} engine (${ctx.engine.maker} ${ctx.engine.model}, serial ${ctx.engine.serialNumber})`;

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { SignOffInputSchema } from '../../../shared/review/review.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
-import { RunIdParamsSchema } from '../review/review.router.js';
+import { RunIdParamsSchema } from '../runs/run-params.js';
 import type { SignOffService } from './signoff.service.js';
 
 export function signOffRouter(service: SignOffService): Router {

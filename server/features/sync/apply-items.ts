@@ -8,7 +8,7 @@ import type {
   RunPatchItem,
 } from '../../../shared/sync/sync.schema.js';
 import type { Run } from '../runs/run.entity.js';
-import { reserveChangeSeq } from './change-seq.js';
+import { reserveChangeSeq } from '../../lib/change-seq.js';
 import { eventStore } from './event-store.js';
 import { RunPatchRow } from './run-patch.entity.js';
 

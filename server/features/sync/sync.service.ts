@@ -12,14 +12,14 @@ import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { NotFoundError } from '../../lib/errors.js';
 import { fieldErrors } from '../../middleware/validate.js';
-import { visibleRunsWhere, visibleVesselIds } from '../runs/run-access.js';
+import { visibleRunsWhere } from '../runs/run-access.js';
+import { visibleVesselIds } from '../vessels/vessel-access.js';
 import { Run } from '../runs/run.entity.js';
 import { toRunDetail } from '../runs/runs.service.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import type { VesselsService } from '../vessels/vessels.service.js';
-import { ChangeCounter } from './change-counter.entity.js';
 import { applyItems, type Applied } from './apply-items.js';
-import { reserveChangeSeq } from './change-seq.js';
+import { latestChangeSeq, reserveChangeSeq } from '../../lib/change-seq.js';
 
 /**
  * A skipper's device holds all of their runs (they want to see verdicts and comments); a staff
@@ -78,9 +78,7 @@ export class SyncService {
       limit,
     );
     const more = events.length === limit;
-    const latest = (
-      await this.dataSource.getRepository(ChangeCounter).findOneByOrFail({ name: 'changes' })
-    ).value;
+    const latest = await latestChangeSeq(this.dataSource);
     const nextCursor = more ? events[events.length - 1].seq : latest;
     const changedIds = visible
       .filter((r) => cursor === 0 || (r.seq > cursor && r.seq <= nextCursor))
@@ -171,7 +169,7 @@ export class SyncService {
         : await this.dataSource
             .getRepository(Run)
             .find({ where: { id: In(runIds), workshopId: user.workshopId } });
-    const visible = await visibleVesselIds(this.dataSource, user);
+    const visible = await visibleVesselIds(this.dataSource.manager, user);
     const allowed = new Map(
       runs.filter((r) => visible === 'all' || visible.includes(r.vesselId)).map((r) => [r.id, r]),
     );

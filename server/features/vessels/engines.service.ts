@@ -13,11 +13,11 @@ import type { EngineRow } from '../../../shared/vessels/vessel-view.js';
 import type { ListStatus } from '../../../shared/vessels/vessel.schema.js';
 import { systemClock, type Clock } from '../../lib/clock.js';
 import { ConflictError, ValidationError } from '../../lib/errors.js';
-import { CommissioningChecklist } from '../checklists/checklist.entity.js';
 import { Engine } from './engine.entity.js';
 import { findVisibleEngine, visibleVesselIds } from './vessel-access.js';
 import { byPosition, engineMatches, toEngineView } from './vessel-views.js';
-import { refuseArchived, refuseOpenRuns } from './vessels.service.js';
+import { refuseOpenRuns, type VesselRecordChecks } from './record-checks.js';
+import { refuseArchived } from './vessels.service.js';
 import { Vessel } from './vessel.entity.js';
 
 export type EngineListQuery = { q: string; status: ListStatus; vesselId?: string };
@@ -32,6 +32,7 @@ const archivedWhere = (status: ListStatus) =>
 export class EnginesService {
   constructor(
     private readonly dataSource: DataSource,
+    private readonly checks: VesselRecordChecks,
     private readonly clock: Clock = systemClock,
   ) {}
 
@@ -96,6 +97,7 @@ export class EnginesService {
       const engine = await findVisibleEngine(manager, user, id);
       if (archived && !engine.archivedAt) {
         await refuseOpenRuns(
+          this.checks,
           manager,
           { engineId: id },
           'This engine has a break-in run that is not signed off. Finish or sign off that run first.',
@@ -163,10 +165,10 @@ export class EnginesService {
 
   private async rows(manager: EntityManager, engines: Engine[]): Promise<EngineRow[]> {
     if (engines.length === 0) return [];
-    const checklists = await manager.getRepository(CommissioningChecklist).find({
-      select: { engineId: true, completedAt: true },
-      where: { engineId: In(engines.map((e) => e.id)) },
-    });
+    const checklists = await this.checks.checklistsOf(
+      manager,
+      engines.map((e) => e.id),
+    );
     const checklistOf = new Map(checklists.map((c) => [c.engineId, c]));
     return engines.map((engine) => {
       const checklist = checklistOf.get(engine.id);

@@ -8,7 +8,6 @@ import {
   type FindOptionsWhere,
 } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import { OPEN_RUN_STATES } from '../../../shared/runs/run.schema.js';
 import type { VesselView } from '../../../shared/vessels/vessel-view.js';
 import {
   VesselListQuerySchema,
@@ -18,7 +17,7 @@ import {
 import type { Clock } from '../../lib/clock.js';
 import { systemClock } from '../../lib/clock.js';
 import { ConflictError } from '../../lib/errors.js';
-import { Run } from '../runs/run.entity.js';
+import { refuseOpenRuns, type VesselRecordChecks } from './record-checks.js';
 import { findVisibleVessel } from './vessel-access.js';
 import { toVesselView, vesselMatches } from './vessel-views.js';
 import { Vessel } from './vessel.entity.js';
@@ -33,6 +32,7 @@ const archivedWhere = (status: VesselListQuery['status']) =>
 export class VesselsService {
   constructor(
     private readonly dataSource: DataSource,
+    private readonly checks: VesselRecordChecks,
     private readonly clock: Clock = systemClock,
   ) {}
 
@@ -90,6 +90,7 @@ export class VesselsService {
       const vessel = await findVisibleVessel(manager, user, id);
       if (archived && !vessel.archivedAt) {
         await refuseOpenRuns(
+          this.checks,
           manager,
           { vesselId: id },
           `${vessel.name} has an engine with a break-in run that is not signed off. Finish or sign off that run first.`,
@@ -113,16 +114,4 @@ export class VesselsService {
 export function refuseArchived(vessel: Vessel) {
   if (vessel.archivedAt)
     throw new ConflictError(`${vessel.name} is archived. Restore it before changing it.`);
-}
-
-/** A record with a break-in still open cannot be archived: the run would lose its place. */
-export async function refuseOpenRuns(
-  manager: EntityManager,
-  where: { vesselId: string } | { engineId: string },
-  detail: string,
-) {
-  const open = await manager
-    .getRepository(Run)
-    .exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
-  if (open) throw new ConflictError(detail);
 }

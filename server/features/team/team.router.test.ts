@@ -11,7 +11,7 @@ import {
 import { Vessel } from '../vessels/vessel.entity.js';
 import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
 import { Invite } from './invite.entity.js';
-import { User } from './user.entity.js';
+import { User } from '../users/user.entity.js';
 
 let server: TestServer;
 const clock = new FakeClock();

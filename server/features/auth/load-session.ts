@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
-import type { SessionUser } from '../../shared/auth/auth.schema.js';
-import { toSessionUser, type AppLucia } from '../features/auth/lucia.js';
+import type { SessionUser } from '../../../shared/auth/auth.schema.js';
+import { toSessionUser, type AppLucia } from './lucia.js';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace

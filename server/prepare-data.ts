@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
-import { syncBuiltInPrograms } from '../features/programs/programs.service.js';
-import { seedDemo } from '../seed/seed.js';
+import { syncBuiltInPrograms } from './features/programs/programs.service.js';
+import { seedDemo } from './seed/seed.js';
 
 /**
  * What every start does after the migrations: demo data into a new database (when asked),

@@ -5,7 +5,7 @@ import type { LoggedEvent } from '../../../shared/review/views.js';
 import { orderEvents } from '../../../shared/runs/event-order.js';
 import { accountOrdered, type RunAccount } from '../../../shared/runs/run-accounting.js';
 import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
-import type { Run } from '../runs/run.entity.js';
+import type { Run } from './run.entity.js';
 import { countRunEvents, latestHourMeters, loadRunEvents } from './run-events.js';
 
 /** Plenty for any honest run; a device stuck raising alerts should not swamp the page. */

@@ -1,23 +1,35 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
-import { InviteInputSchema } from '../../../shared/auth/auth.schema.js';
+import { AcceptInviteInputSchema, InviteInputSchema } from '../../../shared/auth/auth.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
-import type { AuthService } from '../auth/auth.service.js';
+import type { AppLucia } from '../auth/lucia.js';
+import { startSession } from '../auth/sign-in-http.js';
 import { inviteMail } from '../mail/mail-templates.js';
 import type { Outbox } from '../mail/outbox.js';
-import type { UsersService } from './users.service.js';
+import type { TeamService } from './team.service.js';
 
 const TokenParamsSchema = z.object({
   token: z.string().min(20, { error: 'The invite link is incomplete.' }).max(200),
 });
 
-export function usersRouter(
-  service: UsersService,
-  auth: AuthService,
-  publicOrigin: string | undefined,
-  outbox: Outbox,
-): Router {
+export interface TeamRouterDeps {
+  service: TeamService;
+  lucia: AppLucia;
+  /** The sign-in limiter: accepting an invite checks a secret too. */
+  limiter: RequestHandler;
+  publicOrigin: string | undefined;
+  outbox: Outbox;
+}
+
+/** The team list, invites, and accepting one (which signs the new person in). */
+export function teamRouter({
+  service,
+  lucia,
+  limiter,
+  publicOrigin,
+  outbox,
+}: TeamRouterDeps): Router {
   const router = Router();
   const inviteLink = (req: Request, token: string) =>
     `${publicOrigin ?? `${req.protocol}://${req.get('host')}`}/invite/${token}`;
@@ -60,7 +72,7 @@ export function usersRouter(
 
   // Public: the invite page shows whom the link is for before the password is set.
   router.get('/invites/:token', validate({ params: TokenParamsSchema }), async (req, res) => {
-    const invite = await auth.findOpenInvite(String(req.params.token));
+    const invite = await service.findOpenInvite(String(req.params.token));
     res.json({
       email: invite.email,
       role: invite.role,
@@ -68,6 +80,16 @@ export function usersRouter(
       expiresAt: invite.expiresAt.toISOString(),
     });
   });
+
+  router.post(
+    '/auth/accept-invite',
+    limiter,
+    validate({ body: AcceptInviteInputSchema }),
+    async (req, res) => {
+      const session = await service.acceptInvite(req.body);
+      await startSession(lucia, res, session.id, 201);
+    },
+  );
 
   return router;
 }

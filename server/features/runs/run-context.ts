@@ -10,9 +10,8 @@ import {
 import { frozenPhases } from '../../../shared/review/frozen-phases.js';
 import type { PhaseChart } from '../../../shared/review/chart-series.js';
 import type { RunAccount } from '../../../shared/runs/run-accounting.js';
-import { NotFoundError } from '../../lib/errors.js';
-import { visibleVesselIds } from '../runs/run-access.js';
-import { Run } from '../runs/run.entity.js';
+import { visibleRun } from './run-access.js';
+import { Run } from './run.entity.js';
 import { User } from '../users/user.entity.js';
 import type { Engine } from '../vessels/engine.entity.js';
 import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
@@ -33,21 +32,6 @@ export interface RunContext {
   /** The rest of what the events give: the log, counts, the newest hour meter. */
   figures: Pick<RunFigures, 'events' | 'eventsTotal' | 'readingCount'>;
   firstService: FirstServiceView | null;
-}
-
-/** The run if the user may see it (staff: their workshop's; a skipper: linked vessels'), else 404. */
-export async function visibleRun(
-  dataSource: DataSource,
-  user: SessionUser,
-  runId: string,
-): Promise<Run> {
-  const run = await dataSource
-    .getRepository(Run)
-    .findOne({ where: { id: runId, workshopId: user.workshopId }, relations: { engine: true } });
-  const visible = await visibleVesselIds(dataSource, user);
-  if (!run || (visible !== 'all' && !visible.includes(run.vesselId)))
-    throw new NotFoundError('run', runId);
-  return run;
 }
 
 export async function skippersOf(dataSource: DataSource, vesselId: string) {

@@ -1,18 +1,27 @@
 import { randomUUID } from 'node:crypto';
 import { In, type DataSource } from 'typeorm';
-import type { InviteInput, SessionUser } from '../../../shared/auth/auth.schema.js';
+import type {
+  AcceptInviteInput,
+  InviteInput,
+  SessionUser,
+} from '../../../shared/auth/auth.schema.js';
 import type { Clock } from '../../lib/clock.js';
-import { ConflictError, ValidationError } from '../../lib/errors.js';
+import { ConflictError, GoneError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { hashPassword } from '../../lib/passwords.js';
 import { hashToken, newToken } from '../../lib/tokens.js';
+import type { AppLucia } from '../auth/lucia.js';
+import { User } from '../users/user.entity.js';
+import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import { Invite } from './invite.entity.js';
-import { User } from './user.entity.js';
 
 const INVITE_VALID_DAYS = 7;
 
-export class UsersService {
+/** The workshop's people: the team list, and invites from the e-mail to the first sign-in. */
+export class TeamService {
   constructor(
     private readonly dataSource: DataSource,
+    private readonly lucia: AppLucia,
     private readonly clock: Clock,
   ) {}
 
@@ -73,5 +82,52 @@ export class UsersService {
     });
     await this.dataSource.getRepository(Invite).insert(invite);
     return { invite, token };
+  }
+
+  /** Finds a usable invite or says plainly why the link does not work. */
+  async findOpenInvite(token: string): Promise<Invite> {
+    const invite = await this.dataSource
+      .getRepository(Invite)
+      .findOne({ where: { tokenHash: hashToken(token) }, relations: { workshop: true } });
+    if (!invite) throw new NotFoundError('invite');
+    if (invite.acceptedAt)
+      throw new GoneError('This invite has already been used. Sign in with the password you set.');
+    if (invite.expiresAt.getTime() < this.clock.now().getTime()) {
+      throw new GoneError('This invite has expired. Ask your workshop to send a new one.');
+    }
+    return invite;
+  }
+
+  /** Creates the account, links the invited skipper's vessels and uses up the invite, all or nothing. */
+  async acceptInvite(input: AcceptInviteInput) {
+    const invite = await this.findOpenInvite(input.token);
+    const passwordHash = await hashPassword(input.password);
+    const userId = randomUUID();
+    await this.dataSource.transaction(async (manager) => {
+      if (await manager.getRepository(User).exists({ where: { email: invite.email } })) {
+        throw new ConflictError(
+          'An account with this e-mail address already exists. Sign in instead.',
+          [{ field: 'token', message: 'This e-mail address already has an account.' }],
+        );
+      }
+      await manager.getRepository(User).insert({
+        id: userId,
+        workshopId: invite.workshopId,
+        email: invite.email,
+        name: input.name,
+        role: invite.role,
+        passwordHash,
+        archivedAt: null,
+      });
+      if (invite.role === 'skipper' && invite.vesselIds.length > 0) {
+        await manager
+          .getRepository(VesselSkipper)
+          .insert(invite.vesselIds.map((vesselId) => ({ vesselId, userId })));
+      }
+      await manager
+        .getRepository(Invite)
+        .update({ id: invite.id }, { acceptedAt: this.clock.now() });
+    });
+    return this.lucia.createSession(userId, {});
   }
 }

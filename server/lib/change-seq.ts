@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { ChangeCounter } from './change-counter.entity.js';
 
 /**
@@ -10,4 +10,10 @@ export async function reserveChangeSeq(manager: EntityManager, count = 1): Promi
   await repo.increment({ name: 'changes' }, 'value', count);
   const { value } = await repo.findOneOrFail({ where: { name: 'changes' } });
   return value - count + 1;
+}
+
+/** The last change number handed out (committed or in the caller's transaction). */
+export async function latestChangeSeq(db: DataSource | EntityManager): Promise<number> {
+  const { value } = await db.getRepository(ChangeCounter).findOneByOrFail({ name: 'changes' });
+  return value;
 }
