@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import type { SessionUser } from '../../shared/auth/auth.schema';
 import { problem, stubFetch } from '../test/fetch-stub';
 import { createTestQueryClient, renderRoutes, testUser } from '../test/render';
-import type { VesselSummary } from '../features/vessels/types';
+import type { VesselView } from '../../shared/vessels/vessel-view';
 import { createRoutes } from './router';
 
 beforeEach(() => {
@@ -17,18 +17,20 @@ afterEach(() => {
   vi.restoreAllMocks();
 });
 
-const vessel: VesselSummary = {
+const vessel: VesselView = {
   id: 'vessel-1',
   name: 'Kittiwake',
   hin: 'QMW12345A626',
-  type: 'Centre console',
+  type: 'runabout',
   lengthM: 6.4,
   homePort: 'Port Ellen',
   skippers: [{ id: 'user-skipper', name: 'Ada Harbour' }],
   engines: [
     {
       id: 'engine-1',
+      vesselId: 'vessel-1',
       position: 'single',
+      installation: 'outboard',
       maker: 'Acme',
       model: 'F115',
       serialNumber: 'SN-0042',
@@ -37,10 +39,21 @@ const vessel: VesselSummary = {
       cycle: 'four-stroke',
       ratedRpmMin: 5000,
       ratedRpmMax: 6000,
+      gearRatio: null,
+      propBlades: null,
+      propDiameterIn: null,
+      propPitchIn: null,
+      tachSource: 'none',
+      poles: null,
+      pulleyRatio: null,
       hourMeterAtCommissioning: 0.4,
       commissionedOn: '2026-05-12',
+      createdAt: '2026-05-12T09:00:00Z',
+      updatedAt: '2026-05-12T09:00:00Z',
     },
   ],
+  archivedAt: null,
+  updatedAt: '2026-05-12T09:00:00Z',
 };
 
 function renderApp(

@@ -1,11 +1,9 @@
 import Dexie, { type Table } from 'dexie';
 import type { SessionUser } from '../../shared/auth/auth.schema';
-import type { RpmBand } from '../../shared/programs/phase-band.schema';
-import type { Program } from '../../shared/programs/program.schema';
 import type { RunEvent } from '../../shared/runs/run-event.schema';
-import type { RunState } from '../../shared/runs/run.schema';
+import type { RunDetail } from '../../shared/runs/run-view';
 import type { RunPatchItem } from '../../shared/sync/sync.schema';
-import type { VesselSummary } from '../features/vessels/types';
+import type { VesselView } from '../../shared/vessels/vessel-view';
 
 /*
  * The one on-device database. Copies from the server (vessels, runs with their frozen programs,
@@ -16,34 +14,8 @@ import type { VesselSummary } from '../features/vessels/types';
 
 export type SyncState = 'pending' | 'synced' | 'rejected';
 
-export interface RunRecord {
-  id: string;
-  state: RunState;
-  vessel: { id: string; name: string };
-  engine: {
-    id: string;
-    position: string;
-    maker: string;
-    model: string;
-    serialNumber: string;
-    ratedRpmMin: number;
-    ratedRpmMax: number;
-  };
-  programId: string;
-  programName: string;
-  phaseCount: number;
-  totalMinutes: number;
-  program: Program;
-  bands: Record<string, RpmBand>;
-  currentPhaseId: string | null;
-  notes: string;
-  submittedAt: string | null;
-  signedOffAt: string | null;
-  createdAt: string;
-  updatedAt: string;
-  /** The workshop's latest review comment (returned runs), when there is one. */
-  reviewComment?: string | null;
-}
+/** A run as the device keeps it: the server's view with its frozen program and resolved bands. */
+export type RunRecord = RunDetail;
 
 export interface EventRecord {
   id: string;
@@ -109,7 +81,7 @@ export interface MetaRecord {
 }
 
 export class RingseatDb extends Dexie {
-  vessels!: Table<VesselSummary, string>;
+  vessels!: Table<VesselView, string>;
   runs!: Table<RunRecord, string>;
   events!: Table<EventRecord, string>;
   runPatches!: Table<RunPatchRecord, string>;

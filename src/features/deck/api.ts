@@ -2,7 +2,7 @@ import { useLiveQuery } from 'dexie-react-hooks';
 import type { RunEvent } from '../../../shared/runs/run-event.schema';
 import { db, type OutingRecord, type RunRecord } from '../../lib/db';
 import { useDeviceWrite } from '../../lib/use-device-write';
-import type { VesselSummary } from '../vessels/types';
+import type { VesselView } from '../../../shared/vessels/vessel-view';
 import {
   activeOuting,
   advancePhase,
@@ -24,7 +24,7 @@ import {
 export interface DeckVessel {
   id: string;
   name: string;
-  vessel: VesselSummary | null;
+  vessel: VesselView | null;
   runs: RunRecord[];
   outing: OutingRecord | null;
 }

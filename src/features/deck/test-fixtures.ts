@@ -1,8 +1,9 @@
 import { BUILT_IN_PROGRAMS } from '../../../shared/programs/built-in-programs';
 import { resolvePhaseBand } from '../../../shared/programs/resolve-band';
 import type { RpmBand } from '../../../shared/programs/phase-band.schema';
+import type { EnginePosition } from '../../../shared/engines/engine.schema';
 import type { RunRecord } from '../../lib/db';
-import type { VesselSummary } from '../vessels/types';
+import type { VesselView } from '../../../shared/vessels/vessel-view';
 
 /*
  * Made-up records for tests: a twin-engined boat on the built-in four-stroke program, engines
@@ -44,6 +45,8 @@ export function testRun(
     bands,
     currentPhaseId: null,
     notes: '',
+    clockSkewMs: null,
+    lastEventAt: null,
     submittedAt: null,
     signedOffAt: null,
     createdAt: new Date(T0).toISOString(),
@@ -52,7 +55,8 @@ export function testRun(
   };
 }
 
-export function testVessel(runs: RunRecord[]): VesselSummary {
+export function testVessel(runs: RunRecord[]): VesselView {
+  const at = new Date(T0).toISOString();
   return {
     id: VESSEL_ID,
     name: 'Test Tern',
@@ -63,7 +67,9 @@ export function testVessel(runs: RunRecord[]): VesselSummary {
     skippers: [],
     engines: runs.map((run) => ({
       id: run.engine.id,
-      position: run.engine.position,
+      vesselId: VESSEL_ID,
+      position: run.engine.position as EnginePosition,
+      installation: 'outboard',
       maker: run.engine.maker,
       model: run.engine.model,
       serialNumber: run.engine.serialNumber,
@@ -72,13 +78,21 @@ export function testVessel(runs: RunRecord[]): VesselSummary {
       cycle: 'four-stroke',
       ratedRpmMin: run.engine.ratedRpmMin,
       ratedRpmMax: run.engine.ratedRpmMax,
-      hourMeterAtCommissioning: 1,
-      commissionedOn: '2026-11-24',
+      gearRatio: null,
+      propBlades: null,
+      propDiameterIn: null,
+      propPitchIn: null,
       tachSource: 'charging-coil',
       poles: 12,
       pulleyRatio: null,
+      hourMeterAtCommissioning: 1,
+      commissionedOn: '2026-11-24',
+      createdAt: at,
+      updatedAt: at,
     })),
-  } as VesselSummary;
+    archivedAt: null,
+    updatedAt: at,
+  };
 }
 
 export const refOf = (run: RunRecord) => ({ runId: run.id, engineId: run.engine.id });

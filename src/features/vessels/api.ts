@@ -9,7 +9,6 @@ import type { VesselInput, ListStatus } from '../../../shared/vessels/vessel.sch
 import type { SkipperOption, VesselView } from '../../../shared/vessels/vessel-view';
 import { api, isApiError } from '../../lib/api-client';
 import { db } from '../../lib/db';
-import type { VesselSummary } from './types';
 
 export type VesselFilters = { q: string; status: ListStatus };
 export type EngineFilters = { q: string; status: ListStatus; vesselId?: string };
@@ -45,9 +44,9 @@ export const engineKeys = {
  * The user's vessels; with no network, the copy sync keeps on this device, so a skipper opening
  * the app offshore still sees their boats.
  */
-export async function fetchVesselList(signal?: AbortSignal): Promise<{ vessels: VesselSummary[] }> {
+export async function fetchVesselList(signal?: AbortSignal): Promise<{ vessels: VesselView[] }> {
   try {
-    return await api.get<{ vessels: VesselSummary[] }>('/api/vessels', signal);
+    return await api.get<{ vessels: VesselView[] }>('/api/vessels', signal);
   } catch (error) {
     if (!isApiError(error) || !error.isNetworkError) throw error;
     const onDevice = (await db.vessels.toArray()).sort((a, b) => a.name.localeCompare(b.name));

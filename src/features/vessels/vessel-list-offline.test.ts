@@ -1,19 +1,20 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { db } from '../../lib/db';
 import { fetchVesselList } from './api';
-import type { VesselSummary } from './types';
+import type { VesselView } from '../../../shared/vessels/vessel-view';
 
-const vessel = (name: string) =>
-  ({
-    id: `id-${name}`,
-    name,
-    hin: '',
-    type: 'workboat',
-    lengthM: 6,
-    homePort: 'Kestrel Harbour',
-    skippers: [],
-    engines: [],
-  }) as VesselSummary;
+const vessel = (name: string): VesselView => ({
+  id: `id-${name}`,
+  name,
+  hin: '',
+  type: 'workboat',
+  lengthM: 6,
+  homePort: 'Kestrel Harbour',
+  skippers: [],
+  engines: [],
+  archivedAt: null,
+  updatedAt: '2026-05-12T09:00:00Z',
+});
 
 beforeEach(async () => {
   await db.delete();

@@ -1,5 +1,5 @@
 import { db, type EventRecord, type RunRecord } from '../db';
-import type { VesselSummary } from '../../features/vessels/types';
+import type { VesselView } from '../../../shared/vessels/vessel-view';
 import type { RunEvent } from '../../../shared/runs/run-event.schema';
 
 export type PullResponse = {
@@ -8,7 +8,7 @@ export type PullResponse = {
   runIds: string[];
   runs: RunRecord[];
   events: Array<{ runId: string; receivedAt: number; event: RunEvent }>;
-  vessels: VesselSummary[];
+  vessels: VesselView[];
 };
 
 /**

@@ -1,12 +1,12 @@
 import { capitalise, formatDate, formatHours, formatRpmRange } from '../../../lib/format';
-import type { EngineSummary } from '../types';
+import type { EngineView } from '../../../../shared/vessels/vessel-view';
 
 const cycleLabel = { 'two-stroke': '2-stroke', 'four-stroke': '4-stroke' } as const;
 
-export const engineTitle = (engine: EngineSummary) =>
+export const engineTitle = (engine: EngineView) =>
   `${capitalise(engine.position)} · ${engine.maker} ${engine.model}`.trim();
 
-export function RatedRpm({ engine }: { engine: EngineSummary }) {
+export function RatedRpm({ engine }: { engine: EngineView }) {
   return (
     <span className="figures whitespace-nowrap">
       {formatRpmRange(engine.ratedRpmMin, engine.ratedRpmMax)} RPM
@@ -15,7 +15,7 @@ export function RatedRpm({ engine }: { engine: EngineSummary }) {
 }
 
 /** One engine's identity and ratings, as a definition list. */
-export function EngineDetails({ engine }: { engine: EngineSummary }) {
+export function EngineDetails({ engine }: { engine: EngineView }) {
   return (
     <div className="rounded-md border-2 border-line bg-paper p-3">
       <h3 className="font-bold">{engineTitle(engine)}</h3>

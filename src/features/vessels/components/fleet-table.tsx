@@ -1,11 +1,11 @@
 import { Link } from 'react-router-dom';
 import { Table, Td, Th } from '../../../components/ui/table';
-import type { VesselSummary } from '../types';
+import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { engineTitle, RatedRpm } from './engine-details';
 import { vesselFacts } from './vessel-card';
 
 /** The workshop's overview on wide screens: one row per vessel, its engines listed in the row. */
-export function FleetTable({ vessels }: { vessels: VesselSummary[] }) {
+export function FleetTable({ vessels }: { vessels: VesselView[] }) {
   return (
     <Table>
       <caption className="sr-only">Vessels and engines of the workshop</caption>
@@ -41,7 +41,7 @@ export function FleetTable({ vessels }: { vessels: VesselSummary[] }) {
   );
 }
 
-function EngineColumns({ vessel }: { vessel: VesselSummary }) {
+function EngineColumns({ vessel }: { vessel: VesselView }) {
   if (vessel.engines.length === 0) {
     return (
       <Td colSpan={3} className="text-muted">

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card';
-import type { VesselSummary } from '../types';
+import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { EngineDetails } from './engine-details';
 
-export function vesselFacts(vessel: VesselSummary): string {
+export function vesselFacts(vessel: VesselView): string {
   const length = vessel.lengthM !== null ? `${vessel.lengthM} m` : null;
   return [vessel.type, length, vessel.homePort].filter(Boolean).join(' · ');
 }
@@ -16,7 +16,7 @@ export function VesselCard({
   vessel,
   showSkippers = false,
 }: {
-  vessel: VesselSummary;
+  vessel: VesselView;
   showSkippers?: boolean;
 }) {
   const title = showSkippers ? (
