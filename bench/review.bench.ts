@@ -1,17 +1,21 @@
 import 'reflect-metadata';
+import type { Database } from 'better-sqlite3';
 import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { createApp } from '../server/app.js';
+import { insertRunEventsSql, runEventRow } from '../server/features/runs/run-event-row.js';
 import { prepareData } from '../server/prepare-data.js';
 import { openDatabase } from '../server/lib/database.js';
+import { nativeConnection } from '../server/lib/native-sql.js';
 import { createLogger } from '../server/lib/logger.js';
 import { hashPassword } from '../server/lib/passwords.js';
 import { BUILT_IN_PROGRAMS } from '../shared/programs/built-in-programs.js';
 import { resolvePhaseBand } from '../shared/programs/resolve-band.js';
 import { THROTTLE_POSITIONS } from '../shared/programs/throttle.js';
+import type { RunEvent } from '../shared/runs/run-event.schema.js';
 
 /*
  * Issue target: the runs board of a workshop with 2,000 runs, and the review of a run with
@@ -48,10 +52,7 @@ const STATES = [
   'under-way',
 ];
 
-type Native = {
-  prepare: (sql: string) => { run: (...p: unknown[]) => unknown };
-  transaction: (fn: () => void) => () => void;
-};
+type Native = Database;
 
 function insertWorkshop(
   db: Native,
@@ -126,24 +127,16 @@ function insertRun(
     events ? T0 + events * everyMs : null,
     seq.value++,
   );
-  const insert = db.prepare(
-    'INSERT INTO "run_event" ("id", "runId", "workshopId", "engineId", "kind", "at", "receivedAt", "authorId", "phaseId", "rpm", "throttle", "body", "seq") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
-  );
+  const insert = db.prepare(insertRunEventsSql(1));
   const add = (event: Record<string, unknown> & { id: string; kind: string; at: number }) =>
     insert.run(
-      event.id,
-      runId,
-      ids.workshop,
-      engineId,
-      event.kind,
-      event.at,
-      event.at + 60_000,
-      ids.manager,
-      (event.phaseId as string) ?? null,
-      (event.rpm as number) ?? null,
-      (event.throttle as string) ?? null,
-      JSON.stringify(event),
-      seq.value++,
+      ...runEventRow({ engineId, ...event } as RunEvent, {
+        runId,
+        workshopId: ids.workshop,
+        receivedAt: event.at + 60_000,
+        authorId: ids.manager,
+        seq: seq.value++,
+      }),
     );
   const perSession = Math.ceil((5 * 3_600_000) / everyMs);
   let required = 0;
@@ -197,7 +190,7 @@ async function main() {
   const dataSource = await openDatabase(path.join(dir, 'bench.sqlite'));
   await prepareData(dataSource, { seed: 'none' });
   const ids = { workshop: randomUUID(), manager: randomUUID() };
-  const db = (dataSource.driver as unknown as { databaseConnection: Native }).databaseConnection;
+  const db = nativeConnection(dataSource);
   const passwordHash = await hashPassword('ringseat-bench');
   const seq = { value: 1 };
   let longRun = '';

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import path from 'node:path';
 import Database from 'better-sqlite3';
+import { insertRunEventsSql, runEventRow } from '../server/features/runs/run-event-row.js';
 import { MAX_PUSH_ITEMS } from '../shared/sync/sync.schema.js';
 import { startRealServer } from '../tests/helpers/real-server.js';
 
@@ -108,26 +109,18 @@ async function timeRaw(items: ReturnType<typeof readings>, workshopId: string) {
   const { maxSeq } = db.prepare('SELECT COALESCE(MAX(seq), 0) AS maxSeq FROM run_event').get() as {
     maxSeq: number;
   };
-  const insert = db.prepare(
-    'INSERT INTO run_event (id, runId, workshopId, engineId, kind, at, receivedAt, authorId, phaseId, rpm, throttle, body, seq) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)',
-  );
+  const insert = db.prepare(insertRunEventsSql(1));
   const started = performance.now();
   db.transaction(() => {
     items.forEach(({ runId, event }, i) =>
       insert.run(
-        event.id,
-        runId,
-        workshopId,
-        event.engineId,
-        event.kind,
-        event.at,
-        Date.now(),
-        'bench',
-        event.phaseId,
-        event.rpm,
-        event.throttle,
-        JSON.stringify(event),
-        maxSeq + i + 1,
+        ...runEventRow(event, {
+          runId,
+          workshopId,
+          receivedAt: Date.now(),
+          authorId: 'bench',
+          seq: maxSeq + i + 1,
+        }),
       ),
     );
   })();

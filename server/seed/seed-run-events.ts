@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { RunEvent } from '../../shared/runs/run-event.schema.js';
 import { reserveChangeSeq } from '../lib/change-seq.js';
+import { insertRunEventsSql, runEventRow } from '../features/runs/run-event-row.js';
 import type { SimulatedEvent } from './simulate-outings.js';
 
 /** A demo event as stored: device time, arrival time and author. */
@@ -37,21 +38,6 @@ export function storedEvents(
   });
 }
 
-const COLUMNS = [
-  'id',
-  'runId',
-  'workshopId',
-  'engineId',
-  'kind',
-  'at',
-  'receivedAt',
-  'authorId',
-  'phaseId',
-  'rpm',
-  'throttle',
-  'body',
-  'seq',
-];
 const ROWS_PER_INSERT = 200;
 
 /** Inserts the events in arrival order, numbered as sync would have numbered them. */
@@ -63,29 +49,10 @@ export async function insertEvents(manager: EntityManager, events: StoredEvent[]
   let seq = await reserveChangeSeq(manager, ordered.length);
   for (let from = 0; from < ordered.length; from += ROWS_PER_INSERT) {
     const chunk = ordered.slice(from, from + ROWS_PER_INSERT);
-    const params: unknown[] = [];
-    for (const { runId, workshopId, event: e, receivedAt, authorId } of chunk) {
-      params.push(
-        e.id,
-        runId,
-        workshopId,
-        e.engineId,
-        e.kind,
-        e.at,
-        receivedAt,
-        authorId,
-        'phaseId' in e ? (e.phaseId ?? null) : null,
-        e.kind === 'reading' ? e.rpm : null,
-        e.kind === 'reading' ? e.throttle : null,
-        JSON.stringify(e),
-        seq++,
-      );
-    }
-    const rows = chunk.map(() => `(${COLUMNS.map(() => '?').join(', ')})`).join(', ');
-    await manager.query(
-      `INSERT INTO "run_event" (${COLUMNS.map((c) => `"${c}"`).join(', ')}) VALUES ${rows}`,
-      params,
+    const params = chunk.flatMap(({ runId, workshopId, event, receivedAt, authorId }) =>
+      runEventRow(event, { runId, workshopId, receivedAt, authorId, seq: seq++ }),
     );
+    await manager.query(insertRunEventsSql(chunk.length), params);
   }
 }
 

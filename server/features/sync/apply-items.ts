@@ -103,22 +103,13 @@ async function insertEvents(
   const store = eventStore(manager);
   for (const { item, run } of candidates) {
     const e = item.event;
-    const isReading = e.kind === 'reading';
-    const isNew = store.insert([
-      e.id,
-      run.id,
-      run.workshopId,
-      e.engineId,
-      e.kind,
-      e.at,
-      ctx.now,
-      ctx.user.id,
-      'phaseId' in e ? (e.phaseId ?? null) : null,
-      isReading ? e.rpm : null,
-      isReading ? e.throttle : null,
-      JSON.stringify(e),
-      seq++,
-    ]);
+    const isNew = store.insert(e, {
+      runId: run.id,
+      workshopId: run.workshopId,
+      receivedAt: ctx.now,
+      authorId: ctx.user.id,
+      seq: seq++,
+    });
     if (isNew) stored.add(e.id);
   }
   return stored;
