@@ -11,7 +11,12 @@ export default defineConfig({
         test: {
           name: 'node',
           environment: 'node',
-          include: ['shared/**/*.test.ts', 'server/**/*.test.ts', 'scripts/**/*.test.ts'],
+          include: [
+            'shared/**/*.test.ts',
+            'server/**/*.test.ts',
+            'scripts/**/*.test.ts',
+            'tests/architecture/**/*.test.ts',
+          ],
           testTimeout: 30_000,
           hookTimeout: 60_000,
         },
