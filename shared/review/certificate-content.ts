@@ -1,6 +1,7 @@
 import type { RpmBand } from '../programs/phase-band.schema';
 import type { ThrottleCeiling } from '../programs/throttle';
 import type { Verdict } from '../runs/phase-tally';
+import type { CommissionedEngine } from '../runs/run-view';
 import type { HoursSource } from './first-service';
 
 /** Everything printed on a break-in certificate, frozen at sign-off. */
@@ -14,16 +15,7 @@ export interface CertificateContent {
   workshop: { name: string; address: string; email: string };
   vessel: { name: string; hin: string; homePort: string };
   skippers: string[];
-  engine: {
-    position: string;
-    maker: string;
-    model: string;
-    serialNumber: string;
-    ratedRpmMin: number;
-    ratedRpmMax: number;
-    hourMeterAtCommissioning: number | null;
-    commissionedOn: string | null;
-  };
+  engine: Omit<CommissionedEngine, 'id'>;
   program: { name: string; source: string };
   phases: CertificatePhase[];
   verdict: Verdict;

@@ -4,6 +4,7 @@ import type { ThrottleCeiling } from '../programs/throttle';
 import type { RunReason } from '../runs/phase-rules';
 import type { Verdict } from '../runs/phase-tally';
 import type { RunState } from '../runs/run.schema';
+import type { CommissionedEngine } from '../runs/run-view';
 import type { ActionGroup } from './board-order';
 import type { PhaseChart } from './chart-series';
 import type { FirstServiceView } from './first-service';
@@ -96,17 +97,7 @@ export interface RunReviewView {
     clockSkewFlag: boolean;
   };
   vessel: { id: string; name: string; hin: string; homePort: string };
-  engine: {
-    id: string;
-    position: string;
-    maker: string;
-    model: string;
-    serialNumber: string;
-    ratedRpmMin: number;
-    ratedRpmMax: number;
-    hourMeterAtCommissioning: number | null;
-    commissionedOn: string | null;
-  };
+  engine: CommissionedEngine;
   skippers: Array<{ id: string; name: string }>;
   account: { verdict: Verdict; overallProgress: number; sessionMs: number; unassignedMs: number };
   phases: ReviewPhase[];

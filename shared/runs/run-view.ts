@@ -2,20 +2,29 @@ import type { RpmBand } from '../programs/phase-band.schema';
 import type { Program } from '../programs/program.schema';
 import type { RunState } from './run.schema';
 
+/** The engine facts a run carries wherever it is shown. */
+export interface RunEngine {
+  id: string;
+  position: string;
+  maker: string;
+  model: string;
+  serialNumber: string;
+  ratedRpmMin: number;
+  ratedRpmMax: number;
+}
+
+/** The same, with the engine's commissioning record (the review and the certificate). */
+export interface CommissionedEngine extends RunEngine {
+  hourMeterAtCommissioning: number | null;
+  commissionedOn: string | null;
+}
+
 /** A run as the API lists it (GET /api/runs, /api/engines/:id/runs). */
 export interface RunView {
   id: string;
   state: RunState;
   vessel: { id: string; name: string };
-  engine: {
-    id: string;
-    position: string;
-    maker: string;
-    model: string;
-    serialNumber: string;
-    ratedRpmMin: number;
-    ratedRpmMax: number;
-  };
+  engine: RunEngine;
   programId: string;
   programName: string;
   phaseCount: number;
