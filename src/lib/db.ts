@@ -9,7 +9,7 @@ import type { VesselView } from '../../shared/vessels/vessel-view';
  * The one on-device database. Copies from the server (vessels, runs with their frozen programs,
  * events logged elsewhere) and everything made on this device (events, run changes, photos).
  * A record made here starts with sync 'pending'; the outbox is every pending record, and the
- * sync engine (lib/sync) marks it 'synced' or 'rejected' from the server's answer.
+ * sync engine (features/sync) marks it 'synced' or 'rejected' from the server's answer.
  */
 
 export type SyncState = 'pending' | 'synced' | 'rejected';

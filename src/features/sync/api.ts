@@ -1,7 +1,7 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import { db, type SyncState } from '../../lib/db';
-import { outboxCounts, type OutboxCounts } from '../../lib/sync/outbox';
-import { syncNow, useSyncStatus } from '../../lib/sync/sync-engine';
+import { outboxCounts, type OutboxCounts } from './outbox';
+import { syncNow, useSyncStatus } from './sync-engine';
 
 export { useSyncStatus };
 

@@ -1,5 +1,5 @@
 import { useEffect } from 'react';
-import { startSync } from '../../../lib/sync/sync-engine';
+import { startSync } from '../sync-engine';
 
 /** Mounted while someone is signed in: keeps the device in step with the server. */
 export function SyncRunner() {

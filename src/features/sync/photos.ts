@@ -1,5 +1,5 @@
-import { api, isApiError } from '../api-client';
-import { db } from '../db';
+import { api, isApiError } from '../../lib/api-client';
+import { db } from '../../lib/db';
 
 /**
  * Sends photos one at a time, after the readings they belong to. Each upload carries the

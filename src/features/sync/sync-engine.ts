@@ -1,9 +1,9 @@
 import type { PushResponse } from '../../../shared/sync/sync.schema';
-import { api, isApiError } from '../api-client';
-import { db } from '../db';
+import { api, isApiError } from '../../lib/api-client';
+import { db } from '../../lib/db';
 import { nextPushBatch, recordResults, rejectAll } from './outbox';
 import { uploadPendingPhotos, isFinalRefusal } from './photos';
-import { applyPull, type PullResponse } from './pull';
+import { pullAll } from './pull';
 import { getSyncStatus, setSyncStatus } from './sync-status';
 
 export { useSyncStatus } from './sync-status';
@@ -37,16 +37,6 @@ async function pushAll(): Promise<void> {
       if (isApiError(error) && isFinalRefusal(error.status)) await rejectAll(items, error.message);
       else throw error;
     }
-  }
-}
-
-async function pullAll(): Promise<void> {
-  for (let page = 0; page < 1000; page++) {
-    const cursor = ((await db.meta.get('pullCursor'))?.value as number | undefined) ?? 0;
-    const answer = await api.get<PullResponse>(`/api/sync/pull?cursor=${cursor}`);
-    const { needsFullPull } = await applyPull(answer);
-    if (needsFullPull) await db.meta.put({ key: 'pullCursor', value: 0 });
-    if (!answer.more && !needsFullPull) return;
   }
 }
 

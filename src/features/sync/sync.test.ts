@@ -1,8 +1,11 @@
-import { beforeEach, describe, expect, it } from 'vitest';
-import { db, type EventRecord, type RunRecord } from '../db';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import type { PullResponse } from '../../../shared/sync/sync.schema';
+import { db, type EventRecord, type RunRecord } from '../../lib/db';
+import { stubFetch } from '../../test/fetch-stub';
 import { nextPushBatch, outboxCounts, recordResults } from './outbox';
-import { applyPull, type PullResponse } from './pull';
-import { backoffDelay } from './sync-engine';
+import { applyPull } from './pull';
+import { backoffDelay, syncNow } from './sync-engine';
+import { getSyncStatus } from './sync-status';
 
 const RUN = '11111111-1111-4111-8111-111111111111';
 const ENGINE = '22222222-2222-4222-8222-222222222222';
@@ -117,6 +120,57 @@ describe('pull', () => {
     const { needsFullPull } = await applyPull({ ...page([], [RUN, uuid(8)]), runs: [run] });
     expect(await db.runs.get(uuid(7))).toBeUndefined();
     expect(needsFullPull).toBe(true);
+  });
+});
+
+describe('a malformed pull page', () => {
+  // The failed sync schedules a retry; fake timers keep it from firing after the test.
+  beforeEach(() => vi.useFakeTimers({ toFake: ['setTimeout', 'clearTimeout'] }));
+  afterEach(() => {
+    vi.clearAllTimers();
+    vi.useRealTimers();
+    vi.unstubAllGlobals();
+  });
+
+  it('stores nothing from the page and reports the sync as failed', async () => {
+    const run = { id: RUN, state: 'under-way' } as RunRecord;
+    await db.runs.put(run);
+    await db.vessels.put({
+      id: 'vessel-1',
+      name: 'Skua',
+      hin: '',
+      type: 'workboat',
+      lengthM: null,
+      homePort: '',
+      skippers: [],
+      engines: [],
+      archivedAt: null,
+      updatedAt: '2026-05-12T09:00:00Z',
+    });
+    await db.meta.put({ key: 'pullCursor', value: 7 });
+    // Would clear the vessels, drop the run and move the cursor, but its event has no time.
+    const malformed = {
+      cursor: 42,
+      more: false,
+      runIds: [],
+      runs: [],
+      vessels: [],
+      events: [{ runId: RUN, receivedAt: 5000, event: { kind: 'reading', id: uuid(5) } }],
+    };
+    const { calls } = stubFetch({ 'GET /api/sync/pull': { status: 200, body: malformed } });
+
+    await syncNow();
+
+    expect(calls.map((c) => `${c.method} ${c.path}`)).toEqual(['GET /api/sync/pull']);
+    expect(await db.runs.get(RUN)).toEqual(run);
+    expect(await db.vessels.count()).toBe(1);
+    expect(await db.events.get(uuid(5))).toBeUndefined();
+    expect((await db.meta.get('pullCursor'))?.value).toBe(7);
+    expect(getSyncStatus()).toMatchObject({
+      syncing: false,
+      lastError: 'Sync failed unexpectedly.',
+      nextRetryAt: expect.any(Number),
+    });
   });
 });
 

@@ -1,15 +1,22 @@
-import { db, type EventRecord, type RunRecord } from '../db';
-import type { VesselView } from '../../../shared/vessels/vessel-view';
-import type { RunEvent } from '../../../shared/runs/run-event.schema';
+import { PullResponseSchema, type PullResponse } from '../../../shared/sync/sync.schema';
+import { api } from '../../lib/api-client';
+import { db, type EventRecord } from '../../lib/db';
 
-export type PullResponse = {
-  cursor: number;
-  more: boolean;
-  runIds: string[];
-  runs: RunRecord[];
-  events: Array<{ runId: string; receivedAt: number; event: RunEvent }>;
-  vessels: VesselView[];
-};
+/**
+ * Pulls every page of changes after the device's cursor. Each page is checked against the pull
+ * answer's schema first: a malformed page throws before anything is stored, and the sync fails
+ * (and retries) like any other failure.
+ */
+export async function pullAll(): Promise<void> {
+  for (let round = 0; round < 1000; round++) {
+    const cursor = ((await db.meta.get('pullCursor'))?.value as number | undefined) ?? 0;
+    const answer = await api.get<unknown>(`/api/sync/pull?cursor=${cursor}`);
+    const page = PullResponseSchema.parse(answer);
+    const { needsFullPull } = await applyPull(page);
+    if (needsFullPull) await db.meta.put({ key: 'pullCursor', value: 0 });
+    if (!page.more && !needsFullPull) return;
+  }
+}
 
 /**
  * Stores one page of changes. Events this device made are marked synced when they come back;

@@ -1,5 +1,5 @@
 import { MAX_PUSH_ITEMS, type PushItem, type PushResult } from '../../../shared/sync/sync.schema';
-import { db, type EventRecord, type RunPatchRecord } from '../db';
+import { db, type EventRecord, type RunPatchRecord } from '../../lib/db';
 
 /** What waits to be sent, oldest device time first; run changes after the events they follow. */
 export async function nextPushBatch(max = MAX_PUSH_ITEMS): Promise<PushItem[]> {
