@@ -9,6 +9,7 @@ import { resolveProgramPhases, type ResolvedPhase } from '../shared/programs/res
 import { THROTTLE_POSITIONS } from '../shared/programs/throttle';
 import { accountRun } from '../shared/runs/run-accounting';
 import type { RunEvent } from '../shared/runs/run-event.schema';
+import { repeatableRandom } from '../server/lib/repeatable-random';
 
 const TARGET_MS = 50;
 const WARM_UP_RUNS = 5;
@@ -19,11 +20,6 @@ const OUTINGS = 10; // 10 × 5 h = 50 h
 const HOUR_MS = 3_600_000;
 const START_MS = Date.UTC(2025, 4, 10, 8, 0, 0);
 const ENGINE_ID = 'bench-engine';
-
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296;
-}
 
 const uuid = (n: number) => `00000000-0000-4000-8000-${n.toString(16).padStart(12, '0')}`;
 
@@ -38,7 +34,7 @@ function phaseAt(phases: ResolvedPhase[], runMs: number): ResolvedPhase {
 }
 
 function demoRun(phases: ResolvedPhase[]): RunEvent[] {
-  const random = seededRandom(42);
+  const random = repeatableRandom(42);
   const events: RunEvent[] = [];
   let n = 0;
   let runMs = 0;

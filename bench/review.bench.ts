@@ -10,6 +10,7 @@ import { insertRunEventsSql, runEventRow } from '../server/features/runs/run-eve
 import { prepareData } from '../server/prepare-data.js';
 import { openDatabase } from '../server/lib/database.js';
 import { nativeConnection } from '../server/lib/native-sql.js';
+import { repeatableRandom } from '../server/lib/repeatable-random.js';
 import { createLogger } from '../server/lib/logger.js';
 import { hashPassword } from '../server/lib/passwords.js';
 import { BUILT_IN_PROGRAMS } from '../shared/programs/built-in-programs.js';
@@ -31,11 +32,7 @@ const WARM_UP = 3;
 const MEASURED = 25;
 const T0 = Date.UTC(2026, 9, 1, 8, 0, 0);
 
-function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296;
-}
-const random = seededRandom(7);
+const random = repeatableRandom(7);
 const program = BUILT_IN_PROGRAMS['four-stroke-outboard'];
 const rating = { ratedRpmMin: 5000, ratedRpmMax: 6000 };
 const bands = Object.fromEntries(program.phases.map((p) => [p.id, resolvePhaseBand(p, rating)]));
@@ -188,7 +185,7 @@ async function measure(label: string, url: string, cookie: string): Promise<bool
 async function main() {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-bench-review-'));
   const dataSource = await openDatabase(path.join(dir, 'bench.sqlite'));
-  await prepareData(dataSource, { seed: 'none' });
+  await prepareData(dataSource, { demo: 'none' });
   const ids = { workshop: randomUUID(), manager: randomUUID() };
   const db = nativeConnection(dataSource);
   const passwordHash = await hashPassword('ringseat-bench');

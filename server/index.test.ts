@@ -9,7 +9,7 @@ beforeAll(async () => {
 afterAll(() => server?.stop());
 
 describe('the server process', () => {
-  it('creates, migrates and seeds a new database and reports its migration level', async () => {
+  it('creates and migrates a new database, adds the demo workshop and reports its migration level', async () => {
     const res = await fetch(`${server.baseURL}/api/health`);
     expect(res.status).toBe(200);
     const body = await res.json();

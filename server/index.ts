@@ -23,10 +23,11 @@ async function main() {
   const logger = createLogger(config.logLevel);
   const dataSource = await openDatabase(config.databasePath);
   const checkpointer = await startWalCheckpointer(config.databasePath, logger);
-  if ((await prepareData(dataSource, { seed: config.seed })).seeded) {
+  if ((await prepareData(dataSource, { demo: config.demo })).demoAdded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
-  // Demo certificates are seeded as records; their PDFs are written once the data folder is known.
+  // The demo workshop's certificates are added as records; their PDFs are written once the data
+  // folder is known.
   await storeMissingCertificates(
     dataSource,
     new CertificateStore(config.dataDir),

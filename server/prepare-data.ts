@@ -1,6 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { syncBuiltInPrograms } from './features/programs/programs.service.js';
-import { seedDemo } from './seed/seed.js';
+import { addDemoWorkshop } from './demo/demo-workshop.js';
 
 /**
  * What every start does after the migrations: demo data into a new database (when asked),
@@ -8,9 +8,9 @@ import { seedDemo } from './seed/seed.js';
  */
 export async function prepareData(
   dataSource: DataSource,
-  options: { seed: 'demo' | 'none' },
-): Promise<{ seeded: boolean }> {
-  const seeded = options.seed === 'demo' ? await seedDemo(dataSource) : false;
+  options: { demo: 'demo' | 'none' },
+): Promise<{ demoAdded: boolean }> {
+  const demoAdded = options.demo === 'demo' ? await addDemoWorkshop(dataSource) : false;
   await syncBuiltInPrograms(dataSource);
-  return { seeded };
+  return { demoAdded };
 }

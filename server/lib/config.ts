@@ -22,7 +22,8 @@ export type AppConfig = {
   publicOrigin?: string;
   production: boolean;
   logLevel: z.infer<typeof EnvSchema>['LOG_LEVEL'];
-  seed: 'demo' | 'none';
+  /** Whether a new database gets the demo workshop (from RINGSEAT_SEED). */
+  demo: 'demo' | 'none';
 };
 
 export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
@@ -40,6 +41,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     publicOrigin: e.RINGSEAT_ORIGIN,
     production: e.NODE_ENV === 'production',
     logLevel: e.LOG_LEVEL,
-    seed: e.RINGSEAT_SEED,
+    demo: e.RINGSEAT_SEED,
   };
 }

@@ -9,7 +9,7 @@ import type { Clock } from '../../server/lib/clock.js';
 import { openDatabase } from '../../server/lib/database.js';
 import { createLogger } from '../../server/lib/logger.js';
 import { prepareData } from '../../server/prepare-data.js';
-import { DEMO_PASSWORD } from '../../server/seed/demo-data.js';
+import { DEMO_PASSWORD } from '../../server/demo/demo-data.js';
 
 export const HOST = 'ringseat.test';
 export const ORIGIN = `http://${HOST}`;
@@ -39,11 +39,11 @@ export type TestServer = {
 /** A real app on a real, migrated SQLite file in a temporary folder, with the demo workshop in it. */
 export async function startTestServer(
   overrides: Partial<AppDeps> = {},
-  options: { seed?: boolean } = {},
+  options: { demo?: boolean } = {},
 ): Promise<TestServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-test-'));
   const dataSource = await openDatabase(path.join(dir, 'ringseat.sqlite'));
-  await prepareData(dataSource, { seed: options.seed === false ? 'none' : 'demo' });
+  await prepareData(dataSource, { demo: options.demo === false ? 'none' : 'demo' });
   const app = createApp({ dataSource, logger: createLogger('silent'), dataDir: dir, ...overrides });
   return {
     app,
@@ -96,6 +96,6 @@ export async function addOtherWorkshop(
     passwordHash: await hashPassword(DEMO_PASSWORD),
     archivedAt: null,
   });
-  await prepareData(dataSource, { seed: 'none' });
+  await prepareData(dataSource, { demo: 'none' });
   return { workshopId, technicianEmail };
 }

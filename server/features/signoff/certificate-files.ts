@@ -4,7 +4,7 @@ import type { CertificateStore } from './certificate-store.js';
 import { Certificate } from './certificate.entity.js';
 
 /**
- * Writes a certificate's PDF from its frozen content. Used for demo certificates (seeded before
+ * Writes a certificate's PDF from its frozen content. Used for demo certificates (added before
  * the process knows its data folder) and should a file have gone missing from the disk.
  */
 export async function writeCertificateFile(

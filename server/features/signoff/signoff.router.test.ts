@@ -183,7 +183,7 @@ describe('signing off a submitted run', () => {
     ]);
   });
 
-  it("writes the seeded run's certificate from its frozen content when first asked for it", async () => {
+  it("writes the demo run's certificate from its frozen content when first asked for it", async () => {
     const halcyon = await runOf('Halcyon Drift');
     const tomas = await signedInAgent(server.app, DEMO.skipperB);
     const download = await pdfOf(tomas, halcyon.id);

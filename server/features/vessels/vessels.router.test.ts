@@ -38,7 +38,7 @@ describe('GET /api/vessels', () => {
     const skipper = await signedInAgent(server.app, DEMO.skipperA);
     const res = await skipper.get('/api/vessels');
     expect(res.status).toBe(200);
-    // The demo seed may grow; Sunniva's boats include these two and never Tomas's.
+    // The demo data may grow; Sunniva's boats include these two and never Tomas's.
     expect(names(res.body)).toEqual(expect.arrayContaining(['Blue Tern', 'Gannet']));
     expect(names(res.body)).not.toContain('Halcyon Drift');
     const blueTern = res.body.vessels.find((v: { name: string }) => v.name === 'Blue Tern');

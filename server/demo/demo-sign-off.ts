@@ -39,9 +39,9 @@ export interface SignedOffInput {
 /**
  * The decision and the certificate record of the demo's signed-off run, made from the same
  * accounting and content builder as a real sign-off. The PDF is written when the server starts
- * (the seed does not know the data folder).
+ * (the demo data is added before the data folder is known).
  */
-export async function seedSignOff(manager: EntityManager, input: SignedOffInput): Promise<void> {
+export async function addDemoSignOff(manager: EntityManager, input: SignedOffInput): Promise<void> {
   const { run, engine, workshop, technician, at } = input;
   const ordered = orderEvents(input.events, engine.id);
   const { account } = accountOrdered(ordered, input.phases);

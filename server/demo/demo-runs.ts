@@ -20,7 +20,8 @@ export interface DemoRun {
   assignedAt: number;
   /** Invented idle speed of the engine, for the dock run. */
   idleRpm: number;
-  seed: number;
+  /** Where the run's pseudo-random numbers start, so every new demo database holds the same run. */
+  randomStart: number;
   outings: Outing[];
   /** The skipper's phone clock was this far ahead of the real time. */
   skipperClockAheadMs?: number;
@@ -40,7 +41,7 @@ export const DEMO_RUNS: DemoRun[] = [
     assignedBy: 'technician',
     assignedAt: at('2026-11-27T08:45:00'),
     idleRpm: 850,
-    seed: 23,
+    randomStart: 23,
     outings: [
       { start: at('2026-11-27T09:15:00'), minutes: 12, by: 'workshop' },
       {
@@ -76,7 +77,7 @@ export const DEMO_RUNS: DemoRun[] = [
     assignedBy: 'technician',
     assignedAt: at('2026-11-23T08:30:00'),
     idleRpm: 800,
-    seed: 11,
+    randomStart: 11,
     outings: [
       { start: at('2026-11-23T09:05:00'), minutes: 12, by: 'workshop' },
       { start: at('2026-11-23T14:30:00'), minutes: 120, by: 'skipper', readHourMeter: true },
@@ -131,7 +132,7 @@ export const DEMO_RUNS: DemoRun[] = [
     assignedBy: 'manager',
     assignedAt: at('2026-11-25T09:50:00'),
     idleRpm: 780,
-    seed: 37,
+    randomStart: 37,
     outings: [
       { start: at('2026-11-25T10:30:00'), minutes: 12, by: 'workshop' },
       { start: at('2026-11-26T13:00:00'), minutes: 125, by: 'skipper', readHourMeter: true },
@@ -153,7 +154,7 @@ export const DEMO_RUNS: DemoRun[] = [
     assignedBy: 'technician',
     assignedAt: at('2026-11-30T15:00:00'),
     idleRpm: 900,
-    seed: 41,
+    randomStart: 41,
     outings: [],
   },
 ];

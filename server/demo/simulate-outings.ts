@@ -2,20 +2,16 @@ import { randomUUID } from 'node:crypto';
 import type { ResolvedPhase } from '../../shared/programs/resolve-band.js';
 import type { ThrottlePosition } from '../../shared/programs/throttle.js';
 import type { Reading, RunEvent } from '../../shared/runs/run-event.schema.js';
+import { repeatableRandom } from '../lib/repeatable-random.js';
 
 /*
  * Demo outings, simulated through a program's phases so the board, the chart and the verdict
  * have something real to show. Every figure here (idle speeds, spacing of readings, burst
- * lengths) is invented for the demo; the pseudo-random numbers are seeded, so every new demo
- * database holds the same run.
+ * lengths) is invented for the demo; the pseudo-random numbers repeat from a fixed start, so
+ * every new demo database holds the same run.
  */
 
 const MINUTE = 60_000;
-
-export function seededRandom(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296;
-}
 
 export interface Outing {
   /** Wall-clock start, epoch ms. */
@@ -170,11 +166,11 @@ export function simulateOutings(
     ratedMax: number;
     idleRpm: number;
     hourMeterStart: number;
-    seed: number;
+    randomStart: number;
   },
   outings: Outing[],
 ): SimulatedEvent[] {
-  const ctx: Context = { ...input, random: seededRandom(input.seed) };
+  const ctx: Context = { ...input, random: repeatableRandom(input.randomStart) };
   const state: State = { phase: 0, inBandMs: input.phases.map(() => 0), rpm: 0, runMs: 0 };
   const all: SimulatedEvent[] = [];
   for (const outing of outings) {
@@ -194,9 +190,9 @@ export function twinOf(
   events: SimulatedEvent[],
   engineId: string,
   phases: ResolvedPhase[],
-  seed: number,
+  randomStart: number,
 ): SimulatedEvent[] {
-  const random = seededRandom(seed);
+  const random = repeatableRandom(randomStart);
   const bands = new Map(phases.map((p) => [p.id, p.band]));
   return events.map(({ event, ...rest }) => {
     const copy = { ...event, id: randomUUID(), engineId } as RunEvent;

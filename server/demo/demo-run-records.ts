@@ -22,8 +22,8 @@ import {
   insertSubmission,
   storedEvents,
   type StoredEvent,
-} from './seed-run-events.js';
-import { seedSignOff } from './seed-signoff.js';
+} from './demo-run-events.js';
+import { addDemoSignOff } from './demo-sign-off.js';
 import { simulateOutings, twinOf, type SimulatedEvent } from './simulate-outings.js';
 
 interface Refs {
@@ -33,7 +33,7 @@ interface Refs {
 }
 
 /** The workshop's copies of the built-in programs (the start-up sync then finds them current). */
-async function seedPrograms(
+async function addDemoPrograms(
   manager: EntityManager,
   workshopId: string,
 ): Promise<Map<string, Program>> {
@@ -74,8 +74,8 @@ function alertsOf(plan: DemoRun, engineId: string): SimulatedEvent[] {
 }
 
 /** Demo break-in runs, one in each state, with outings simulated through their programs. */
-export async function seedDemoRuns(manager: EntityManager, refs: Refs): Promise<void> {
-  const programs = await seedPrograms(manager, refs.workshopId);
+export async function addDemoRuns(manager: EntityManager, refs: Refs): Promise<void> {
+  const programs = await addDemoPrograms(manager, refs.workshopId);
   const workshop = await manager.getRepository(Workshop).findOneByOrFail({ id: refs.workshopId });
   const engines = new Map(
     (await manager.getRepository(Engine).findBy({ id: In([...refs.engineIds.values()]) })).map(
@@ -113,13 +113,13 @@ export async function seedDemoRuns(manager: EntityManager, refs: Refs): Promise<
                   ratedMax: engine.ratedRpmMax,
                   idleRpm: plan.idleRpm,
                   hourMeterStart: engine.hourMeterAtCommissioning ?? 0,
-                  seed: plan.seed,
+                  randomStart: plan.randomStart,
                 },
                 plan.outings,
               ),
               ...alertsOf(plan, engine.id),
             ]
-          : twinOf(simulated, engine.id, phases, plan.seed + index);
+          : twinOf(simulated, engine.id, phases, plan.randomStart + index);
       const run = await insertRun(manager, { plan, engine, program, bands, refs, simulated });
       const events = storedEvents(
         simulated,
@@ -143,7 +143,7 @@ export async function seedDemoRuns(manager: EntityManager, refs: Refs): Promise<
         });
       }
       if (plan.signedOff) {
-        await seedSignOff(manager, {
+        await addDemoSignOff(manager, {
           run,
           engine,
           vessel,

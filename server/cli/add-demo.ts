@@ -5,7 +5,7 @@ import { prepareData } from '../prepare-data.js';
 
 const config = loadConfig();
 const dataSource = await openDatabase(config.databasePath);
-const { seeded: added } = await prepareData(dataSource, { seed: 'demo' });
+const { demoAdded: added } = await prepareData(dataSource, { demo: 'demo' });
 console.log(
   added
     ? `${config.databasePath}: demo workshop added.`

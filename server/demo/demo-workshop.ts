@@ -9,7 +9,7 @@ import { Vessel } from '../features/vessels/vessel.entity.js';
 import { Workshop } from '../features/workshops/workshop.entity.js';
 import { hashPassword } from '../lib/passwords.js';
 import { DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS, DEMO_WORKSHOP } from './demo-data.js';
-import { seedDemoRuns } from './seed-runs.js';
+import { addDemoRuns } from './demo-run-records.js';
 
 /** True when the database holds no workshop yet: the only case in which demo data is added. */
 export async function isEmpty(dataSource: DataSource): Promise<boolean> {
@@ -17,7 +17,7 @@ export async function isEmpty(dataSource: DataSource): Promise<boolean> {
 }
 
 /** Adds the demo workshop in one transaction. Returns false (and changes nothing) on a non-empty database. */
-export async function seedDemo(dataSource: DataSource): Promise<boolean> {
+export async function addDemoWorkshop(dataSource: DataSource): Promise<boolean> {
   if (!(await isEmpty(dataSource))) return false;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   await dataSource.transaction(async (manager) => {
@@ -41,19 +41,19 @@ export async function seedDemo(dataSource: DataSource): Promise<boolean> {
     }
     const engineIds = new Map<string, string>();
     for (const vessel of DEMO_VESSELS)
-      await seedVessel(
+      await addDemoVessel(
         manager,
         workshopId,
         vessel,
         vessel.skipper ? userIds.get(vessel.skipper)! : null,
         engineIds,
       );
-    await seedDemoRuns(manager, { workshopId, userIds, engineIds });
+    await addDemoRuns(manager, { workshopId, userIds, engineIds });
   });
   return true;
 }
 
-async function seedVessel(
+async function addDemoVessel(
   manager: EntityManager,
   workshopId: string,
   vessel: (typeof DEMO_VESSELS)[number],
