@@ -1,5 +1,5 @@
 import { useEffect, useRef } from 'react';
-import { useLogAlert } from './api';
+import { useLogAlert } from './device-records';
 import { buzz } from './device';
 import { alertsToLog, type EngineSnapshot } from './engine-snapshot';
 

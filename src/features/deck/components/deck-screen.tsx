@@ -9,7 +9,7 @@ import {
   useStartOuting,
   useVesselDeck,
   type VesselDeck,
-} from '../api';
+} from '../device-records';
 import { useNow, useWakeLock } from '../device';
 import { engineSnapshot, type EngineSnapshot } from '../engine-snapshot';
 import { capitalise } from '../format';

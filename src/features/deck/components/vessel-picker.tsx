@@ -1,7 +1,7 @@
 import { Card } from '../../../components/ui/card';
 import { DeckButtonLink } from './deck-link';
 import { Pill } from '../../../components/ui/pill';
-import { useDeckVessels, type DeckVessel } from '../api';
+import { useDeckVessels, type DeckVessel } from '../device-records';
 import { capitalise } from '../format';
 
 const STATE_WORDS = {

@@ -1,7 +1,7 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import type { RunEvent } from '../../../shared/runs/run-event.schema';
 import { db, type OutingRecord, type RunRecord } from '../../lib/db';
-import { useDeviceWrite } from '../../lib/use-device-write';
+import { useDeviceWrite } from './use-device-write';
 import type { VesselView } from '../../../shared/vessels/vessel-view';
 import {
   activeOuting,
