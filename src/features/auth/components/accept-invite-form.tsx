@@ -7,8 +7,7 @@ import {
   type AcceptInviteInput,
   type SessionUser,
 } from '../../../../shared/auth/auth.schema';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
@@ -36,10 +35,8 @@ export function AcceptInviteForm({ token, onAccepted }: AcceptInviteFormProps) {
     acceptInvite.mutate(input, {
       onSuccess: ({ user }) => onAccepted(user),
       onError: (error) => {
-        const leftOver = applyServerFieldErrors(error, setError, ['name', 'password']);
-        const onFieldsOnly =
-          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
-        if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+        const messages = serverErrorMessages(error, setError, ['name', 'password']);
+        setRefusal(messages.join(' ') || null);
       },
     });
   });

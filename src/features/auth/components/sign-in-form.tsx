@@ -8,7 +8,7 @@ import {
   type SignInInput,
 } from '../../../../shared/auth/auth.schema';
 import { isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
@@ -19,17 +19,11 @@ interface Refusal {
   detail: string;
 }
 
-function refusalFor(error: unknown, leftOver: string[]): Refusal | null {
-  if (!isApiError(error))
-    return { title: 'Could not sign in', detail: 'Something went wrong. Try again.' };
-  if (error.fieldErrors.length > 0 && leftOver.length === 0) return null; // shown on the fields
-  const title =
-    error.status === 401
-      ? 'Not signed in'
-      : error.status === 429
-        ? 'Too many attempts'
-        : 'Could not sign in';
-  return { title, detail: leftOver.length ? leftOver.join(' ') : error.message };
+function refusalTitle(error: unknown): string {
+  const status = isApiError(error) ? error.status : null;
+  if (status === 401) return 'Not signed in';
+  if (status === 429) return 'Too many attempts';
+  return 'Could not sign in';
 }
 
 export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => void }) {
@@ -48,10 +42,11 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => 
     setRefusal(null);
     signIn.mutate(input, {
       onSuccess: ({ user }) => onSignedIn(user),
-      onError: (error) =>
-        setRefusal(
-          refusalFor(error, applyServerFieldErrors(error, setError, ['email', 'password'])),
-        ),
+      onError: (error) => {
+        const messages = serverErrorMessages(error, setError, ['email', 'password']);
+        // Nothing to add when every message went on a field.
+        if (messages.length) setRefusal({ title: refusalTitle(error), detail: messages.join(' ') });
+      },
     });
   });
 

@@ -12,8 +12,7 @@ import type { ChecklistEngine } from '../../../../shared/checklists/evaluation';
 import { signalSourceOf } from '../../../../shared/checklists/evaluate-tachometer';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { formatDate } from '../../../lib/format';
 import { useCompleteChecklist, useSaveChecklist } from '../api';
 import { liveEntries } from '../form-values';
@@ -77,16 +76,8 @@ export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormPro
   const byId = new Map(evaluation.items.map((item) => [item.id, item]));
   const fields = { register, errors: formState.errors, disabled: completed };
 
-  const onError = (error: unknown) => {
-    const leftOver = applyServerFieldErrors(error, setError, FIELD_PATHS);
-    setRefusals(
-      leftOver.length
-        ? leftOver
-        : isApiError(error) && error.fieldErrors.length
-          ? []
-          : [errorMessage(error)],
-    );
-  };
+  const onError = (error: unknown) =>
+    setRefusals(serverErrorMessages(error, setError, FIELD_PATHS));
   const send = (action: typeof save, done: string) =>
     handleSubmit((input) => {
       setRefusals([]);

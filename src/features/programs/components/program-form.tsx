@@ -10,8 +10,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { controlClass, Field, TextField } from '../../../components/ui/field';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
-import { errorMessage, isApiError } from '../../../lib/api-client';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveProgram, type ProgramDetail } from '../api';
 import {
   formFieldPaths,
@@ -45,15 +44,7 @@ export function ProgramForm({ program }: { program: ProgramDetail }) {
       },
       onError: (failure) => {
         const fields = formFieldPaths(definition.phases.length) as Path<ProgramFormValues>[];
-        const leftOver = applyServerFieldErrors(failure, setError, fields);
-        const placed = isApiError(failure) && failure.fieldErrors.length > leftOver.length;
-        setProblems(
-          placed
-            ? [...leftOver, 'Check the fields marked ⚠ above.']
-            : leftOver.length
-              ? leftOver
-              : [errorMessage(failure)],
-        );
+        setProblems(serverErrorMessages(failure, setError, fields, { pointToFields: true }));
       },
     });
   });

@@ -11,8 +11,7 @@ import type { Verdict } from '../../../../shared/runs/phase-tally';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Field, controlClass } from '../../../components/ui/field';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSignOff } from '../api';
 
 const CHOICES = [
@@ -53,10 +52,8 @@ export function SignOffForm({
     setRefusal(null);
     signOff.mutate(input, {
       onError: (error) => {
-        const leftOver = applyServerFieldErrors(error, setError, ['decision', 'comments']);
-        const onFieldsOnly =
-          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
-        if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+        const messages = serverErrorMessages(error, setError, ['decision', 'comments']);
+        setRefusal(messages.join(' ') || null);
       },
     });
   });

@@ -3,8 +3,7 @@ import { Controller, useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { InviteInputSchema, ROLES, type InviteInput } from '../../../../shared/auth/auth.schema';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -39,10 +38,8 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
         reset();
       },
       onError: (error) => {
-        const leftOver = applyServerFieldErrors(error, setError, ['email', 'role', 'vesselIds']);
-        const onFieldsOnly =
-          isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
-        if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+        const messages = serverErrorMessages(error, setError, ['email', 'role', 'vesselIds']);
+        setRefusal(messages.join(' ') || null);
       },
     });
   });

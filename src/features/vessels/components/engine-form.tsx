@@ -13,8 +13,7 @@ import type { EngineRow, EngineView } from '../../../../shared/vessels/vessel-vi
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveEngine } from '../engine-api';
 import {
   CommissioningFields,
@@ -84,10 +83,8 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
       {
         onSuccess: ({ engine: saved }) => onSaved(saved),
         onError: (error) => {
-          const leftOver = applyServerFieldErrors(error, setError, ENGINE_FIELDS);
-          const onFieldsOnly =
-            isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0;
-          if (!onFieldsOnly) setRefusal(leftOver.length ? leftOver.join(' ') : errorMessage(error));
+          const messages = serverErrorMessages(error, setError, ENGINE_FIELDS);
+          setRefusal(messages.join(' ') || null);
         },
       },
     );

@@ -12,8 +12,7 @@ import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { applyServerFieldErrors } from '../../../lib/form-errors';
+import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveVessel } from '../api';
 import { toNumberOrNull } from '../form-values';
 
@@ -56,9 +55,8 @@ export function VesselForm({
       {
         onSuccess: ({ vessel: saved }) => onSaved(saved),
         onError: (error) => {
-          const leftOver = applyServerFieldErrors(error, setError, FIELDS);
-          if (!(isApiError(error) && error.fieldErrors.length > 0 && leftOver.length === 0))
-            setRefusal(leftOver.join(' ') || errorMessage(error));
+          const messages = serverErrorMessages(error, setError, FIELDS);
+          setRefusal(messages.join(' ') || null);
         },
       },
     );
