@@ -2,7 +2,6 @@ import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { ResolvedPhase } from '../../shared/programs/resolve-band.js';
 import { phaseCharts } from '../../shared/review/chart-series.js';
-import { certificateNumber, workshopInitials } from '../../shared/review/certificate-number.js';
 import {
   calendarDateIn,
   engineHoursNow,
@@ -11,13 +10,15 @@ import {
 import { orderEvents } from '../../shared/runs/event-order.js';
 import { accountOrdered } from '../../shared/runs/run-accounting.js';
 import type { RunEvent } from '../../shared/runs/run-event.schema.js';
-import { recordAudit } from '../features/audit/audit.service.js';
 import type { RunContext } from '../features/runs/run-context.js';
 import type { Run } from '../features/runs/run.entity.js';
 import { certificateContent } from '../features/signoff/certificate-content.js';
-import { certificateFilePath } from '../features/signoff/certificate-store.js';
-import { Certificate } from '../features/signoff/certificate.entity.js';
-import { RunReview } from '../features/signoff/run-review.entity.js';
+import {
+  addReview,
+  insertCertificate,
+  nextCertificateNumber,
+  recordSignOff,
+} from '../features/signoff/signoff-records.js';
 import type { User } from '../features/users/user.entity.js';
 import type { Engine } from '../features/vessels/engine.entity.js';
 import type { Vessel } from '../features/vessels/vessel.entity.js';
@@ -37,12 +38,35 @@ export interface SignedOffInput {
 }
 
 /**
- * The decision and the certificate record of the demo's signed-off run, made from the same
- * accounting and content builder as a real sign-off. The PDF is written when the server starts
- * (the demo data is added before the data folder is known).
+ * The decision and the certificate record of the demo's signed-off run, written by the same
+ * functions as a real sign-off from the same accounting and content builder. The PDF is written
+ * when the server starts (the demo data is added before the data folder is known).
  */
 export async function addDemoSignOff(manager: EntityManager, input: SignedOffInput): Promise<void> {
-  const { run, engine, workshop, technician, at } = input;
+  const { technician, at, comments } = input;
+  const ctx = signedOffContext(input);
+  const number = await nextCertificateNumber(manager, ctx, at);
+  const content = certificateContent(ctx, ctx.charts, {
+    number,
+    issuedAt: at,
+    comments,
+    technician: { name: technician.name, role: technician.role },
+  });
+  await addReview(manager, ctx, technician, 'confirmed', comments, at);
+  await insertCertificate(manager, ctx, {
+    id: randomUUID(),
+    number,
+    issuedAt: at,
+    issuedById: technician.id,
+    content,
+    stored: null,
+  });
+  await recordSignOff(manager, ctx, technician, at, { comments, number });
+}
+
+/** The run as the review page would load it at the moment of sign-off. */
+function signedOffContext(input: SignedOffInput): RunContext {
+  const { run, engine, workshop, at } = input;
   const ordered = orderEvents(input.events, engine.id);
   const { account } = accountOrdered(ordered, input.phases);
   const meter = [...ordered]
@@ -60,7 +84,7 @@ export async function addDemoSignOff(manager: EntityManager, input: SignedOffInp
     calendarDateIn(workshop.timezone, at),
   );
   const charts = phaseCharts(ordered, input.phases, account);
-  const ctx: RunContext = {
+  return {
     run,
     engine,
     vessel: input.vessel,
@@ -76,48 +100,4 @@ export async function addDemoSignOff(manager: EntityManager, input: SignedOffInp
     },
     skippers: input.skippers.map((s) => ({ id: s.id, name: s.name, email: s.email })),
   };
-  const number = certificateNumber({
-    initials: workshopInitials(workshop.name),
-    year: at.getUTCFullYear(),
-    sequence: 1,
-  });
-  const content = certificateContent(ctx, charts, {
-    number,
-    issuedAt: at,
-    comments: input.comments,
-    technician: { name: technician.name, role: technician.role },
-  });
-  const id = randomUUID();
-  await manager.getRepository(RunReview).insert({
-    id: randomUUID(),
-    runId: run.id,
-    workshopId: workshop.id,
-    decision: 'confirmed',
-    comments: input.comments,
-    verdict: account.verdict,
-    reviewerId: technician.id,
-    reviewerName: technician.name,
-    decidedAt: at,
-  });
-  await manager.getRepository(Certificate).insert({
-    id,
-    runId: run.id,
-    workshopId: workshop.id,
-    number,
-    issuedAt: at,
-    issuedById: technician.id,
-    content,
-    filePath: certificateFilePath(workshop.id, id),
-    storedAt: null,
-    byteSize: null,
-  });
-  const audit = {
-    workshopId: workshop.id,
-    recordType: 'run' as const,
-    recordId: run.id,
-    actor: { id: technician.id, name: technician.name },
-    at,
-  };
-  await recordAudit(manager, { ...audit, action: 'run-signed-off', detail: input.comments });
-  await recordAudit(manager, { ...audit, action: 'certificate-issued', detail: number });
 }

@@ -8,7 +8,8 @@ import { VesselSkipper } from '../features/vessels/vessel-skipper.entity.js';
 import { Vessel } from '../features/vessels/vessel.entity.js';
 import { Workshop } from '../features/workshops/workshop.entity.js';
 import { hashPassword } from '../lib/passwords.js';
-import { DEMO_PASSWORD, DEMO_USERS, DEMO_VESSELS, DEMO_WORKSHOP } from './demo-data.js';
+import { DEMO_VESSELS } from './demo-fleet.js';
+import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSHOP } from './demo-people.js';
 import { addDemoRuns } from './demo-run-records.js';
 
 /** True when the database holds no workshop yet: the only case in which demo data is added. */

@@ -9,7 +9,7 @@ import type { Clock } from '../../server/lib/clock.js';
 import { openDatabase } from '../../server/lib/database.js';
 import { createLogger } from '../../server/lib/logger.js';
 import { prepareData } from '../../server/prepare-data.js';
-import { DEMO_PASSWORD } from '../../server/demo/demo-data.js';
+import { DEMO_PASSWORD } from '../../server/demo/demo-people.js';
 
 export const HOST = 'ringseat.test';
 export const ORIGIN = `http://${HOST}`;

@@ -17,7 +17,7 @@ export function certificateContent(
     technician: { name: string; role: string };
   },
 ): CertificateContent {
-  const { run, engine, vessel, workshop, account } = ctx;
+  const { run, vessel, workshop, account } = ctx;
   return {
     number: decision.number,
     issuedAt: decision.issuedAt.toISOString(),
@@ -26,45 +26,58 @@ export function certificateContent(
     workshop: { name: workshop.name, address: workshop.address, email: workshop.email },
     vessel: { name: vessel.name, hin: vessel.hin, homePort: vessel.homePort },
     skippers: ctx.skippers.map((s) => s.name),
-    engine: {
-      position: engine.position,
-      maker: engine.maker,
-      model: engine.model,
-      serialNumber: engine.serialNumber,
-      ratedRpmMin: engine.ratedRpmMin,
-      ratedRpmMax: engine.ratedRpmMax,
-      hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
-      commissionedOn: engine.commissionedOn,
-    },
+    engine: enginePart(ctx),
     program: { name: run.program.name, source: run.program.source },
-    phases: ctx.phases.map((phase, i) => {
-      const a = account.phases[i];
-      return {
-        name: phase.name,
-        performedBy: phase.performedBy,
-        band: phase.band,
-        throttleCeiling: phase.throttleCeiling,
-        requiredMinutes: minutes(a.requiredMs),
-        inBandMinutes: minutes(a.timeInBandMs),
-        overMinutes: minutes(a.timeOverMs),
-        underMinutes: minutes(a.timeUnderMs),
-        verdict: a.verdict,
-        firstAt: isoOrNull(charts[i].firstAt),
-        lastAt: isoOrNull(charts[i].lastAt),
-        reasons: a.reasons.map((r) => r.message),
-      };
-    }),
+    phases: phaseParts(ctx, charts),
     verdict: account.verdict,
     comments: decision.comments,
     technician: decision.technician,
     submittedAt: run.submittedAt?.toISOString() ?? null,
-    firstService: ctx.firstService
-      ? {
-          dueAtHours: ctx.firstService.dueAtHours,
-          dueOn: ctx.firstService.dueOn,
-          hoursNow: ctx.firstService.hoursNow,
-          hoursSource: ctx.firstService.hoursSource,
-        }
-      : null,
+    firstService: firstServicePart(ctx),
   };
+}
+
+function enginePart({ engine }: RunContext): CertificateContent['engine'] {
+  return {
+    position: engine.position,
+    maker: engine.maker,
+    model: engine.model,
+    serialNumber: engine.serialNumber,
+    ratedRpmMin: engine.ratedRpmMin,
+    ratedRpmMax: engine.ratedRpmMax,
+    hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
+    commissionedOn: engine.commissionedOn,
+  };
+}
+
+/** Each phase as it stands: its band, the times logged, its verdict and the reasons for it. */
+function phaseParts(ctx: RunContext, charts: PhaseChart[]): CertificateContent['phases'] {
+  return ctx.phases.map((phase, i) => {
+    const a = ctx.account.phases[i];
+    return {
+      name: phase.name,
+      performedBy: phase.performedBy,
+      band: phase.band,
+      throttleCeiling: phase.throttleCeiling,
+      requiredMinutes: minutes(a.requiredMs),
+      inBandMinutes: minutes(a.timeInBandMs),
+      overMinutes: minutes(a.timeOverMs),
+      underMinutes: minutes(a.timeUnderMs),
+      verdict: a.verdict,
+      firstAt: isoOrNull(charts[i].firstAt),
+      lastAt: isoOrNull(charts[i].lastAt),
+      reasons: a.reasons.map((r) => r.message),
+    };
+  });
+}
+
+function firstServicePart({ firstService }: RunContext): CertificateContent['firstService'] {
+  return firstService
+    ? {
+        dueAtHours: firstService.dueAtHours,
+        dueOn: firstService.dueOn,
+        hoursNow: firstService.hoursNow,
+        hoursSource: firstService.hoursSource,
+      }
+    : null;
 }
