@@ -1,15 +1,8 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { RingseatDb } from '../../lib/db';
-import {
-  advancePhase,
-  changeOuting,
-  DeckInputError,
-  logAlert,
-  logReadings,
-  nextEventAt,
-  startOuting,
-  activeOuting,
-} from './deck-store';
+import { advancePhase, logAlert, logReadings } from './deck-store';
+import { DeckInputError, nextEventAt } from './device-events';
+import { activeOuting, changeOuting, startOuting } from './outing-store';
 import { MIN, refOf, T0, testRun, VESSEL_ID } from './test-fixtures';
 
 // Speeds and flows here are demo figures on demo engines (rated 5000–6000 rpm), not advice; the

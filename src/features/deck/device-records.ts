@@ -4,16 +4,14 @@ import { db, type OutingRecord, type RunRecord } from '../../lib/db';
 import { useDeviceWrite } from './use-device-write';
 import type { VesselView } from '../../../shared/vessels/vessel-view';
 import {
-  activeOuting,
   advancePhase,
-  changeOuting,
   logAlert,
   logReadings,
-  startOuting,
   type PhotoInput,
   type ReadingEntry,
-  type RunRef,
 } from './deck-store';
+import type { RunRef } from './device-events';
+import { activeOuting, changeOuting, startOuting } from './outing-store';
 
 /*
  * The deck reads and writes the device database only, so it works with no network at all.

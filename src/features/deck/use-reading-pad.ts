@@ -15,33 +15,67 @@ export interface PadSeed {
 
 type Problem = { field: string; message: string } | null;
 
-/** The pad's state: what is typed, for which engine, and logging it all or nothing. */
-export function useReadingPad({ engines, lastRpm, lastThrottle, onLog }: PadSeed) {
-  const [target, setTargetState] = useState<string>(
-    engines.length > 1 ? 'both' : engines[0].engineId,
-  );
-  const [mode, setModeState] = useState<'rpm' | 'hz'>('rpm');
-  const [text, setText] = useState(lastRpm === null ? '' : String(lastRpm));
-  const [throttle, setThrottleState] = useState<ThrottlePosition | null>(lastThrottle);
-  const [keypadOpen, setKeypadOpen] = useState(lastRpm === null);
-  const [details, setDetails] = useState<ReadingDetails | null>(null);
-  const [gpsOn, setGpsOn] = useState(false);
-  const gps = useGpsSpeed(gpsOn);
+/** What the pad last said: a problem, a question to confirm, or what was logged. */
+function usePadMessages() {
   const [problem, setProblem] = useState<Problem>(null);
   const [confirm, setConfirm] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
   const [logged, setLogged] = useState<string | null>(null);
-  const chosen = engines.filter((e) => target === 'both' || e.engineId === target);
-
   const settle = () => {
     setProblem(null);
     setConfirm(null);
     setLogged(null);
   };
+  return { problem, setProblem, confirm, setConfirm, logged, setLogged, settle };
+}
+
+/** What is typed and chosen on the pad; every change clears what the pad last said. */
+function usePadEntry({ engines, lastRpm, lastThrottle }: PadSeed, settle: () => void) {
+  const [target, setTarget] = useState<string>(engines.length > 1 ? 'both' : engines[0].engineId);
+  const [mode, setMode] = useState<'rpm' | 'hz'>('rpm');
+  const [text, setText] = useState(lastRpm === null ? '' : String(lastRpm));
+  const [throttle, setThrottle] = useState<ThrottlePosition | null>(lastThrottle);
+  const [keypadOpen, setKeypadOpen] = useState(lastRpm === null);
   const edit = (next: string) => {
     setText(next);
     settle();
   };
+  return {
+    chosen: engines.filter((e) => target === 'both' || e.engineId === target),
+    target,
+    mode,
+    text,
+    throttle,
+    keypadOpen,
+    edit,
+    setKeypadOpen,
+    setTarget: (next: string) => {
+      setTarget(next);
+      settle();
+    },
+    setMode: (next: 'rpm' | 'hz') => {
+      setMode(next);
+      edit('');
+      setKeypadOpen(true);
+    },
+    setThrottle: (next: ThrottlePosition) => {
+      setThrottle(next);
+      settle();
+    },
+  };
+}
+
+const loggedWords = (rpms: number[], throttle: ThrottlePosition, chosen: PadEngine[]) =>
+  `Logged ${rpms.join(' and ')} rpm at ${THROTTLE_WORDS[throttle]} for ${chosen.map((e) => e.label).join(' and ')}.`;
+
+/** The pad's state: what is typed, for which engine, and logging it all or nothing. */
+export function useReadingPad(seed: PadSeed) {
+  const messages = usePadMessages();
+  const entry = usePadEntry(seed, messages.settle);
+  const [details, setDetails] = useState<ReadingDetails | null>(null);
+  const [gpsOn, setGpsOn] = useState(false);
+  const gps = useGpsSpeed(gpsOn);
+  const [saving, setSaving] = useState(false);
+  const { chosen, mode, text, throttle } = entry;
 
   const log = async (confirmed: boolean) => {
     const result = buildEntries(chosen, {
@@ -53,19 +87,17 @@ export function useReadingPad({ engines, lastRpm, lastThrottle, onLog }: PadSeed
       confirmed,
     });
     if (result.kind === 'invalid')
-      return setProblem({ field: result.field, message: result.message });
-    if (result.kind === 'confirm') return setConfirm(result.message);
+      return messages.setProblem({ field: result.field, message: result.message });
+    if (result.kind === 'confirm') return messages.setConfirm(result.message);
     setSaving(true);
     try {
-      await onLog(result.entries, details?.photo ?? undefined);
-      setLogged(
-        `Logged ${result.rpms.join(' and ')} rpm at ${THROTTLE_WORDS[throttle!]} for ${chosen.map((e) => e.label).join(' and ')}.`,
-      );
+      await seed.onLog(result.entries, details?.photo ?? undefined);
+      messages.setLogged(loggedWords(result.rpms, throttle!, chosen));
       setDetails(null);
-      setConfirm(null);
-      if (mode === 'rpm') setKeypadOpen(false);
+      messages.setConfirm(null);
+      if (mode === 'rpm') entry.setKeypadOpen(false);
     } catch (error) {
-      setProblem({
+      messages.setProblem({
         field: (error as { field?: string }).field ?? 'reading',
         message: error instanceof Error ? error.message : 'The reading was not saved.',
       });
@@ -75,39 +107,19 @@ export function useReadingPad({ engines, lastRpm, lastThrottle, onLog }: PadSeed
   };
 
   return {
-    engines,
-    chosen,
-    target,
-    mode,
-    text,
-    throttle,
-    keypadOpen,
+    ...entry,
+    engines: seed.engines,
     details,
     gpsOn,
     gps,
-    problem,
-    confirm,
+    problem: messages.problem,
+    confirm: messages.confirm,
     saving,
-    logged,
-    edit,
+    logged: messages.logged,
     log,
-    setKeypadOpen,
     setDetails,
     setGpsOn,
-    dismissConfirm: () => setConfirm(null),
-    setTarget: (next: string) => {
-      setTargetState(next);
-      settle();
-    },
-    setMode: (next: 'rpm' | 'hz') => {
-      setModeState(next);
-      edit('');
-      setKeypadOpen(true);
-    },
-    setThrottle: (next: ThrottlePosition) => {
-      setThrottleState(next);
-      settle();
-    },
+    dismissConfirm: () => messages.setConfirm(null),
   };
 }
 

@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { db } from '../../../lib/db';
-import { startOuting } from '../deck-store';
+import { startOuting } from '../outing-store';
 import { MIN, refOf, testRun, testVessel, VESSEL_ID } from '../test-fixtures';
 import { clearDevice, outingOn, showDeck as show, store } from './deck-test-db';
 

@@ -1,7 +1,7 @@
 import type { RunEvent } from '../../../../shared/runs/run-event.schema';
 import { db, type RunRecord } from '../../../lib/db';
 import { renderPage } from '../../../test/render';
-import { startOuting } from '../deck-store';
+import { startOuting } from '../outing-store';
 import { MIN, refOf, testVessel, VESSEL_ID } from '../test-fixtures';
 import { DeckScreen } from './deck-screen';
 

@@ -40,7 +40,7 @@ export function EnginePanel({
   advancing,
   wide = false,
 }: EnginePanelProps) {
-  const { live, phase, phases } = snapshot;
+  const { live } = snapshot;
   const headingId = `engine-${snapshot.engineId}`;
   return (
     <section
@@ -50,43 +50,10 @@ export function EnginePanel({
       <h2 id={headingId} className="truncate text-lg font-extrabold uppercase tracking-wide">
         {label}
       </h2>
-      {phase && (
-        <div>
-          <p className="text-sm text-muted">
-            Phase {live.currentPhaseIndex + 1} of {phases.length}
-            {phase.performedBy === 'workshop' && ' · workshop'}
-          </p>
-          <p className="line-clamp-2 font-bold leading-tight">{phase.name}</p>
-          <p className="mt-1 flex flex-wrap gap-x-2 text-sm font-semibold">
-            <span>{ceilingText(phase.throttleCeiling)}</span>
-            <span className="figures">{rpmRangeText(phase.band)}</span>
-          </p>
-        </div>
-      )}
+      <PhaseHeading snapshot={snapshot} />
       <BandState state={deckState(snapshot)} engineLabel={label} wide={wide} />
       <AlertList alerts={snapshot.alerts} reminders={snapshot.reminders} />
-      <dl className="flex flex-col">
-        <dt className="text-sm font-semibold">Time in band</dt>
-        <dd
-          className={cx(
-            'figures font-extrabold leading-none',
-            wide ? 'text-6xl' : 'text-[2rem] sm:text-5xl',
-          )}
-          aria-label={clockWords(live.phaseDoneMs)}
-          data-testid="time-in-band"
-        >
-          {clockText(live.phaseDoneMs)}
-        </dd>
-        <div className="mt-1 flex items-baseline justify-between gap-2">
-          <dt className="text-sm font-semibold">Left</dt>
-          <dd
-            className={cx('figures font-bold', wide ? 'text-3xl' : 'text-xl sm:text-3xl')}
-            aria-label={clockWords(live.phaseLeftMs)}
-          >
-            {clockText(live.phaseLeftMs, 'up')}
-          </dd>
-        </div>
-      </dl>
+      <PhaseClock snapshot={snapshot} wide={wide} />
       <ProgressBar share={live.phaseProgress} label={`${label}: this phase`} />
       <p className="text-sm">
         Overall{' '}
@@ -96,6 +63,54 @@ export function EnginePanel({
       <NextPhase snapshot={snapshot} role={role} onAdvance={onAdvance} advancing={advancing} />
       <PhaseList rows={snapshot.rows} label={label} />
     </section>
+  );
+}
+
+/** Which phase the engine is in, and its throttle ceiling and band. */
+function PhaseHeading({ snapshot }: { snapshot: EngineSnapshot }) {
+  const { live, phase, phases } = snapshot;
+  if (!phase) return null;
+  return (
+    <div>
+      <p className="text-sm text-muted">
+        Phase {live.currentPhaseIndex + 1} of {phases.length}
+        {phase.performedBy === 'workshop' && ' · workshop'}
+      </p>
+      <p className="line-clamp-2 font-bold leading-tight">{phase.name}</p>
+      <p className="mt-1 flex flex-wrap gap-x-2 text-sm font-semibold">
+        <span>{ceilingText(phase.throttleCeiling)}</span>
+        <span className="figures">{rpmRangeText(phase.band)}</span>
+      </p>
+    </div>
+  );
+}
+
+/** The phase's time in band so far, large, and the time still to run. */
+function PhaseClock({ snapshot, wide }: { snapshot: EngineSnapshot; wide: boolean }) {
+  const { live } = snapshot;
+  return (
+    <dl className="flex flex-col">
+      <dt className="text-sm font-semibold">Time in band</dt>
+      <dd
+        className={cx(
+          'figures font-extrabold leading-none',
+          wide ? 'text-6xl' : 'text-[2rem] sm:text-5xl',
+        )}
+        aria-label={clockWords(live.phaseDoneMs)}
+        data-testid="time-in-band"
+      >
+        {clockText(live.phaseDoneMs)}
+      </dd>
+      <div className="mt-1 flex items-baseline justify-between gap-2">
+        <dt className="text-sm font-semibold">Left</dt>
+        <dd
+          className={cx('figures font-bold', wide ? 'text-3xl' : 'text-xl sm:text-3xl')}
+          aria-label={clockWords(live.phaseLeftMs)}
+        >
+          {clockText(live.phaseLeftMs, 'up')}
+        </dd>
+      </div>
+    </dl>
   );
 }
 

@@ -39,6 +39,43 @@ interface ChoiceChipsProps<T extends string> {
   error?: boolean;
 }
 
+function Chip({
+  text,
+  name,
+  chosen,
+  error,
+  onChoose,
+}: {
+  text: string;
+  name?: string;
+  chosen: boolean;
+  error?: boolean;
+  onChoose: () => void;
+}) {
+  return (
+    <button
+      type="button"
+      role="radio"
+      aria-checked={chosen}
+      aria-label={name ?? text}
+      onClick={onChoose}
+      className={cx(
+        'relative min-h-touch min-w-touch flex-1 whitespace-nowrap rounded-md border-2 px-2 text-lg font-bold',
+        chosen ? 'deck-solid' : 'border-ink bg-surface text-ink',
+        error && !chosen && 'border-danger',
+      )}
+    >
+      {/* A tick in the corner as well as the fill: the choice reads without colour. */}
+      {chosen && (
+        <span aria-hidden="true" className="absolute left-1 top-0 text-sm">
+          ✓
+        </span>
+      )}
+      {text}
+    </button>
+  );
+}
+
 /** A row of big single-choice chips (throttle, which engine); the chosen one is filled and ticked. */
 export function ChoiceChips<T extends string>({
   label,
@@ -54,32 +91,16 @@ export function ChoiceChips<T extends string>({
       aria-invalid={error || undefined}
       className="flex flex-wrap gap-2"
     >
-      {options.map((option) => {
-        const chosen = option.value === value;
-        return (
-          <button
-            key={option.value}
-            type="button"
-            role="radio"
-            aria-checked={chosen}
-            aria-label={option.name ?? option.text}
-            onClick={() => onChange(option.value)}
-            className={cx(
-              'relative min-h-touch min-w-touch flex-1 whitespace-nowrap rounded-md border-2 px-2 text-lg font-bold',
-              chosen ? 'deck-solid' : 'border-ink bg-surface text-ink',
-              error && !chosen && 'border-danger',
-            )}
-          >
-            {/* A tick in the corner as well as the fill: the choice reads without colour. */}
-            {chosen && (
-              <span aria-hidden="true" className="absolute left-1 top-0 text-sm">
-                ✓
-              </span>
-            )}
-            {option.text}
-          </button>
-        );
-      })}
+      {options.map((option) => (
+        <Chip
+          key={option.value}
+          text={option.text}
+          name={option.name}
+          chosen={option.value === value}
+          error={error}
+          onChoose={() => onChange(option.value)}
+        />
+      ))}
     </div>
   );
 }

@@ -55,26 +55,42 @@ export function OutingBar({ outing, nowMs, wakeLock, onChange, pending }: Outing
         </p>
       )}
       {ending && (
-        <div role="alert" className="flex flex-col gap-2 rounded-md border-2 border-ink p-2">
-          <p className="font-semibold">
-            End the outing? Engine time stops counting for every engine in it.
-          </p>
-          <div className="flex gap-2">
-            <Button
-              onClick={() => {
-                setEnding(false);
-                onChange('end');
-              }}
-              pending={pending}
-            >
-              Yes, end it
-            </Button>
-            <Button variant="secondary" onClick={() => setEnding(false)}>
-              Keep going
-            </Button>
-          </div>
-        </div>
+        <EndConfirm
+          pending={pending}
+          onEnd={() => {
+            setEnding(false);
+            onChange('end');
+          }}
+          onKeepGoing={() => setEnding(false)}
+        />
       )}
     </section>
+  );
+}
+
+/** Ending is asked twice: it stops engine time for every engine in the outing. */
+function EndConfirm({
+  pending,
+  onEnd,
+  onKeepGoing,
+}: {
+  pending: boolean;
+  onEnd: () => void;
+  onKeepGoing: () => void;
+}) {
+  return (
+    <div role="alert" className="flex flex-col gap-2 rounded-md border-2 border-ink p-2">
+      <p className="font-semibold">
+        End the outing? Engine time stops counting for every engine in it.
+      </p>
+      <div className="flex gap-2">
+        <Button onClick={onEnd} pending={pending}>
+          Yes, end it
+        </Button>
+        <Button variant="secondary" onClick={onKeepGoing}>
+          Keep going
+        </Button>
+      </div>
+    </div>
   );
 }

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type Dispatch, type SetStateAction } from 'react';
 import { CautionCard } from '../../../components/caution-card';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
@@ -18,6 +18,40 @@ interface OutingStartProps {
   error: string | null;
 }
 
+/** The engines that can go out (ticked), and why any other cannot. */
+function EngineChoices({
+  choices,
+  picked,
+  setPicked,
+}: {
+  choices: StartChoice[];
+  picked: string[];
+  setPicked: Dispatch<SetStateAction<string[]>>;
+}) {
+  const toggle = (runId: string, on: boolean) =>
+    setPicked((now) => (on ? [...now, runId] : now.filter((id) => id !== runId)));
+  return (
+    <fieldset className="flex flex-col">
+      <legend className="font-semibold">Engines</legend>
+      {choices.map((choice) =>
+        choice.blocked === null ? (
+          <Checkbox
+            key={choice.runId}
+            checked={picked.includes(choice.runId)}
+            onChange={(e) => toggle(choice.runId, e.target.checked)}
+          >
+            {choice.label}
+          </Checkbox>
+        ) : (
+          <p key={choice.runId} className="flex min-h-touch items-center text-muted">
+            {choice.label}: {choice.blocked}
+          </p>
+        ),
+      )}
+    </fieldset>
+  );
+}
+
 /** Choose the engines (both of a twin by default), read the cautions, start. */
 export function OutingStart({ choices, onStart, pending, error }: OutingStartProps) {
   const open = choices.filter((c) => c.blocked === null);
@@ -32,8 +66,6 @@ export function OutingStart({ choices, onStart, pending, error }: OutingStartPro
     onStart(picked);
   };
 
-  const toggle = (runId: string, on: boolean) =>
-    setPicked((now) => (on ? [...now, runId] : now.filter((id) => id !== runId)));
   return (
     <section
       aria-labelledby="outing-start"
@@ -45,24 +77,7 @@ export function OutingStart({ choices, onStart, pending, error }: OutingStartPro
       {choices.length > 1 && (
         <p>Twin engines are usually run together: both are chosen. Untick one to run it alone.</p>
       )}
-      <fieldset className="flex flex-col">
-        <legend className="font-semibold">Engines</legend>
-        {choices.map((choice) =>
-          choice.blocked === null ? (
-            <Checkbox
-              key={choice.runId}
-              checked={picked.includes(choice.runId)}
-              onChange={(e) => toggle(choice.runId, e.target.checked)}
-            >
-              {choice.label}
-            </Checkbox>
-          ) : (
-            <p key={choice.runId} className="flex min-h-touch items-center text-muted">
-              {choice.label}: {choice.blocked}
-            </p>
-          ),
-        )}
-      </fieldset>
+      <EngineChoices choices={choices} picked={picked} setPicked={setPicked} />
       <CautionCard />
       <Checkbox checked={read} onChange={(e) => setRead(e.target.checked)}>
         I have read the cautions

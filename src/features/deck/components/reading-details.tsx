@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, type UseFormReturn } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Button } from '../../../components/ui/button';
 import { Checkbox } from '../../../components/ui/checkbox';
@@ -24,6 +24,14 @@ interface ReadingDetailsFormProps {
   onCancel: () => void;
 }
 
+type DetailsForm = UseFormReturn<ReadingDetailsInput, unknown, ReadingDetailsValues>;
+
+const OTHER_FIELDS = [
+  { name: 'fuelLph', label: 'Fuel flow (L/h)', inputMode: 'decimal' },
+  { name: 'hourMeter', label: 'Hour meter (h)', inputMode: 'decimal' },
+  { name: 'note', label: 'Note', inputMode: undefined },
+] as const;
+
 const GPS_WORDS: Record<GpsFix['status'], string> = {
   off: '',
   waiting: 'Waiting for a position fix…',
@@ -32,28 +40,11 @@ const GPS_WORDS: Record<GpsFix['status'], string> = {
   unsupported: 'This device gives no location: type the speed instead.',
 };
 
-/** Speed, fuel flow, hour meter, note and photo: one tap away from the pad, kept for the next reading. */
-export default function ReadingDetailsForm({
-  initial,
-  initialPhoto,
-  gps,
-  gpsOn,
-  onGpsChange,
-  onDone,
-  onCancel,
-}: ReadingDetailsFormProps) {
+/** A photo chosen for the reading, made smaller on the phone first. */
+function usePhotoChoice(initialPhoto: PhotoInput | null) {
   const [photo, setPhoto] = useState<PhotoInput | null>(initialPhoto);
   const [photoError, setPhotoError] = useState<string | null>(null);
   const [photoBusy, setPhotoBusy] = useState(false);
-  const { register, handleSubmit, formState, getValues } = useForm<
-    ReadingDetailsInput,
-    unknown,
-    ReadingDetailsValues
-  >({
-    resolver: zodResolver(ReadingDetailsSchema),
-    defaultValues: initial,
-  });
-
   const choosePhoto = async (file: File | undefined) => {
     setPhotoError(null);
     if (!file) return;
@@ -67,52 +58,13 @@ export default function ReadingDetailsForm({
       setPhotoBusy(false);
     }
   };
+  return { photo, photoError, photoBusy, choosePhoto };
+}
 
-  const gpsSpeed =
-    gpsOn && gps.speedKn !== null ? `${gps.speedKn} kn from GPS` : GPS_WORDS[gps.status];
+function PhotoField({ choice }: { choice: ReturnType<typeof usePhotoChoice> }) {
+  const { photo, photoError, photoBusy, choosePhoto } = choice;
   return (
-    <form
-      noValidate
-      aria-label="Reading details"
-      className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3"
-      onSubmit={handleSubmit((values) => onDone({ values, input: getValues(), photo }))}
-    >
-      <Checkbox checked={gpsOn} onChange={(e) => onGpsChange(e.target.checked)}>
-        Speed over ground from GPS
-      </Checkbox>
-      {gpsOn ? (
-        <p className="text-sm" role="status">
-          {gpsSpeed}
-        </p>
-      ) : (
-        <TextField
-          label="Speed over ground (kn)"
-          inputMode="decimal"
-          autoComplete="off"
-          error={formState.errors.speedKn?.message}
-          {...register('speedKn')}
-        />
-      )}
-      <TextField
-        label="Fuel flow (L/h)"
-        inputMode="decimal"
-        autoComplete="off"
-        error={formState.errors.fuelLph?.message}
-        {...register('fuelLph')}
-      />
-      <TextField
-        label="Hour meter (h)"
-        inputMode="decimal"
-        autoComplete="off"
-        error={formState.errors.hourMeter?.message}
-        {...register('hourMeter')}
-      />
-      <TextField
-        label="Note"
-        autoComplete="off"
-        error={formState.errors.note?.message}
-        {...register('note')}
-      />
+    <>
       <label className="flex flex-col gap-1 font-semibold">
         Photo (hour meter, tachometer…)
         <input
@@ -140,6 +92,77 @@ export default function ReadingDetailsForm({
           {photoError}
         </p>
       )}
+    </>
+  );
+}
+
+/** Speed over ground: from the GPS when switched on, else typed. */
+function SpeedField({
+  gps,
+  gpsOn,
+  onGpsChange,
+  form,
+}: Pick<ReadingDetailsFormProps, 'gps' | 'gpsOn' | 'onGpsChange'> & { form: DetailsForm }) {
+  const gpsSpeed =
+    gpsOn && gps.speedKn !== null ? `${gps.speedKn} kn from GPS` : GPS_WORDS[gps.status];
+  return (
+    <>
+      <Checkbox checked={gpsOn} onChange={(e) => onGpsChange(e.target.checked)}>
+        Speed over ground from GPS
+      </Checkbox>
+      {gpsOn ? (
+        <p className="text-sm" role="status">
+          {gpsSpeed}
+        </p>
+      ) : (
+        <TextField
+          label="Speed over ground (kn)"
+          inputMode="decimal"
+          autoComplete="off"
+          error={form.formState.errors.speedKn?.message}
+          {...form.register('speedKn')}
+        />
+      )}
+    </>
+  );
+}
+
+/** Speed, fuel flow, hour meter, note and photo: one tap away from the pad, kept for the next reading. */
+export default function ReadingDetailsForm({
+  initial,
+  initialPhoto,
+  gps,
+  gpsOn,
+  onGpsChange,
+  onDone,
+  onCancel,
+}: ReadingDetailsFormProps) {
+  const photoChoice = usePhotoChoice(initialPhoto);
+  const form = useForm<ReadingDetailsInput, unknown, ReadingDetailsValues>({
+    resolver: zodResolver(ReadingDetailsSchema),
+    defaultValues: initial,
+  });
+  const { register, handleSubmit, formState, getValues } = form;
+  const { photo, photoBusy } = photoChoice;
+  return (
+    <form
+      noValidate
+      aria-label="Reading details"
+      className="flex flex-col gap-3 rounded-lg border-2 border-ink bg-surface p-3"
+      onSubmit={handleSubmit((values) => onDone({ values, input: getValues(), photo }))}
+    >
+      <SpeedField gps={gps} gpsOn={gpsOn} onGpsChange={onGpsChange} form={form} />
+      {OTHER_FIELDS.map(({ name, label, inputMode }) => (
+        <TextField
+          key={name}
+          label={label}
+          inputMode={inputMode}
+          autoComplete="off"
+          error={formState.errors[name]?.message}
+          {...register(name)}
+        />
+      ))}
+      <PhotoField choice={photoChoice} />
       <p className="text-sm text-muted">These details go with the next reading you log.</p>
       <div className="flex gap-2">
         <Button type="submit" disabled={photoBusy}>
