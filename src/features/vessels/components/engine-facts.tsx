@@ -5,8 +5,8 @@ import { formatDate, formatHours, formatRpmRange } from '../../../lib/format';
 const cycleWord = { 'two-stroke': 'two-stroke', 'four-stroke': 'four-stroke' } as const;
 const orDash = (value: string | null) => value ?? '—';
 
-/** Every recorded fact of an engine, for the workshop's engine page. */
-export function EngineFacts({ engine }: { engine: EngineView }) {
+/** Each fact as label, value, and whether the value is figures. */
+function engineFacts(engine: EngineView): Array<[string, string, boolean?]> {
   const propeller = [
     engine.propBlades !== null ? `${engine.propBlades} blades` : null,
     engine.propDiameterIn !== null ? `${engine.propDiameterIn} in diameter` : null,
@@ -21,7 +21,7 @@ export function EngineFacts({ engine }: { engine: EngineView }) {
   ]
     .filter(Boolean)
     .join(', ');
-  const facts: Array<[string, string, boolean?]> = [
+  return [
     ['Serial number', engine.serialNumber, true],
     ['Installation', installationLabel[engine.installation]],
     [
@@ -42,9 +42,13 @@ export function EngineFacts({ engine }: { engine: EngineView }) {
     ],
     ['Commissioned', orDash(engine.commissionedOn && formatDate(engine.commissionedOn))],
   ];
+}
+
+/** Every recorded fact of an engine, for the workshop's engine page. */
+export function EngineFacts({ engine }: { engine: EngineView }) {
   return (
     <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-[auto_1fr]">
-      {facts.map(([label, value, figures]) => (
+      {engineFacts(engine).map(([label, value, figures]) => (
         <div key={label} className="contents">
           <dt className="text-muted">{label}</dt>
           <dd className={figures ? 'figures break-all' : undefined}>{value}</dd>

@@ -1,4 +1,3 @@
-import type { FieldErrors, UseFormRegister } from 'react-hook-form';
 import {
   ENGINE_POSITIONS,
   INSTALLATIONS,
@@ -6,79 +5,35 @@ import {
   positionLabel,
   TACH_SOURCES,
   tachSourceLabel,
-  type EngineFormInput,
 } from '../../../../shared/engines/engine.schema';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { toNumberOrNull, toTextOrNull } from '../form-values';
+import { TextField } from '../../../components/ui/field';
+import { toTextOrNull } from '../form-values';
+import { ChoiceField, Fieldset, NumberField, type SectionProps } from './engine-field-inputs';
 
-export interface SectionProps {
-  register: UseFormRegister<EngineFormInput>;
-  errors: FieldErrors<EngineFormInput>;
-}
+// Shown in this order, the usual choice first.
+const FUELS = ['petrol', 'diesel'] as const;
+const fuelLabel = { petrol: 'Petrol', diesel: 'Diesel' };
+const CYCLES = ['four-stroke', 'two-stroke'] as const;
+const cycleLabel = { 'four-stroke': 'Four-stroke', 'two-stroke': 'Two-stroke' };
 
-type NumberName =
-  | 'ratedPowerKw'
-  | 'ratedRpmMin'
-  | 'ratedRpmMax'
-  | 'gearRatio'
-  | 'propBlades'
-  | 'propDiameterIn'
-  | 'propPitchIn'
-  | 'poles'
-  | 'pulleyRatio'
-  | 'hourMeterAtCommissioning';
-
-function NumberField({
-  name,
-  label,
-  hint,
-  whole = false,
-  register,
-  errors,
-}: SectionProps & { name: NumberName; label: string; hint?: string; whole?: boolean }) {
-  return (
-    <TextField
-      label={label}
-      hint={hint}
-      inputMode={whole ? 'numeric' : 'decimal'}
-      autoComplete="off"
-      className="figures"
-      error={errors[name]?.message}
-      {...register(name, { setValueAs: toNumberOrNull })}
-    />
-  );
-}
-
-export function Fieldset({ legend, children }: { legend: string; children: React.ReactNode }) {
-  return (
-    <fieldset className="grid gap-4 rounded-lg border-2 border-line p-3 sm:grid-cols-2 sm:p-4 lg:grid-cols-3">
-      <legend className="px-1 text-lg font-bold">{legend}</legend>
-      {children}
-    </fieldset>
-  );
-}
-
-export function IdentityFields({ register, errors }: SectionProps) {
+export function IdentityFields(form: SectionProps) {
+  const { register, errors } = form;
   return (
     <Fieldset legend="Engine">
-      <SelectField label="Position" error={errors.position?.message} {...register('position')}>
-        {ENGINE_POSITIONS.map((p) => (
-          <option key={p} value={p}>
-            {positionLabel[p]}
-          </option>
-        ))}
-      </SelectField>
-      <SelectField
+      <ChoiceField
+        name="position"
+        label="Position"
+        values={ENGINE_POSITIONS}
+        labels={positionLabel}
+        {...form}
+      />
+      <ChoiceField
+        name="installation"
         label="Installation"
-        error={errors.installation?.message}
-        {...register('installation')}
-      >
-        {INSTALLATIONS.map((i) => (
-          <option key={i} value={i}>
-            {installationLabel[i]}
-          </option>
-        ))}
-      </SelectField>
+        values={INSTALLATIONS}
+        labels={installationLabel}
+        {...form}
+      />
       <TextField
         label="Maker"
         autoComplete="off"
@@ -107,14 +62,8 @@ export function IdentityFields({ register, errors }: SectionProps) {
         register={register}
         errors={errors}
       />
-      <SelectField label="Fuel" error={errors.fuel?.message} {...register('fuel')}>
-        <option value="petrol">Petrol</option>
-        <option value="diesel">Diesel</option>
-      </SelectField>
-      <SelectField label="Cycle" error={errors.cycle?.message} {...register('cycle')}>
-        <option value="four-stroke">Four-stroke</option>
-        <option value="two-stroke">Two-stroke</option>
-      </SelectField>
+      <ChoiceField name="fuel" label="Fuel" values={FUELS} labels={fuelLabel} {...form} />
+      <ChoiceField name="cycle" label="Cycle" values={CYCLES} labels={cycleLabel} {...form} />
     </Fieldset>
   );
 }
@@ -174,17 +123,14 @@ export function TachFields({
 }: SectionProps & { dialHint: string | null }) {
   return (
     <Fieldset legend="Tachometer signal">
-      <SelectField
+      <ChoiceField
+        name="tachSource"
         label="Signal source"
-        error={errors.tachSource?.message}
-        {...register('tachSource')}
-      >
-        {TACH_SOURCES.map((s) => (
-          <option key={s} value={s}>
-            {tachSourceLabel[s]}
-          </option>
-        ))}
-      </SelectField>
+        values={TACH_SOURCES}
+        labels={tachSourceLabel}
+        register={register}
+        errors={errors}
+      />
       <NumberField
         name="poles"
         label="Poles of the coil or alternator"

@@ -11,7 +11,6 @@ import { tachDialSetting } from '../../../../shared/engine-speed/engine-speed';
 import { SignalSourceSchema } from '../../../../shared/engine-speed/signal-source.schema';
 import type { EngineRow, EngineView } from '../../../../shared/vessels/vessel-view';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
 import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveEngine } from '../engine-api';
@@ -21,6 +20,7 @@ import {
   RatingFields,
   TachFields,
 } from './engine-form-fields';
+import { FormActions } from './form-actions';
 
 interface EngineFormProps {
   /** The engine being edited; a new engine when absent. */
@@ -61,6 +61,17 @@ function useDialHint(control: Control<EngineFormInput>): string | null {
   return `Helm tachometer setting: ${round(polesDial)} on a dial labelled in poles, or ${round(pulsesDial)} on one labelled in pulses per revolution (half-wave signal; a full-wave signal doubles both).`;
 }
 
+/** How many fields are marked: the form is long, and the marks may be out of sight. */
+function AttentionNote({ count }: { count: number }) {
+  if (count === 0) return null;
+  return (
+    <p role="alert" className="font-semibold text-danger">
+      {count === 1 ? 'One field needs attention' : `${count} fields need attention`}: see the marked
+      fields below.
+    </p>
+  );
+}
+
 /** Every field of an engine, checked with the shared schema here and again on the server. */
 export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: EngineFormProps) {
   const save = useSaveEngine();
@@ -90,7 +101,6 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
     );
   });
 
-  const fieldErrorCount = Object.keys(errors).length;
   return (
     <form
       noValidate
@@ -99,14 +109,7 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
       aria-label={engine ? 'Edit engine' : 'New engine'}
     >
       {refusal && <Alert title="Engine not saved">{refusal}</Alert>}
-      {fieldErrorCount > 0 && (
-        <p role="alert" className="font-semibold text-danger">
-          {fieldErrorCount === 1
-            ? 'One field needs attention'
-            : `${fieldErrorCount} fields need attention`}
-          : see the marked fields below.
-        </p>
-      )}
+      <AttentionNote count={Object.keys(errors).length} />
       {vessels && (
         <SelectField label="Vessel" error={errors.vesselId?.message} {...register('vesselId')}>
           {vessels.map((v) => (
@@ -120,16 +123,9 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
       <RatingFields register={register} errors={errors} />
       <TachFields register={register} errors={errors} dialHint={dialHint} />
       <CommissioningFields register={register} errors={errors} />
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" pending={save.isPending} pendingLabel="Saving engine…">
-          {engine ? 'Save engine' : 'Add engine'}
-        </Button>
-        {onCancel && (
-          <Button variant="secondary" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <FormActions pending={save.isPending} pendingLabel="Saving engine…" onCancel={onCancel}>
+        {engine ? 'Save engine' : 'Add engine'}
+      </FormActions>
     </form>
   );
 }

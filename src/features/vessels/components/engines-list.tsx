@@ -2,10 +2,10 @@ import { Link } from 'react-router-dom';
 import { positionLabel } from '../../../../shared/engines/engine.schema';
 import type { EngineRow } from '../../../../shared/vessels/vessel-view';
 import { Card } from '../../../components/ui/card';
-import { Table, Td } from '../../../components/ui/table';
+import { Td } from '../../../components/ui/table';
 import { formatDate, formatRpmRange } from '../../../lib/format';
 import { useSorting, type SortValue } from '../use-sorting';
-import { SortableTh, SortSelect } from './sortable-th';
+import { SortableList } from './sortable-list';
 import { ArchivedPill, ChecklistPill, checklistStateOf } from './status-pills';
 
 type Column = 'engine' | 'serial' | 'vessel' | 'rated' | 'commissioned' | 'checklist';
@@ -40,111 +40,95 @@ export function EnginesList({
   showVessel?: boolean;
   emptyText?: string;
 }) {
-  const { sorted, sort, sortBy, setSort } = useSorting<EngineRow, Column>(engines, columns, {
+  const sorting = useSorting<EngineRow, Column>(engines, columns, {
     key: showVessel ? 'vessel' : 'engine',
     direction: 'ascending',
   });
   const shown = (Object.keys(labels) as Column[]).filter((c) => showVessel || c !== 'vessel');
   if (engines.length === 0) return <p className="py-4">{emptyText}</p>;
   return (
+    <SortableList
+      noun="Engines"
+      rows={sorting.sorted}
+      columns={shown}
+      labels={labels}
+      sort={sorting.sort}
+      sortBy={sorting.sortBy}
+      setSort={sorting.setSort}
+      cells={(e) => <EngineCells engine={e} showVessel={showVessel} />}
+      card={(e) => <EngineCard engine={e} showVessel={showVessel} />}
+    />
+  );
+}
+
+function EngineCells({ engine: e, showVessel }: { engine: EngineRow; showVessel: boolean }) {
+  return (
     <>
-      <div className="hidden sm:block">
-        <Table>
-          <caption className="sr-only">Engines, sortable by each column</caption>
-          <thead>
-            <tr>
-              {shown.map((c) => (
-                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {sorted.map((e) => (
-              <tr key={e.id}>
-                <Td>
-                  <Link to={`/engines/${e.id}`} className="font-bold underline underline-offset-4">
-                    {engineName(e)}
-                  </Link>{' '}
-                  <ArchivedPill archivedAt={e.archivedAt} />
-                </Td>
-                <Td className="figures">{e.serialNumber}</Td>
-                {showVessel && (
-                  <Td>
-                    <Link to={`/vessels/${e.vessel.id}`} className="underline underline-offset-4">
-                      {e.vessel.name}
-                    </Link>
-                  </Td>
-                )}
-                <Td className="figures whitespace-nowrap">
-                  {formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM
-                </Td>
-                <Td>
-                  {e.commissionedOn ? (
-                    formatDate(e.commissionedOn)
-                  ) : (
-                    <span className="text-muted">—</span>
-                  )}
-                </Td>
-                <Td>
-                  <Link
-                    to={`/engines/${e.id}/checklist`}
-                    aria-label={`Checklist of ${engineName(e)}, ${e.serialNumber}`}
-                  >
-                    <ChecklistPill engine={e} />
-                  </Link>
-                </Td>
-              </tr>
-            ))}
-          </tbody>
-        </Table>
-      </div>
-      <div className="flex flex-col gap-3 sm:hidden">
-        <SortSelect
-          options={Object.fromEntries(shown.map((c) => [c, labels[c]])) as Record<Column, string>}
-          sort={sort}
-          onChange={setSort}
-        />
-        <ul className="flex flex-col gap-3" aria-label="Engines">
-          {sorted.map((e) => (
-            <li key={e.id}>
-              <Card
-                level={3}
-                title={
-                  <Link
-                    to={`/engines/${e.id}`}
-                    className="flex min-h-touch items-center underline underline-offset-4"
-                  >
-                    {engineName(e)}
-                  </Link>
-                }
-              >
-                <p className="figures">{e.serialNumber}</p>
-                {showVessel && (
-                  <p>
-                    <span className="text-muted">On </span>
-                    {e.vessel.name}
-                  </p>
-                )}
-                <p>
-                  <span className="text-muted">Rated </span>
-                  <span className="figures">
-                    {formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM
-                  </span>
-                </p>
-                <div className="mt-2 flex flex-wrap items-center gap-2">
-                  <ChecklistPill engine={e} /> <ArchivedPill archivedAt={e.archivedAt} />
-                </div>
-                <Link
-                  to={`/engines/${e.id}/checklist`}
-                  className="mt-2 flex min-h-touch items-center font-semibold underline underline-offset-4"
-                >
-                  Commissioning checklist
-                </Link>
-              </Card>
-            </li>
-          ))}
-        </ul>
-      </div>
+      <Td>
+        <Link to={`/engines/${e.id}`} className="font-bold underline underline-offset-4">
+          {engineName(e)}
+        </Link>{' '}
+        <ArchivedPill archivedAt={e.archivedAt} />
+      </Td>
+      <Td className="figures">{e.serialNumber}</Td>
+      {showVessel && (
+        <Td>
+          <Link to={`/vessels/${e.vessel.id}`} className="underline underline-offset-4">
+            {e.vessel.name}
+          </Link>
+        </Td>
+      )}
+      <Td className="figures whitespace-nowrap">
+        {formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM
+      </Td>
+      <Td>
+        {e.commissionedOn ? formatDate(e.commissionedOn) : <span className="text-muted">—</span>}
+      </Td>
+      <Td>
+        <Link
+          to={`/engines/${e.id}/checklist`}
+          aria-label={`Checklist of ${engineName(e)}, ${e.serialNumber}`}
+        >
+          <ChecklistPill engine={e} />
+        </Link>
+      </Td>
     </>
+  );
+}
+
+function EngineCard({ engine: e, showVessel }: { engine: EngineRow; showVessel: boolean }) {
+  return (
+    <Card
+      level={3}
+      title={
+        <Link
+          to={`/engines/${e.id}`}
+          className="flex min-h-touch items-center underline underline-offset-4"
+        >
+          {engineName(e)}
+        </Link>
+      }
+    >
+      <p className="figures">{e.serialNumber}</p>
+      {showVessel && (
+        <p>
+          <span className="text-muted">On </span>
+          {e.vessel.name}
+        </p>
+      )}
+      <p>
+        <span className="text-muted">Rated </span>
+        <span className="figures">{formatRpmRange(e.ratedRpmMin, e.ratedRpmMax)} RPM</span>
+      </p>
+      <div className="mt-2 flex flex-wrap items-center gap-2">
+        <ChecklistPill engine={e} /> <ArchivedPill archivedAt={e.archivedAt} />
+      </div>
+      <Link
+        to={`/engines/${e.id}/checklist`}
+        className="mt-2 flex min-h-touch items-center font-semibold underline underline-offset-4"
+      >
+        Commissioning checklist
+      </Link>
+    </Card>
   );
 }

@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
 import type { SkipperOption } from '../../../../shared/vessels/vessel-view';
 import { Card } from '../../../components/ui/card';
-import { Table, Td } from '../../../components/ui/table';
+import { Td } from '../../../components/ui/table';
 import { useSorting, type SortValue } from '../use-sorting';
-import { SortableTh, SortSelect } from './sortable-th';
+import { SortableList } from './sortable-list';
 
 type Column = 'name' | 'email' | 'vessels';
 type Row = SkipperOption & { vessels: Array<{ id: string; name: string }> };
@@ -64,46 +64,32 @@ export function SkippersList({
       <p className="py-4">No skippers match. Skippers join through an invite from the Team page.</p>
     );
   return (
-    <>
-      <div className="hidden sm:block">
-        <Table>
-          <caption className="sr-only">Skippers, sortable by each column</caption>
-          <thead>
-            <tr>
-              {(Object.keys(labels) as Column[]).map((c) => (
-                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {sorted.map((s) => (
-              <tr key={s.id}>
-                <Td className="font-bold">{s.name}</Td>
-                <Td className="break-all">{s.email}</Td>
-                <Td>
-                  <VesselLinks vessels={s.vessels} />
-                </Td>
-              </tr>
-            ))}
-          </tbody>
-        </Table>
-      </div>
-      <div className="flex flex-col gap-3 sm:hidden">
-        <SortSelect options={labels} sort={sort} onChange={setSort} />
-        <ul className="flex flex-col gap-3" aria-label="Skippers">
-          {sorted.map((s) => (
-            <li key={s.id}>
-              <Card level={3} title={s.name}>
-                <p className="break-all text-muted">{s.email}</p>
-                <p>
-                  <span className="text-muted">Vessels </span>
-                  <VesselLinks vessels={s.vessels} />
-                </p>
-              </Card>
-            </li>
-          ))}
-        </ul>
-      </div>
-    </>
+    <SortableList
+      noun="Skippers"
+      rows={sorted}
+      columns={Object.keys(labels) as Column[]}
+      labels={labels}
+      sort={sort}
+      sortBy={sortBy}
+      setSort={setSort}
+      cells={(s) => (
+        <>
+          <Td className="font-bold">{s.name}</Td>
+          <Td className="break-all">{s.email}</Td>
+          <Td>
+            <VesselLinks vessels={s.vessels} />
+          </Td>
+        </>
+      )}
+      card={(s) => (
+        <Card level={3} title={s.name}>
+          <p className="break-all text-muted">{s.email}</p>
+          <p>
+            <span className="text-muted">Vessels </span>
+            <VesselLinks vessels={s.vessels} />
+          </p>
+        </Card>
+      )}
+    />
   );
 }

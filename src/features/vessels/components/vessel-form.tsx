@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useForm } from 'react-hook-form';
+import { useForm, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import {
@@ -10,15 +10,77 @@ import {
 } from '../../../../shared/vessels/vessel.schema';
 import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveVessel } from '../api';
 import { toNumberOrNull } from '../form-values';
+import { FormActions } from './form-actions';
 
 type VesselFormValues = z.input<typeof VesselInputSchema>;
 const FIELDS = ['name', 'hin', 'type', 'lengthM', 'homePort'] as const;
 
+const valuesOf = (vessel: VesselView | undefined): VesselFormValues =>
+  vessel
+    ? {
+        name: vessel.name,
+        hin: vessel.hin,
+        type: vessel.type,
+        lengthM: vessel.lengthM,
+        homePort: vessel.homePort,
+      }
+    : { name: '', hin: '', type: 'runabout', lengthM: null, homePort: '' };
+
+function VesselFields({
+  register,
+  errors,
+}: {
+  register: UseFormRegister<VesselFormValues>;
+  errors: FieldErrors<VesselFormValues>;
+}) {
+  return (
+    <div className="grid gap-4 sm:grid-cols-2">
+      <TextField
+        label="Vessel name"
+        autoComplete="off"
+        error={errors.name?.message}
+        {...register('name')}
+      />
+      <TextField
+        label="Hull identification number (HIN)"
+        hint="Optional; 12 to 14 letters and digits"
+        autoComplete="off"
+        autoCapitalize="characters"
+        spellCheck={false}
+        className="figures"
+        error={errors.hin?.message}
+        {...register('hin')}
+      />
+      <SelectField label="Type" error={errors.type?.message} {...register('type')}>
+        {VESSEL_TYPES.map((t) => (
+          <option key={t} value={t}>
+            {vesselTypeLabel[t]}
+          </option>
+        ))}
+      </SelectField>
+      <TextField
+        label="Length (m)"
+        inputMode="decimal"
+        autoComplete="off"
+        className="figures"
+        error={errors.lengthM?.message}
+        {...register('lengthM', { setValueAs: toNumberOrNull })}
+      />
+      <TextField
+        label="Home port"
+        autoComplete="off"
+        error={errors.homePort?.message}
+        {...register('homePort')}
+      />
+    </div>
+  );
+}
+
+/** A vessel's name, HIN, type, length and home port; a new vessel when none is given. */
 export function VesselForm({
   vessel,
   onSaved,
@@ -36,15 +98,7 @@ export function VesselForm({
     VesselInput
   >({
     resolver: zodResolver(VesselInputSchema),
-    defaultValues: vessel
-      ? {
-          name: vessel.name,
-          hin: vessel.hin,
-          type: vessel.type,
-          lengthM: vessel.lengthM,
-          homePort: vessel.homePort,
-        }
-      : { name: '', hin: '', type: 'runabout', lengthM: null, homePort: '' },
+    defaultValues: valuesOf(vessel),
   });
   const errors = formState.errors;
 
@@ -70,55 +124,10 @@ export function VesselForm({
       aria-label={vessel ? 'Edit vessel' : 'New vessel'}
     >
       {refusal && <Alert title="Vessel not saved">{refusal}</Alert>}
-      <div className="grid gap-4 sm:grid-cols-2">
-        <TextField
-          label="Vessel name"
-          autoComplete="off"
-          error={errors.name?.message}
-          {...register('name')}
-        />
-        <TextField
-          label="Hull identification number (HIN)"
-          hint="Optional; 12 to 14 letters and digits"
-          autoComplete="off"
-          autoCapitalize="characters"
-          spellCheck={false}
-          className="figures"
-          error={errors.hin?.message}
-          {...register('hin')}
-        />
-        <SelectField label="Type" error={errors.type?.message} {...register('type')}>
-          {VESSEL_TYPES.map((t) => (
-            <option key={t} value={t}>
-              {vesselTypeLabel[t]}
-            </option>
-          ))}
-        </SelectField>
-        <TextField
-          label="Length (m)"
-          inputMode="decimal"
-          autoComplete="off"
-          className="figures"
-          error={errors.lengthM?.message}
-          {...register('lengthM', { setValueAs: toNumberOrNull })}
-        />
-        <TextField
-          label="Home port"
-          autoComplete="off"
-          error={errors.homePort?.message}
-          {...register('homePort')}
-        />
-      </div>
-      <div className="flex flex-wrap gap-3">
-        <Button type="submit" pending={save.isPending} pendingLabel="Saving vessel…">
-          {vessel ? 'Save vessel' : 'Add vessel'}
-        </Button>
-        {onCancel && (
-          <Button variant="secondary" onClick={onCancel}>
-            Cancel
-          </Button>
-        )}
-      </div>
+      <VesselFields register={register} errors={errors} />
+      <FormActions pending={save.isPending} pendingLabel="Saving vessel…" onCancel={onCancel}>
+        {vessel ? 'Save vessel' : 'Add vessel'}
+      </FormActions>
     </form>
   );
 }

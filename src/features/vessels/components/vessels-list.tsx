@@ -2,9 +2,9 @@ import { Link } from 'react-router-dom';
 import { vesselTypeLabel } from '../../../../shared/vessels/vessel.schema';
 import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Card } from '../../../components/ui/card';
-import { Table, Td } from '../../../components/ui/table';
+import { Td } from '../../../components/ui/table';
 import { useSorting, type SortValue } from '../use-sorting';
-import { SortableTh, SortSelect } from './sortable-th';
+import { SortableList } from './sortable-list';
 import { ArchivedPill } from './status-pills';
 
 type Column = 'name' | 'type' | 'homePort' | 'skippers' | 'engines';
@@ -30,7 +30,7 @@ const enginesText = (v: VesselView) =>
 
 /** Vessels as a sortable table on wide screens and as cards on phones. */
 export function VesselsList({ vessels }: { vessels: VesselView[] }) {
-  const { sorted, sort, sortBy, setSort } = useSorting<VesselView, Column>(vessels, columns, {
+  const sorting = useSorting<VesselView, Column>(vessels, columns, {
     key: 'name',
     direction: 'ascending',
   });
@@ -39,88 +39,75 @@ export function VesselsList({ vessels }: { vessels: VesselView[] }) {
       <p className="py-4">No vessels match. Change the search or the filter, or add a vessel.</p>
     );
   return (
+    <SortableList
+      noun="Vessels"
+      rows={sorting.sorted}
+      columns={Object.keys(labels) as Column[]}
+      labels={labels}
+      sort={sorting.sort}
+      sortBy={sorting.sortBy}
+      setSort={sorting.setSort}
+      cells={(v) => <VesselCells vessel={v} />}
+      card={(v) => <VesselListCard vessel={v} />}
+    />
+  );
+}
+
+function VesselCells({ vessel: v }: { vessel: VesselView }) {
+  return (
     <>
-      {/* display:none keeps the hidden layout out of the accessibility tree. */}
-      <div className="hidden sm:block">
-        <Table>
-          <caption className="sr-only">Vessels, sortable by each column</caption>
-          <thead>
-            <tr>
-              {(Object.keys(labels) as Column[]).map((c) => (
-                <SortableTh key={c} column={c} label={labels[c]} sort={sort} onSort={sortBy} />
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {sorted.map((v) => (
-              <tr key={v.id}>
-                <Td>
-                  <Link to={`/vessels/${v.id}`} className="font-bold underline underline-offset-4">
-                    {v.name}
-                  </Link>{' '}
-                  <ArchivedPill archivedAt={v.archivedAt} />
-                  {v.hin && <p className="figures text-sm text-muted">{v.hin}</p>}
-                </Td>
-                <Td>
-                  {vesselTypeLabel[v.type]}
-                  {v.lengthM !== null && (
-                    <span className="figures text-muted"> · {v.lengthM} m</span>
-                  )}
-                </Td>
-                <Td>{v.homePort || <span className="text-muted">—</span>}</Td>
-                <Td>
-                  {v.skippers.map((s) => s.name).join(', ') || (
-                    <span className="text-muted">none linked</span>
-                  )}
-                </Td>
-                <Td>
-                  <span className="figures font-bold">{v.engines.length}</span>{' '}
-                  <span className="text-sm text-muted">{enginesText(v)}</span>
-                </Td>
-              </tr>
-            ))}
-          </tbody>
-        </Table>
-      </div>
-      <div className="flex flex-col gap-3 sm:hidden">
-        <SortSelect options={labels} sort={sort} onChange={setSort} />
-        <ul className="flex flex-col gap-3" aria-label="Vessels">
-          {sorted.map((v) => (
-            <li key={v.id}>
-              <Card
-                level={3}
-                title={
-                  <Link
-                    to={`/vessels/${v.id}`}
-                    className="flex min-h-touch items-center underline underline-offset-4"
-                  >
-                    {v.name}
-                  </Link>
-                }
-              >
-                <ArchivedPill archivedAt={v.archivedAt} />
-                <p className="text-muted">
-                  {[
-                    vesselTypeLabel[v.type],
-                    v.lengthM !== null ? `${v.lengthM} m` : null,
-                    v.homePort,
-                  ]
-                    .filter(Boolean)
-                    .join(' · ')}
-                </p>
-                <p>
-                  <span className="text-muted">Skippers </span>
-                  {v.skippers.map((s) => s.name).join(', ') || 'none linked'}
-                </p>
-                <p>
-                  <span className="text-muted">Engines </span>
-                  {enginesText(v)}
-                </p>
-              </Card>
-            </li>
-          ))}
-        </ul>
-      </div>
+      <Td>
+        <Link to={`/vessels/${v.id}`} className="font-bold underline underline-offset-4">
+          {v.name}
+        </Link>{' '}
+        <ArchivedPill archivedAt={v.archivedAt} />
+        {v.hin && <p className="figures text-sm text-muted">{v.hin}</p>}
+      </Td>
+      <Td>
+        {vesselTypeLabel[v.type]}
+        {v.lengthM !== null && <span className="figures text-muted"> · {v.lengthM} m</span>}
+      </Td>
+      <Td>{v.homePort || <span className="text-muted">—</span>}</Td>
+      <Td>
+        {v.skippers.map((s) => s.name).join(', ') || (
+          <span className="text-muted">none linked</span>
+        )}
+      </Td>
+      <Td>
+        <span className="figures font-bold">{v.engines.length}</span>{' '}
+        <span className="text-sm text-muted">{enginesText(v)}</span>
+      </Td>
     </>
+  );
+}
+
+function VesselListCard({ vessel: v }: { vessel: VesselView }) {
+  return (
+    <Card
+      level={3}
+      title={
+        <Link
+          to={`/vessels/${v.id}`}
+          className="flex min-h-touch items-center underline underline-offset-4"
+        >
+          {v.name}
+        </Link>
+      }
+    >
+      <ArchivedPill archivedAt={v.archivedAt} />
+      <p className="text-muted">
+        {[vesselTypeLabel[v.type], v.lengthM !== null ? `${v.lengthM} m` : null, v.homePort]
+          .filter(Boolean)
+          .join(' · ')}
+      </p>
+      <p>
+        <span className="text-muted">Skippers </span>
+        {v.skippers.map((s) => s.name).join(', ') || 'none linked'}
+      </p>
+      <p>
+        <span className="text-muted">Engines </span>
+        {enginesText(v)}
+      </p>
+    </Card>
   );
 }
