@@ -36,51 +36,62 @@ function phaseAt(phases: ResolvedPhase[], runMs: number): ResolvedPhase {
 function demoRun(phases: ResolvedPhase[]): RunEvent[] {
   const random = repeatableRandom(42);
   const events: RunEvent[] = [];
-  let n = 0;
-  let runMs = 0;
-  let current = phases[0];
-  for (let outing = 0; outing < OUTINGS; outing++) {
-    const dayStart = START_MS + outing * 24 * HOUR_MS;
-    events.push({ kind: 'session-start', id: uuid(++n), at: dayStart, engineId: ENGINE_ID });
-    for (let t = 0; t < OUTING_HOURS * HOUR_MS; t += READING_EVERY_MS, runMs += READING_EVERY_MS) {
-      const phase = phaseAt(phases, runMs);
-      if (phase !== current) {
-        current = phase;
-        events.push({
-          kind: 'phase-advance',
-          id: uuid(++n),
-          at: dayStart + t,
-          engineId: ENGINE_ID,
-          phaseId: phase.id,
-        });
-      }
-      const rpm = Math.round(
-        phase.band.rpmMin + random() * (phase.band.rpmMax - phase.band.rpmMin) * 1.1,
-      );
-      const throttle = THROTTLE_POSITIONS[Math.floor(random() * THROTTLE_POSITIONS.length)];
-      events.push({
-        kind: 'reading',
-        id: uuid(++n),
-        at: dayStart + t,
-        engineId: ENGINE_ID,
-        phaseId: phase.id,
-        rpm,
-        throttle,
-      });
-    }
-    events.push({
-      kind: 'session-stop',
-      id: uuid(++n),
-      at: dayStart + OUTING_HOURS * HOUR_MS,
-      engineId: ENGINE_ID,
-    });
-  }
+  const walk = { n: 0, runMs: 0, current: phases[0] };
+  for (let outing = 0; outing < OUTINGS; outing++) logOuting(events, phases, outing, walk, random);
   // Sync delivers events in no particular order; shuffle so the sort does real work.
   for (let i = events.length - 1; i > 0; i--) {
     const j = Math.floor(random() * (i + 1));
     [events[i], events[j]] = [events[j], events[i]];
   }
   return events;
+}
+
+/** One day's outing: a reading every 5 s for five hours, moving on a phase as its time is run. */
+function logOuting(
+  events: RunEvent[],
+  phases: ResolvedPhase[],
+  outing: number,
+  walk: { n: number; runMs: number; current: ResolvedPhase },
+  random: () => number,
+) {
+  const dayStart = START_MS + outing * 24 * HOUR_MS;
+  events.push({ kind: 'session-start', id: uuid(++walk.n), at: dayStart, engineId: ENGINE_ID });
+  for (
+    let t = 0;
+    t < OUTING_HOURS * HOUR_MS;
+    t += READING_EVERY_MS, walk.runMs += READING_EVERY_MS
+  ) {
+    const phase = phaseAt(phases, walk.runMs);
+    if (phase !== walk.current) {
+      walk.current = phase;
+      events.push({
+        kind: 'phase-advance',
+        id: uuid(++walk.n),
+        at: dayStart + t,
+        engineId: ENGINE_ID,
+        phaseId: phase.id,
+      });
+    }
+    const rpm = Math.round(
+      phase.band.rpmMin + random() * (phase.band.rpmMax - phase.band.rpmMin) * 1.1,
+    );
+    const throttle = THROTTLE_POSITIONS[Math.floor(random() * THROTTLE_POSITIONS.length)];
+    events.push({
+      kind: 'reading',
+      id: uuid(++walk.n),
+      at: dayStart + t,
+      engineId: ENGINE_ID,
+      phaseId: phase.id,
+      rpm,
+      throttle,
+    });
+  }
+  events.push({
+    kind: 'session-stop',
+    id: uuid(++walk.n),
+    at: dayStart + OUTING_HOURS * HOUR_MS,
+    engineId: ENGINE_ID,
+  });
 }
 
 const percentile = (sorted: number[], p: number) =>

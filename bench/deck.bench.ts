@@ -8,7 +8,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import zlib from 'node:zlib';
-import type { Page } from 'playwright-core';
+import type { BrowserContext, Page } from 'playwright-core';
 import { CLIENT_DIR, ensureClientBuilt } from '../scripts/client-build';
 import { apiSession, openRunFor } from '../tests/helpers/api';
 import { launchBrowser, newContext, PHONE } from '../tests/helpers/browser';
@@ -101,6 +101,66 @@ async function offlineReloads(page: Page): Promise<number[]> {
   return times;
 }
 
+/** The deck's JavaScript against its size budget, printed file by file; true when it fits. */
+async function checkSize(page: Page, deckPath: string): Promise<boolean> {
+  const files = await deckJavaScript(page, deckPath);
+  const totalKb = files.reduce((sum, f) => sum + f.gzipBytes, 0) / 1024;
+  console.log(`deck route JavaScript (gzip), ${files.length} files:`);
+  for (const f of files.sort((a, b) => b.gzipBytes - a.gzipBytes)) {
+    console.log(
+      `  ${(f.gzipBytes / 1024).toFixed(1).padStart(6)} KB  ${f.urlPath}  ${f.makeup.slice(0, 6).join(', ')}`,
+    );
+  }
+  const forbidden = files.flatMap((f) =>
+    f.makeup
+      .filter((part) => FORBIDDEN.some((re) => re.test(part)))
+      .map((part) => `${f.urlPath}: ${part}`),
+  );
+  console.log(
+    `total ${totalKb.toFixed(1)} KB, target ≤ ${JS_TARGET_KB} KB; chart or workshop code: ${forbidden.length ? forbidden.join('; ') : 'none'}`,
+  );
+  const workshopOnly = [
+    ...new Set(
+      files.flatMap((f) =>
+        f.sources
+          .filter((src) => WORKSHOP_ONLY.some((re) => re.test(src)))
+          .map((src) =>
+            src
+              .replace(/^.*node_modules\//, '')
+              .split('/')
+              .slice(0, 3)
+              .join('/'),
+          ),
+      ),
+    ),
+  ];
+  console.log(
+    `router, server-state cache or classic zod on the deck: ${workshopOnly.length ? workshopOnly.join(', ') : 'none'}`,
+  );
+  const sizeOk = totalKb <= JS_TARGET_KB && forbidden.length === 0 && workshopOnly.length === 0;
+  console.log(sizeOk ? 'PASS size' : 'FAIL size');
+  return sizeOk;
+}
+
+/** Starts an outing, goes offline and reloads the run screen; true when the median is in time. */
+async function checkOfflineReload(page: Page, context: BrowserContext): Promise<boolean> {
+  await page.getByText('I have read the cautions').click();
+  await page.getByRole('button', { name: 'Start outing' }).click();
+  await page.getByRole('button', { name: 'Log reading' }).waitFor();
+  await context.setOffline(true);
+  const times = (await offlineReloads(page)).sort((a, b) => a - b);
+  const median = times[Math.floor(times.length / 2)];
+  console.log(
+    `offline reload to the run screen, ${RELOADS} runs: ${times.map((t) => t.toFixed(0)).join(', ')} ms`,
+  );
+  console.log(
+    `median ${median.toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms, target median < ${RELOAD_TARGET_MS} ms`,
+  );
+  const reloadOk = median < RELOAD_TARGET_MS;
+  console.log(reloadOk ? 'PASS offline reload' : 'FAIL offline reload');
+  return reloadOk;
+}
+
 async function main() {
   ensureClientBuilt();
   const server = await startRealServer();
@@ -121,58 +181,8 @@ async function main() {
       timeout: 30_000,
     });
     await page.getByRole('button', { name: 'Start outing' }).waitFor({ timeout: 30_000 });
-
-    const files = await deckJavaScript(page, `/deck/${ternId}`);
-    const totalKb = files.reduce((sum, f) => sum + f.gzipBytes, 0) / 1024;
-    console.log(`deck route JavaScript (gzip), ${files.length} files:`);
-    for (const f of files.sort((a, b) => b.gzipBytes - a.gzipBytes)) {
-      console.log(
-        `  ${(f.gzipBytes / 1024).toFixed(1).padStart(6)} KB  ${f.urlPath}  ${f.makeup.slice(0, 6).join(', ')}`,
-      );
-    }
-    const forbidden = files.flatMap((f) =>
-      f.makeup
-        .filter((part) => FORBIDDEN.some((re) => re.test(part)))
-        .map((part) => `${f.urlPath}: ${part}`),
-    );
-    console.log(
-      `total ${totalKb.toFixed(1)} KB, target ≤ ${JS_TARGET_KB} KB; chart or workshop code: ${forbidden.length ? forbidden.join('; ') : 'none'}`,
-    );
-    const workshopOnly = [
-      ...new Set(
-        files.flatMap((f) =>
-          f.sources
-            .filter((src) => WORKSHOP_ONLY.some((re) => re.test(src)))
-            .map((src) =>
-              src
-                .replace(/^.*node_modules\//, '')
-                .split('/')
-                .slice(0, 3)
-                .join('/'),
-            ),
-        ),
-      ),
-    ];
-    console.log(
-      `router, server-state cache or classic zod on the deck: ${workshopOnly.length ? workshopOnly.join(', ') : 'none'}`,
-    );
-    const sizeOk = totalKb <= JS_TARGET_KB && forbidden.length === 0 && workshopOnly.length === 0;
-    console.log(sizeOk ? 'PASS size' : 'FAIL size');
-
-    await page.getByText('I have read the cautions').click();
-    await page.getByRole('button', { name: 'Start outing' }).click();
-    await page.getByRole('button', { name: 'Log reading' }).waitFor();
-    await context.setOffline(true);
-    const times = (await offlineReloads(page)).sort((a, b) => a - b);
-    const median = times[Math.floor(times.length / 2)];
-    console.log(
-      `offline reload to the run screen, ${RELOADS} runs: ${times.map((t) => t.toFixed(0)).join(', ')} ms`,
-    );
-    console.log(
-      `median ${median.toFixed(0)} ms, slowest ${times[times.length - 1].toFixed(0)} ms, target median < ${RELOAD_TARGET_MS} ms`,
-    );
-    const reloadOk = median < RELOAD_TARGET_MS;
-    console.log(reloadOk ? 'PASS offline reload' : 'FAIL offline reload');
+    const sizeOk = await checkSize(page, `/deck/${ternId}`);
+    const reloadOk = await checkOfflineReload(page, context);
     failed = !sizeOk || !reloadOk;
     await context.close();
   } finally {

@@ -1,11 +1,14 @@
 import 'reflect-metadata';
 import path from 'node:path';
+import type { Server } from 'node:http';
 import { fileURLToPath } from 'node:url';
+import type { DataSource } from 'typeorm';
 import { createApp } from './app.js';
 import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
 import { startWalCheckpointer } from './lib/wal-checkpointer.js';
-import { createLogger } from './lib/logger.js';
+import { createLogger, type Logger } from './lib/logger.js';
+import type { Mailer } from './lib/mailer.js';
 import { prepareData } from './prepare-data.js';
 import { systemClock } from './lib/clock.js';
 import { startMail } from './features/mail/start-mail.js';
@@ -43,29 +46,40 @@ async function main() {
     mailer: mail.mailer,
     mailbox: mail.mailbox,
   });
-  const reminderMinutes = Number(process.env.RINGSEAT_REMINDER_MINUTES);
-  const reminders = new ReminderJob({
-    dataSource,
-    logger,
-    clock: systemClock,
-    outbox: new Outbox(mail.mailer, logger),
-    serviceDue: new ServiceDueService(dataSource, new RunSummaries(dataSource), systemClock),
-    intervalMs: reminderMinutes > 0 ? reminderMinutes * 60_000 : DEFAULT_REMINDER_INTERVAL_MS,
-  });
+  const reminders = reminderJob(dataSource, logger, mail.mailer);
   reminders.start();
   const server = app.listen(config.port, config.host, () => {
     logger.info(
       `Ringseat is serving on http://localhost:${config.port} (database ${config.databasePath})`,
     );
   });
+  closeOnSignal(server, logger, [
+    () => reminders.stop(),
+    () => mail.close(),
+    () => checkpointer.stop(),
+    () => dataSource.destroy(),
+  ]);
+}
 
+/** The first-service reminders, every RINGSEAT_REMINDER_MINUTES when set, else once an hour. */
+function reminderJob(dataSource: DataSource, logger: Logger, mailer: Mailer | null): ReminderJob {
+  const reminderMinutes = Number(process.env.RINGSEAT_REMINDER_MINUTES);
+  return new ReminderJob({
+    dataSource,
+    logger,
+    clock: systemClock,
+    outbox: new Outbox(mailer, logger),
+    serviceDue: new ServiceDueService(dataSource, new RunSummaries(dataSource), systemClock),
+    intervalMs: reminderMinutes > 0 ? reminderMinutes * 60_000 : DEFAULT_REMINDER_INTERVAL_MS,
+  });
+}
+
+/** On SIGINT or SIGTERM: stop taking requests, then close each part in turn (5 s at most). */
+function closeOnSignal(server: Server, logger: Logger, closers: Array<() => Promise<unknown>>) {
   const shutdown = (signal: string) => {
     logger.info(`${signal}: closing`);
     server.close(async () => {
-      await reminders.stop();
-      await mail.close();
-      await checkpointer.stop();
-      await dataSource.destroy();
+      for (const close of closers) await close();
       process.exit(0);
     });
     setTimeout(() => process.exit(0), 5000).unref();

@@ -43,6 +43,17 @@ interface Crew {
   skippers: User[];
 }
 
+/** One engine's share of a plan: its program with bands for this engine, and what its device logged. */
+interface EngineRun {
+  plan: DemoRun;
+  engine: Engine;
+  program: Program;
+  bands: Record<string, RpmBand>;
+  phases: ResolvedPhase[];
+  crew: Crew;
+  simulated: SimulatedEvent[];
+}
+
 /** Demo break-in runs, one in each state, with outings simulated through their programs. */
 export async function addDemoRuns(manager: EntityManager, refs: Refs): Promise<void> {
   const programs = await addDemoPrograms(manager, refs.workshopId);
@@ -85,7 +96,7 @@ async function addDemoRun(
       index === 0
         ? firstEngineEvents(plan, engine, phases)
         : twinOf(simulated, engine.id, phases, plan.randomStart + index);
-    const input = { plan, engine, program, bands, phases, crew, simulated };
+    const input: EngineRun = { plan, engine, program, bands, phases, crew, simulated };
     stored.push(...(await recordEngineRun(manager, world, input)));
   }
   return stored;
@@ -139,15 +150,7 @@ function alertsOf(plan: DemoRun, engineId: string): SimulatedEvent[] {
 async function recordEngineRun(
   manager: EntityManager,
   world: DemoWorld,
-  input: {
-    plan: DemoRun;
-    engine: Engine;
-    program: Program;
-    bands: Record<string, RpmBand>;
-    phases: ResolvedPhase[];
-    crew: Crew;
-    simulated: SimulatedEvent[];
-  },
+  input: EngineRun,
 ): Promise<StoredEvent[]> {
   const { plan, engine, crew, simulated } = input;
   const { technician, workshop } = world;

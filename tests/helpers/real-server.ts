@@ -1,8 +1,9 @@
-import { spawn } from 'node:child_process';
+import { spawn, type ChildProcess, type ChildProcessByStdio } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import type { Readable } from 'node:stream';
 
 export type RealServer = {
   baseURL: string;
@@ -35,44 +36,19 @@ export async function startRealServer(
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
   let output = '';
-  const child = spawn(
-    process.execPath,
-    nodeArgs.length === 0
-      ? [path.join('node_modules', 'tsx', 'dist', 'cli.mjs'), 'server/index.ts']
-      : [...nodeArgs, '--import', 'tsx', 'server/index.ts'],
-    {
-      env: {
-        ...process.env,
-        PORT: String(port),
-        HOST: '127.0.0.1',
-        RINGSEAT_DB: path.join(dir, 'ringseat.sqlite'),
-        RINGSEAT_DATA_DIR: dir,
-        LOG_LEVEL: 'warn',
-        NODE_ENV: 'test',
-        ...env,
-      },
-      stdio: ['ignore', 'pipe', 'pipe'],
-    },
-  );
+  const child = spawnServer(nodeArgs, {
+    PORT: String(port),
+    HOST: '127.0.0.1',
+    RINGSEAT_DB: path.join(dir, 'ringseat.sqlite'),
+    RINGSEAT_DATA_DIR: dir,
+    LOG_LEVEL: 'warn',
+    NODE_ENV: 'test',
+    ...env,
+  });
   child.stdout.on('data', (chunk) => (output += chunk));
   child.stderr.on('data', (chunk) => (output += chunk));
   const exited = new Promise<void>((resolve) => child.once('exit', () => resolve()));
-
-  const deadline = Date.now() + 60_000;
-  for (;;) {
-    if (child.exitCode !== null)
-      throw new Error(`server exited with ${child.exitCode}:\n${output}`);
-    try {
-      if ((await fetch(`${baseURL}/api/health`)).ok) break;
-    } catch {
-      // not listening yet
-    }
-    if (Date.now() > deadline) {
-      child.kill('SIGKILL');
-      throw new Error(`server did not answer /api/health within 60 s:\n${output}`);
-    }
-    await new Promise((r) => setTimeout(r, 200));
-  }
+  await waitUntilHealthy(child, baseURL, () => output);
 
   return {
     baseURL,
@@ -84,4 +60,37 @@ export async function startRealServer(
       fs.rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+/** `tsx server/index.ts` as npm start runs it, or node with tsx's loader when given node flags. */
+function spawnServer(
+  nodeArgs: string[],
+  env: Record<string, string>,
+): ChildProcessByStdio<null, Readable, Readable> {
+  return spawn(
+    process.execPath,
+    nodeArgs.length === 0
+      ? [path.join('node_modules', 'tsx', 'dist', 'cli.mjs'), 'server/index.ts']
+      : [...nodeArgs, '--import', 'tsx', 'server/index.ts'],
+    { env: { ...process.env, ...env }, stdio: ['ignore', 'pipe', 'pipe'] },
+  );
+}
+
+/** Polls /api/health until it answers; fails with the server's output if it exits or takes over 60 s. */
+async function waitUntilHealthy(child: ChildProcess, baseURL: string, output: () => string) {
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    if (child.exitCode !== null)
+      throw new Error(`server exited with ${child.exitCode}:\n${output()}`);
+    try {
+      if ((await fetch(`${baseURL}/api/health`)).ok) return;
+    } catch {
+      // not listening yet
+    }
+    if (Date.now() > deadline) {
+      child.kill('SIGKILL');
+      throw new Error(`server did not answer /api/health within 60 s:\n${output()}`);
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
 }

@@ -51,13 +51,7 @@ export class AttachmentsService {
       : null;
     if (repeat) return { attachment: await this.view(repeat), created: false };
     if (!file) throw new ValidationError([{ field: 'file', message: 'Choose a file to attach.' }]);
-    const count = await manager
-      .getRepository(Attachment)
-      .count({ where: { recordType: fields.recordType, recordId: fields.recordId } });
-    if (count >= MAX_ATTACHMENTS_PER_RECORD) {
-      const message = `This ${fields.recordType} already has ${MAX_ATTACHMENTS_PER_RECORD} files, the most it can hold. Remove one first.`;
-      throw new ConflictError(message, [{ field: 'file', message }]);
-    }
+    await this.refuseWhenFull(fields);
     const mimeType = await sniffAcceptedType(file);
     const id = fields.id ?? randomUUID();
     const row = Object.assign(new Attachment(), {
@@ -83,6 +77,16 @@ export class AttachmentsService {
       attachment: await this.view(await manager.getRepository(Attachment).findOneByOrFail({ id })),
       created: true,
     };
+  }
+
+  private async refuseWhenFull(fields: AttachmentUploadFields) {
+    const count = await this.dataSource
+      .getRepository(Attachment)
+      .count({ where: { recordType: fields.recordType, recordId: fields.recordId } });
+    if (count >= MAX_ATTACHMENTS_PER_RECORD) {
+      const message = `This ${fields.recordType} already has ${MAX_ATTACHMENTS_PER_RECORD} files, the most it can hold. Remove one first.`;
+      throw new ConflictError(message, [{ field: 'file', message }]);
+    }
   }
 
   private async repeated(

@@ -5,7 +5,7 @@ import type { Clock } from '../../lib/clock.js';
 import type { Logger } from '../../lib/logger.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { serviceReminderMail } from '../mail/mail-templates.js';
-import { outcomeWords, type Outbox } from '../mail/outbox.js';
+import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
 import { skippersOf } from '../runs/run-context.js';
 import { Workshop } from '../workshops/workshop.entity.js';
 import { ServiceReminder } from './service-reminder.entity.js';
@@ -84,22 +84,9 @@ export class ReminderJob {
   }
 
   private async remind(workshop: Workshop, due: EngineServiceDue): Promise<boolean> {
-    const status = due.firstService!;
     const skippers = await skippersOf(this.deps.dataSource, due.engine.vesselId);
     const to = [...new Set([...skippers.map((s) => s.email), workshop.email].filter(Boolean))];
-    const outcome = await this.deps.outbox.send(
-      serviceReminderMail({
-        to,
-        replyTo: workshop.email || undefined,
-        workshopName: workshop.name,
-        vesselName: due.engine.vesselName,
-        engineTitle: `${due.engine.position} engine (${due.engine.maker} ${due.engine.model})`,
-        serialNumber: due.engine.serialNumber,
-        overdue: status.state === 'overdue',
-        dueWords: firstServiceWords(status),
-        hoursWords: `${status.hoursNow.toFixed(1)} h (${status.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
-      }),
-    );
+    const outcome = await this.deps.outbox.send(reminderMail(workshop, due, to));
     if (!outcome.sent) {
       this.deps.logger.warn(
         { engineId: due.engine.id, problem: outcome.problem },
@@ -107,6 +94,13 @@ export class ReminderJob {
       );
       return false;
     }
+    await this.record(workshop, due, outcome);
+    return true;
+  }
+
+  /** Keeps the reminder as sent, with the trail entry, so it is never sent again. */
+  private async record(workshop: Workshop, due: EngineServiceDue, outcome: MailOutcome) {
+    const status = due.firstService!;
     const now = this.deps.clock.now();
     await this.deps.dataSource.transaction(async (manager) => {
       await manager.getRepository(ServiceReminder).insert({
@@ -130,6 +124,20 @@ export class ReminderJob {
         detail: outcomeWords('First-service reminder', outcome),
       });
     });
-    return true;
   }
+}
+
+function reminderMail(workshop: Workshop, due: EngineServiceDue, to: string[]) {
+  const status = due.firstService!;
+  return serviceReminderMail({
+    to,
+    replyTo: workshop.email || undefined,
+    workshopName: workshop.name,
+    vesselName: due.engine.vesselName,
+    engineTitle: `${due.engine.position} engine (${due.engine.maker} ${due.engine.model})`,
+    serialNumber: due.engine.serialNumber,
+    overdue: status.state === 'overdue',
+    dueWords: firstServiceWords(status),
+    hoursWords: `${status.hoursNow.toFixed(1)} h (${status.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
+  });
 }

@@ -123,6 +123,17 @@ function serviceOf(row: BoardSqlRow, today: string): FirstServiceView | null {
   );
 }
 
+/** What the board points out on a run, in the order the flags are shown. */
+function flagsOf(row: BoardSqlRow, firstService: FirstServiceView | null): BoardFlagCode[] {
+  const flags: BoardFlagCode[] = [];
+  if ((row.breachCount ?? 0) > 0) flags.push('breach');
+  if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS)
+    flags.push('clock-skew');
+  if (firstService?.state === 'overdue') flags.push('service-overdue');
+  if (firstService?.state === 'due-soon') flags.push('service-due-soon');
+  return flags;
+}
+
 function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: RankedRun } {
   const submitted = sqlDateMs(row.submittedAt);
   const signedOff = sqlDateMs(row.signedOffAt);
@@ -130,12 +141,7 @@ function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: Rank
     Math.max(row.lastEventAt ?? 0, submitted ?? 0, signedOff ?? 0, sqlDateMs(row.createdAt) ?? 0) ||
     null;
   const firstService = serviceOf(row, today);
-  const flags: BoardFlagCode[] = [];
-  if ((row.breachCount ?? 0) > 0) flags.push('breach');
-  if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS)
-    flags.push('clock-skew');
-  if (firstService?.state === 'overdue') flags.push('service-overdue');
-  if (firstService?.state === 'due-soon') flags.push('service-due-soon');
+  const flags = flagsOf(row, firstService);
   const run = {
     id: row.id,
     state: row.state,

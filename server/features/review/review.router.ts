@@ -1,32 +1,14 @@
 import { Router } from 'express';
-import {
-  BoardQuerySchema,
-  ReadingsQuerySchema,
-  type BoardQuery,
-  type ReadingsQuery,
-} from '../../../shared/review/review.schema.js';
+import { ReadingsQuerySchema, type ReadingsQuery } from '../../../shared/review/review.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import { RunIdParamsSchema } from '../runs/run-params.js';
-import type { BoardService } from './board.service.js';
 import type { ReadingsService } from './readings.service.js';
 import type { ReviewService } from './review.service.js';
 
-export function reviewRouter(
-  board: BoardService,
-  review: ReviewService,
-  readings: ReadingsService,
-): Router {
+/** One run under review: the worked-out figures, its readings page by page, and all of them as CSV. */
+export function reviewRouter(review: ReviewService, readings: ReadingsService): Router {
   const router = Router();
-
-  router.get(
-    '/board',
-    requireRole('technician', 'manager'),
-    validate({ query: BoardQuerySchema }),
-    async (_req, res) => {
-      res.json(await board.board(currentUser(res), res.locals.query as BoardQuery));
-    },
-  );
 
   router.get(
     '/runs/:id/review',

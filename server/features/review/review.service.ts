@@ -29,7 +29,6 @@ export class ReviewService {
     const certificate = await this.dataSource
       .getRepository(Certificate)
       .findOne({ where: { runId } });
-    const { charts } = ctx;
     const staff = user.role !== 'skipper';
     return {
       run: runPart(ctx),
@@ -47,46 +46,12 @@ export class ReviewService {
         sessionMs: ctx.account.sessionMs,
         unassignedMs: ctx.account.unassignedMs,
       },
-      phases: ctx.phases.map((phase, i) => {
-        const a = ctx.account.phases[i];
-        const { firstAt, lastAt } = charts[i];
-        return {
-          id: phase.id,
-          name: phase.name,
-          performedBy: phase.performedBy,
-          throttleCeiling: phase.throttleCeiling,
-          band: phase.band,
-          rules: phase.rules,
-          requiredMs: a.requiredMs,
-          timeInBandMs: a.timeInBandMs,
-          timeOverMs: a.timeOverMs,
-          timeUnderMs: a.timeUnderMs,
-          longestFullThrottleMs: a.longestFullThrottleMs,
-          progressShare: a.progressShare,
-          verdict: a.verdict,
-          reasons: a.reasons,
-          firstAt,
-          lastAt,
-        };
-      }),
-      charts,
+      phases: phaseViews(ctx),
+      charts: ctx.charts,
       events: ctx.figures.events,
       eventsTotal: ctx.figures.eventsTotal,
       readingCount: ctx.figures.readingCount,
-      reviews: reviews.map((r) => ({
-        decision: r.decision,
-        comments: r.comments,
-        verdict: r.verdict,
-        reviewerName: r.reviewerName,
-        decidedAt: r.decidedAt.toISOString(),
-      })),
-      certificate: certificate
-        ? {
-            number: certificate.number,
-            issuedAt: certificate.issuedAt.toISOString(),
-            downloadUrl: `/api/runs/${runId}/certificate`,
-          }
-        : null,
+      ...decisions(runId, reviews, certificate),
       firstService: ctx.firstService,
       trail: staff ? await runTrail(this.dataSource, ctx.run) : [],
       canDecide: staff && ctx.run.state === 'submitted',
@@ -123,5 +88,55 @@ function engineView({ engine }: RunContext) {
     ratedRpmMax: engine.ratedRpmMax,
     hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
     commissionedOn: engine.commissionedOn,
+  };
+}
+
+/** Each phase with its band and rules, the times the accounting gave it, and when it was run. */
+function phaseViews(ctx: RunContext): RunReviewView['phases'] {
+  return ctx.phases.map((phase, i) => {
+    const a = ctx.account.phases[i];
+    const { firstAt, lastAt } = ctx.charts[i];
+    return {
+      id: phase.id,
+      name: phase.name,
+      performedBy: phase.performedBy,
+      throttleCeiling: phase.throttleCeiling,
+      band: phase.band,
+      rules: phase.rules,
+      requiredMs: a.requiredMs,
+      timeInBandMs: a.timeInBandMs,
+      timeOverMs: a.timeOverMs,
+      timeUnderMs: a.timeUnderMs,
+      longestFullThrottleMs: a.longestFullThrottleMs,
+      progressShare: a.progressShare,
+      verdict: a.verdict,
+      reasons: a.reasons,
+      firstAt,
+      lastAt,
+    };
+  });
+}
+
+/** The workshop's decisions so far, oldest first, and the certificate if one was issued. */
+function decisions(
+  runId: string,
+  reviews: RunReview[],
+  certificate: Certificate | null,
+): Pick<RunReviewView, 'reviews' | 'certificate'> {
+  return {
+    reviews: reviews.map((r) => ({
+      decision: r.decision,
+      comments: r.comments,
+      verdict: r.verdict,
+      reviewerName: r.reviewerName,
+      decidedAt: r.decidedAt.toISOString(),
+    })),
+    certificate: certificate
+      ? {
+          number: certificate.number,
+          issuedAt: certificate.issuedAt.toISOString(),
+          downloadUrl: `/api/runs/${runId}/certificate`,
+        }
+      : null,
   };
 }

@@ -3,9 +3,17 @@ import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import type { Program } from '../../../shared/programs/program.schema.js';
 import { frozenPhases } from '../../../shared/review/frozen-phases.js';
 import { accountRun } from '../../../shared/runs/run-accounting.js';
+import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import { latestHourMeters, loadRunEvents } from '../runs/run-events.js';
 
 const BATCH = 200;
+
+const UPSERT_SUMMARY_SQL = `INSERT INTO "run_summary" ("runId", "workshopId", "eventSeq", "programName", "serviceHours", "serviceMonths", "verdict", "progress", "breachCount", "openPhaseName", "sessionMs", "hourMeter", "hourMeterAt")
+         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
+         ON CONFLICT ("runId") DO UPDATE SET "eventSeq" = excluded."eventSeq", "programName" = excluded."programName", "serviceHours" = excluded."serviceHours",
+           "serviceMonths" = excluded."serviceMonths", "verdict" = excluded."verdict", "progress" = excluded."progress",
+           "breachCount" = excluded."breachCount", "openPhaseName" = excluded."openPhaseName", "sessionMs" = excluded."sessionMs",
+           "hourMeter" = excluded."hourMeter", "hourMeterAt" = excluded."hourMeterAt"`;
 
 type RunRow = { id: string; workshopId: string; engineId: string; program: string; bands: string };
 
@@ -83,38 +91,39 @@ export class RunSummaries {
     const events = await loadRunEvents(manager, runIds);
     const meters = await latestHourMeters(manager, runIds);
     for (const run of runs) {
-      const program = JSON.parse(run.program) as Program;
-      const phases = frozenPhases(program, JSON.parse(run.bands) as Record<string, RpmBand>);
       const { events: list, maxSeq } = events.get(run.id)!;
-      const account = accountRun(list, phases, { engineId: run.engineId });
-      const open = account.phases.findIndex((p) => p.progressShare < 1);
-      const meter = meters.get(run.id) ?? null;
-      await manager.query(
-        `INSERT INTO "run_summary" ("runId", "workshopId", "eventSeq", "programName", "serviceHours", "serviceMonths", "verdict", "progress", "breachCount", "openPhaseName", "sessionMs", "hourMeter", "hourMeterAt")
-         VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)
-         ON CONFLICT ("runId") DO UPDATE SET "eventSeq" = excluded."eventSeq", "programName" = excluded."programName", "serviceHours" = excluded."serviceHours",
-           "serviceMonths" = excluded."serviceMonths", "verdict" = excluded."verdict", "progress" = excluded."progress",
-           "breachCount" = excluded."breachCount", "openPhaseName" = excluded."openPhaseName", "sessionMs" = excluded."sessionMs",
-           "hourMeter" = excluded."hourMeter", "hourMeterAt" = excluded."hourMeterAt"`,
-        [
-          run.id,
-          run.workshopId,
-          maxSeq,
-          program.name,
-          program.firstService.hours ?? null,
-          program.firstService.months ?? null,
-          account.verdict,
-          account.overallProgress,
-          account.phases.reduce(
-            (n, p) => n + p.reasons.filter((r) => r.code !== 'short-of-time').length,
-            0,
-          ),
-          open < 0 ? null : program.phases[open].name,
-          account.sessionMs,
-          meter?.hourMeter ?? null,
-          meter?.at ?? null,
-        ],
-      );
+      await manager.query(UPSERT_SUMMARY_SQL, summaryRow(run, list, maxSeq, meters.get(run.id)));
     }
   }
+}
+
+/** A run's summary row: its accounting result and first-service figures, with the change number they are from. */
+function summaryRow(
+  run: RunRow,
+  list: RunEvent[],
+  maxSeq: number,
+  meter: { hourMeter: number; at: number } | undefined,
+): unknown[] {
+  const program = JSON.parse(run.program) as Program;
+  const phases = frozenPhases(program, JSON.parse(run.bands) as Record<string, RpmBand>);
+  const account = accountRun(list, phases, { engineId: run.engineId });
+  const open = account.phases.findIndex((p) => p.progressShare < 1);
+  return [
+    run.id,
+    run.workshopId,
+    maxSeq,
+    program.name,
+    program.firstService.hours ?? null,
+    program.firstService.months ?? null,
+    account.verdict,
+    account.overallProgress,
+    account.phases.reduce(
+      (n, p) => n + p.reasons.filter((r) => r.code !== 'short-of-time').length,
+      0,
+    ),
+    open < 0 ? null : program.phases[open].name,
+    account.sessionMs,
+    meter?.hourMeter ?? null,
+    meter?.at ?? null,
+  ];
 }

@@ -19,20 +19,35 @@ export async function runTrail(dataSource: DataSource, run: Run): Promise<AuditV
     .getRepository(RunPatchRow)
     .find({ where: { runId: run.id }, order: { receivedAt: 'ASC' } });
   const submissions = patches.filter((p) => p.body.submit === true);
-  const userIds = [...new Set([run.assignedById, ...submissions.map((p) => p.authorId)])];
-  const names = new Map(
-    (
-      await dataSource
-        .getRepository(User)
-        .find({ where: { id: In(userIds) }, select: { id: true, name: true } })
-    ).map((u) => [u.id, u.name]),
-  );
+  const names = await userNames(dataSource, [
+    run.assignedById,
+    ...submissions.map((p) => p.authorId),
+  ]);
   const views: AuditView[] = recorded.map((e) => ({
     action: e.action,
     at: e.at.toISOString(),
     actorName: e.actorName,
     detail: e.detail,
   }));
+  views.push(...keptElsewhere(run, recorded, submissions, names));
+  return views.sort(inTrailOrder);
+}
+
+async function userNames(dataSource: DataSource, ids: string[]): Promise<Map<string, string>> {
+  const users = await dataSource
+    .getRepository(User)
+    .find({ where: { id: In([...new Set(ids)]) }, select: { id: true, name: true } });
+  return new Map(users.map((u) => [u.id, u.name]));
+}
+
+/** The assignment (unless it was recorded) and each submission, as trail entries. */
+function keptElsewhere(
+  run: Run,
+  recorded: AuditEntry[],
+  submissions: RunPatchRow[],
+  names: Map<string, string>,
+): AuditView[] {
+  const views: AuditView[] = [];
   if (!recorded.some((e) => e.action === 'run-assigned')) {
     views.push({
       action: 'run-assigned',
@@ -49,12 +64,13 @@ export async function runTrail(dataSource: DataSource, run: Run): Promise<AuditV
       detail: '',
     });
   }
-  return views.sort(
-    (a, b) =>
-      a.at.localeCompare(b.at) ||
-      ACTION_ORDER.indexOf(a.action as AuditAction) - ACTION_ORDER.indexOf(b.action as AuditAction),
-  );
+  return views;
 }
+
+/** Oldest first; at the same instant, in the order one action leads to the next. */
+const inTrailOrder = (a: AuditView, b: AuditView) =>
+  a.at.localeCompare(b.at) ||
+  ACTION_ORDER.indexOf(a.action as AuditAction) - ACTION_ORDER.indexOf(b.action as AuditAction);
 
 /** Order of actions recorded at the same instant: the way one leads to the next. */
 const ACTION_ORDER: AuditAction[] = [

@@ -20,30 +20,7 @@ export class RunsService {
   /** Freezes a copy of the program, with its bands resolved for this engine, into a new planned run. */
   async assign(user: SessionUser, input: AssignProgramInput): Promise<Run> {
     return this.dataSource.transaction(async (manager) => {
-      const engine = await manager
-        .getRepository(Engine)
-        .findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
-      if (!engine || engine.archivedAt)
-        throw new ValidationError([
-          { field: 'engineId', message: 'This engine is not in your workshop.' },
-        ]);
-      const program = await manager
-        .getRepository(Program)
-        .findOne({ where: { id: input.programId, workshopId: user.workshopId } });
-      if (!program)
-        throw new ValidationError([
-          { field: 'programId', message: 'This program is not in your workshop.' },
-        ]);
-      if (program.retiredAt)
-        throw new ValidationError([
-          { field: 'programId', message: `"${program.name}" is retired and cannot be assigned.` },
-        ]);
-      const check = checkProgramForEngine(program.definition, engine);
-      if (!check.ok)
-        throw new ValidationError(
-          check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })),
-          'The program does not fit this engine.',
-        );
+      const { engine, program } = await findAssignable(manager, user, input);
       await this.refuseSecondOpenRun(manager, engine.id);
       const bands: Record<string, RpmBand> = {};
       for (const phase of program.definition.phases)
@@ -112,6 +89,39 @@ export class RunsService {
       .findOneOrFail({ where: { id: run.vesselId } });
     return toRunDetail(run, vessel.name);
   }
+}
+
+/** The engine and program named, each in the user's workshop, the program current and fitting the engine. */
+async function findAssignable(
+  manager: EntityManager,
+  user: SessionUser,
+  input: AssignProgramInput,
+): Promise<{ engine: Engine; program: Program }> {
+  const engine = await manager
+    .getRepository(Engine)
+    .findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
+  if (!engine || engine.archivedAt)
+    throw new ValidationError([
+      { field: 'engineId', message: 'This engine is not in your workshop.' },
+    ]);
+  const program = await manager
+    .getRepository(Program)
+    .findOne({ where: { id: input.programId, workshopId: user.workshopId } });
+  if (!program)
+    throw new ValidationError([
+      { field: 'programId', message: 'This program is not in your workshop.' },
+    ]);
+  if (program.retiredAt)
+    throw new ValidationError([
+      { field: 'programId', message: `"${program.name}" is retired and cannot be assigned.` },
+    ]);
+  const check = checkProgramForEngine(program.definition, engine);
+  if (!check.ok)
+    throw new ValidationError(
+      check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })),
+      'The program does not fit this engine.',
+    );
+  return { engine, program };
 }
 
 /** Everything a device needs to run and judge the break-in offline: the view plus the frozen program and bands. */

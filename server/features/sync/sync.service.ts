@@ -2,7 +2,6 @@ import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import {
   CLOCK_SKEW_FLAG_MS,
-  PushItemSchema,
   type PushBatch,
   type PushItem,
   type PullResponse,
@@ -11,7 +10,6 @@ import {
 import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { NotFoundError } from '../../lib/errors.js';
-import { fieldErrors } from '../../middleware/validate.js';
 import { visibleRunsWhere } from '../runs/run-access.js';
 import { visibleVesselIds } from '../vessels/vessel-access.js';
 import { Run } from '../runs/run.entity.js';
@@ -19,6 +17,7 @@ import { toRunDetail } from '../runs/runs.service.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import type { VesselsService } from '../vessels/vessels.service.js';
 import { applyItems, type Applied } from './apply-items.js';
+import { checkItems } from './check-items.js';
 import { latestChangeSeq, reserveChangeSeq } from '../../lib/change-seq.js';
 
 /**
@@ -27,29 +26,6 @@ import { latestChangeSeq, reserveChangeSeq } from '../../lib/change-seq.js';
  * workshop reviews everything else online.
  */
 const STAFF_DEVICE_STATES = ['planned', 'under-way', 'returned'] as const;
-
-type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
-
-/** Checks each item on its own: an invalid item is rejected with its reason, the others go on. */
-function checkItems(items: unknown[]): Checked[] {
-  return items.map((raw, index) => {
-    const parsed = PushItemSchema.safeParse(raw);
-    if (parsed.success) return { index, item: parsed.data };
-    const [first] = fieldErrors(parsed.error);
-    const id =
-      typeof raw === 'object' && raw !== null
-        ? String(
-            (raw as { id?: unknown; event?: { id?: unknown } }).event?.id ??
-              (raw as { id?: unknown }).id ??
-              `#${index}`,
-          )
-        : `#${index}`;
-    return {
-      index,
-      rejected: { id, status: 'rejected', reason: first.message, field: first.field },
-    };
-  });
-}
 
 export class SyncService {
   constructor(
@@ -83,19 +59,8 @@ export class SyncService {
     const changedIds = visible
       .filter((r) => cursor === 0 || (r.seq > cursor && r.seq <= nextCursor))
       .map((r) => r.id);
-    const runs =
-      changedIds.length === 0
-        ? []
-        : await this.dataSource
-            .getRepository(Run)
-            .find({ where: { id: In(changedIds) }, relations: { engine: true } });
-    const names = new Map(
-      (
-        await this.dataSource
-          .getRepository(Vessel)
-          .find({ where: { workshopId: user.workshopId }, select: { id: true, name: true } })
-      ).map((v) => [v.id, v.name]),
-    );
+    const runs = await this.runsWithEngines(changedIds);
+    const names = await this.vesselNames(user.workshopId);
     return {
       cursor: nextCursor,
       more,
@@ -108,6 +73,20 @@ export class SyncService {
       })),
       vessels: await this.vessels.listFor(user),
     };
+  }
+
+  private async runsWithEngines(ids: string[]): Promise<Run[]> {
+    if (ids.length === 0) return [];
+    return this.dataSource
+      .getRepository(Run)
+      .find({ where: { id: In(ids) }, relations: { engine: true } });
+  }
+
+  private async vesselNames(workshopId: string): Promise<Map<string, string>> {
+    const vessels = await this.dataSource
+      .getRepository(Vessel)
+      .find({ where: { workshopId }, select: { id: true, name: true } });
+    return new Map(vessels.map((v) => [v.id, v.name]));
   }
 
   private async changedEvents(user: SessionUser, runIds: string[], cursor: number, limit: number) {

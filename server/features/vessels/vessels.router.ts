@@ -1,14 +1,12 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import {
-  SkipperLinkParamsSchema,
   VesselInputSchema,
   VesselListQuerySchema,
   type VesselListQuery,
 } from '../../../shared/vessels/vessel.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
-import type { SkipperLinksService } from './skipper-links.service.js';
 import type { VesselsService } from './vessels.service.js';
 
 const IdParamsSchema = z.object({
@@ -16,7 +14,7 @@ const IdParamsSchema = z.object({
 });
 const staff = requireRole('technician', 'manager');
 
-export function vesselsRouter(service: VesselsService, links: SkipperLinksService): Router {
+export function vesselsRouter(service: VesselsService): Router {
   const router = Router();
 
   // Skippers and the on-deck screen read this list too: its shape only ever grows.
@@ -75,42 +73,5 @@ export function vesselsRouter(service: VesselsService, links: SkipperLinksServic
     },
   );
 
-  mountSkipperLinks(router, links);
   return router;
-}
-
-function mountSkipperLinks(router: Router, links: SkipperLinksService) {
-  router.get('/skippers', staff, async (_req, res) => {
-    res.json({ skippers: await links.listSkippers(currentUser(res)) });
-  });
-
-  router.put(
-    '/vessels/:id/skippers/:userId',
-    staff,
-    validate({ params: SkipperLinkParamsSchema }),
-    async (req, res) => {
-      res.json({
-        vessel: await links.link(
-          currentUser(res),
-          String(req.params.id),
-          String(req.params.userId),
-        ),
-      });
-    },
-  );
-
-  router.delete(
-    '/vessels/:id/skippers/:userId',
-    staff,
-    validate({ params: SkipperLinkParamsSchema }),
-    async (req, res) => {
-      res.json({
-        vessel: await links.unlink(
-          currentUser(res),
-          String(req.params.id),
-          String(req.params.userId),
-        ),
-      });
-    },
-  );
 }

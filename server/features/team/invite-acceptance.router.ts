@@ -1,0 +1,45 @@
+import { Router, type RequestHandler } from 'express';
+import { z } from 'zod';
+import { AcceptInviteInputSchema } from '../../../shared/auth/auth.schema.js';
+import { validate } from '../../middleware/validate.js';
+import type { AppLucia } from '../auth/lucia.js';
+import { startSession } from '../auth/sign-in-http.js';
+import type { TeamService } from './team.service.js';
+
+const TokenParamsSchema = z.object({
+  token: z.string().min(20, { error: 'The invite link is incomplete.' }).max(200),
+});
+
+/** The invitee's side, open to anyone holding the link: see whom it is for, then accept it (which signs them in). */
+export function inviteAcceptanceRouter(deps: {
+  service: TeamService;
+  lucia: AppLucia;
+  /** The sign-in limiter: accepting an invite checks a secret too. */
+  limiter: RequestHandler;
+}): Router {
+  const { service, lucia, limiter } = deps;
+  const router = Router();
+
+  // Public: the invite page shows whom the link is for before the password is set.
+  router.get('/invites/:token', validate({ params: TokenParamsSchema }), async (req, res) => {
+    const invite = await service.findOpenInvite(String(req.params.token));
+    res.json({
+      email: invite.email,
+      role: invite.role,
+      workshopName: invite.workshop?.name ?? '',
+      expiresAt: invite.expiresAt.toISOString(),
+    });
+  });
+
+  router.post(
+    '/auth/accept-invite',
+    limiter,
+    validate({ body: AcceptInviteInputSchema }),
+    async (req, res) => {
+      const session = await service.acceptInvite(req.body);
+      await startSession(lucia, res, session.id, 201);
+    },
+  );
+
+  return router;
+}
