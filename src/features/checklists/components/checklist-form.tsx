@@ -1,5 +1,5 @@
-import { useMemo, useState } from 'react';
-import { useForm, useWatch, type Path } from 'react-hook-form';
+import { useMemo } from 'react';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
   ChecklistInputSchema,
@@ -9,42 +9,14 @@ import {
 import type { ChecklistView } from '../../../../shared/checklists/checklist-view';
 import { evaluateChecklist } from '../../../../shared/checklists/evaluate-checklist';
 import type { ChecklistEngine } from '../../../../shared/checklists/evaluation';
-import { signalSourceOf } from '../../../../shared/checklists/evaluate-tachometer';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { serverErrorMessages } from '../../../lib/form-errors';
 import { formatDate } from '../../../lib/format';
-import { useCompleteChecklist, useSaveChecklist } from '../api';
 import { liveEntries } from '../form-values';
+import { useChecklistActions, type ChecklistActions } from '../use-checklist-actions';
 import { CheckItems } from './check-items';
 import { ChecklistSummaryBar } from './checklist-summary';
-import {
-  ChargingFields,
-  FullThrottleFields,
-  IdleFields,
-  TachometerFields,
-} from './measured-fields';
-import { MeasuredItem } from './measured-item';
-
-const FIELD_PATHS = [
-  'tachometer.measuredHz',
-  'tachometer.referenceRpm',
-  'tachometer.tachReadingRpm',
-  'tachometer.note',
-  'charging.chemistry',
-  'charging.measuredV',
-  'charging.batteryTemperatureC',
-  'charging.atRpm',
-  'charging.note',
-  'idleInGear.idleRpm',
-  'idleInGear.specMinRpm',
-  'idleInGear.specMaxRpm',
-  'idleInGear.note',
-  'fullThrottle.rpm',
-  'fullThrottle.speedKn',
-  'fullThrottle.note',
-  'notes',
-] as const satisfies readonly Path<ChecklistFormInput>[];
+import { MeasuredItems } from './measured-fields';
 
 interface ChecklistFormProps {
   checklist: ChecklistView;
@@ -53,76 +25,85 @@ interface ChecklistFormProps {
   onChanged?: () => void;
 }
 
+/** What the last save or completion came to: the server's refusals, or a short notice. */
+function Outcome({ actions }: { actions: ChecklistActions }) {
+  return (
+    <>
+      {actions.refusals.length > 0 && (
+        <Alert title={actions.complete.isError ? 'Not completed yet' : 'Not saved'}>
+          <ul className="list-disc pl-5">
+            {actions.refusals.map((r) => (
+              <li key={r}>{r}</li>
+            ))}
+          </ul>
+        </Alert>
+      )}
+      {actions.notice && (
+        <p role="status" className="font-semibold">
+          {actions.notice}
+        </p>
+      )}
+    </>
+  );
+}
+
+function CompletedNote({ checklist }: { checklist: ChecklistView }) {
+  return (
+    <p className="rounded-md border-4 border-ink p-3 font-bold">
+      Completed by {checklist.completedBy?.name} on {formatDate(checklist.completedAt!)}. It is kept
+      as the record of the handover.
+    </p>
+  );
+}
+
+function ChecklistButtons({ actions }: { actions: ChecklistActions }) {
+  return (
+    <div className="flex flex-wrap gap-3">
+      <Button
+        type="submit"
+        variant="secondary"
+        pending={actions.save.isPending}
+        pendingLabel="Saving…"
+      >
+        Save for later
+      </Button>
+      <Button
+        onClick={actions.onComplete}
+        pending={actions.complete.isPending}
+        pendingLabel="Completing…"
+      >
+        Complete checklist
+      </Button>
+    </div>
+  );
+}
+
 /** The commissioning checklist: saved part-done as often as needed, completed once every item is done. */
 export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormProps) {
-  const save = useSaveChecklist(checklist.engineId, onChanged);
-  const complete = useCompleteChecklist(checklist.engineId, onChanged);
-  const [refusals, setRefusals] = useState<string[]>([]);
-  const [notice, setNotice] = useState<string | null>(null);
   const completed = Boolean(checklist.completedAt);
-  const { register, control, handleSubmit, setError, reset, formState } = useForm<
-    ChecklistFormInput,
-    unknown,
-    ChecklistInput
-  >({
+  const form = useForm<ChecklistFormInput, unknown, ChecklistInput>({
     resolver: zodResolver(ChecklistInputSchema),
     defaultValues: checklist.entries,
   });
-  const values = useWatch({ control }) as ChecklistFormInput;
+  const actions = useChecklistActions(checklist, form, onChanged);
+  const values = useWatch({ control: form.control }) as ChecklistFormInput;
   const evaluation = useMemo(
     () => (completed ? checklist.evaluation : evaluateChecklist(liveEntries(values), engine)),
     [completed, checklist.evaluation, values, engine],
   );
-  const byId = new Map(evaluation.items.map((item) => [item.id, item]));
-  const fields = { register, errors: formState.errors, disabled: completed };
-
-  const onError = (error: unknown) =>
-    setRefusals(serverErrorMessages(error, setError, FIELD_PATHS));
-  const send = (action: typeof save, done: string) =>
-    handleSubmit((input) => {
-      setRefusals([]);
-      setNotice(null);
-      action.mutate(input, {
-        onSuccess: ({ checklist: stored }) => {
-          reset(stored.entries);
-          setNotice(done);
-        },
-        onError,
-      });
-    });
-  const onSave = send(
-    save,
-    'Saved. The checklist can be finished later, on this or another device.',
-  );
-  const onComplete = send(complete, 'Checklist completed.');
+  const fields = { register: form.register, errors: form.formState.errors, disabled: completed };
 
   return (
     <form
       noValidate
-      onSubmit={onSave}
+      onSubmit={actions.onSave}
       className="flex flex-col gap-5"
       aria-label="Commissioning checklist"
     >
       <ChecklistSummaryBar summary={evaluation.summary} />
-      {completed && (
-        <p className="rounded-md border-4 border-ink p-3 font-bold">
-          Completed by {checklist.completedBy?.name} on {formatDate(checklist.completedAt!)}. It is
-          kept as the record of the handover.
-        </p>
-      )}
+      {completed && <CompletedNote checklist={checklist} />}
       <h2 className="text-xl font-bold">Measured at handover</h2>
-      <MeasuredItem id="tachometer" evaluation={byId.get('tachometer')!} {...fields}>
-        <TachometerFields {...fields} hasSignal={signalSourceOf(engine) !== null} />
-      </MeasuredItem>
-      <MeasuredItem id="charging" evaluation={byId.get('charging')!} {...fields}>
-        <ChargingFields {...fields} />
-      </MeasuredItem>
-      <MeasuredItem id="idleInGear" evaluation={byId.get('idleInGear')!} {...fields}>
-        <IdleFields {...fields} />
-      </MeasuredItem>
-      <MeasuredItem id="fullThrottle" evaluation={byId.get('fullThrottle')!} {...fields}>
-        <FullThrottleFields {...fields} />
-      </MeasuredItem>
+      <MeasuredItems fields={fields} evaluation={evaluation} engine={engine} />
       <h2 className="text-xl font-bold">Rigging and safety</h2>
       <CheckItems {...fields} evaluations={evaluation.items} />
       <label className="flex flex-col gap-1 font-semibold">
@@ -131,33 +112,11 @@ export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormPro
           rows={3}
           disabled={completed}
           className="rounded-md border-2 border-line bg-surface p-3 font-normal text-ink"
-          {...register('notes')}
+          {...form.register('notes')}
         />
       </label>
-      {refusals.length > 0 && (
-        <Alert title={complete.isError ? 'Not completed yet' : 'Not saved'}>
-          <ul className="list-disc pl-5">
-            {refusals.map((r) => (
-              <li key={r}>{r}</li>
-            ))}
-          </ul>
-        </Alert>
-      )}
-      {notice && (
-        <p role="status" className="font-semibold">
-          {notice}
-        </p>
-      )}
-      {!completed && (
-        <div className="flex flex-wrap gap-3">
-          <Button type="submit" variant="secondary" pending={save.isPending} pendingLabel="Saving…">
-            Save for later
-          </Button>
-          <Button onClick={onComplete} pending={complete.isPending} pendingLabel="Completing…">
-            Complete checklist
-          </Button>
-        </div>
-      )}
+      <Outcome actions={actions} />
+      {!completed && <ChecklistButtons actions={actions} />}
       {checklist.updatedBy && !completed && (
         <p className="text-sm text-muted">
           Last saved by {checklist.updatedBy.name}, {formatDate(checklist.updatedAt!)}.

@@ -1,8 +1,11 @@
+import type { ChecklistEvaluation } from '../../../../shared/checklists/evaluate-checklist';
+import { signalSourceOf } from '../../../../shared/checklists/evaluate-tachometer';
+import type { ChecklistEngine } from '../../../../shared/checklists/evaluation';
 import { CHEMISTRY_LIMITS, type BatteryChemistry } from '../../../../shared/charging/chemistry';
 import { Checkbox } from '../../../components/ui/checkbox';
 import { SelectField } from '../../../components/ui/field';
 import { toChoiceOrNull } from '../form-values';
-import { MeasureField, numberOptions, type FieldsProps } from './measured-item';
+import { MeasuredItem, MeasureField, numberOptions, type FieldsProps } from './measured-item';
 
 type ErrorsOf = Record<string, { message?: string } | undefined> | undefined;
 const errorsOf = (
@@ -131,6 +134,35 @@ export function FullThrottleFields({ register, errors }: FieldsProps) {
         error={e?.speedKn?.message}
         registration={register('fullThrottle.speedKn', numberOptions)}
       />
+    </>
+  );
+}
+
+/** The four items measured at handover, each with its verdict from the live evaluation. */
+export function MeasuredItems({
+  fields,
+  evaluation,
+  engine,
+}: {
+  fields: FieldsProps;
+  evaluation: ChecklistEvaluation;
+  engine: ChecklistEngine;
+}) {
+  const byId = new Map(evaluation.items.map((item) => [item.id, item]));
+  return (
+    <>
+      <MeasuredItem id="tachometer" evaluation={byId.get('tachometer')!} {...fields}>
+        <TachometerFields {...fields} hasSignal={signalSourceOf(engine) !== null} />
+      </MeasuredItem>
+      <MeasuredItem id="charging" evaluation={byId.get('charging')!} {...fields}>
+        <ChargingFields {...fields} />
+      </MeasuredItem>
+      <MeasuredItem id="idleInGear" evaluation={byId.get('idleInGear')!} {...fields}>
+        <IdleFields {...fields} />
+      </MeasuredItem>
+      <MeasuredItem id="fullThrottle" evaluation={byId.get('fullThrottle')!} {...fields}>
+        <FullThrottleFields {...fields} />
+      </MeasuredItem>
     </>
   );
 }

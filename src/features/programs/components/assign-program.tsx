@@ -6,6 +6,24 @@ import { SelectField } from '../../../components/ui/field';
 import { errorMessage, isApiError } from '../../../lib/api-client';
 import { useAssignProgram, usePrograms } from '../api';
 
+/** The refusal's own words first, then any field's words it does not already say. */
+function problemLines(error: Error): string[] {
+  const message = errorMessage(error);
+  const fieldErrors = isApiError(error) ? error.fieldErrors.map((e) => e.message) : [];
+  return [message, ...fieldErrors.filter((m) => m !== message)];
+}
+
+function RunCreated({ runId }: { runId: string }) {
+  return (
+    <p role="status" className="font-semibold">
+      Run created.{' '}
+      <Link to={`/runs/${runId}`} className="underline underline-offset-4">
+        Open the run
+      </Link>
+    </p>
+  );
+}
+
 /** Starts a break-in run for one engine from one of the workshop's active programs. */
 export function AssignProgram({ engineId }: { engineId: string }) {
   const programs = usePrograms();
@@ -13,12 +31,7 @@ export function AssignProgram({ engineId }: { engineId: string }) {
   const [programId, setProgramId] = useState('');
   const active = (programs.data ?? []).filter((program) => !program.retiredAt);
   const chosen = programId || active[0]?.id || '';
-  const fieldErrors = isApiError(assign.error)
-    ? assign.error.fieldErrors.map((e) => e.message)
-    : [];
-  const problemText = assign.error
-    ? [errorMessage(assign.error), ...fieldErrors.filter((m) => m !== errorMessage(assign.error))]
-    : [];
+  const problemText = assign.error ? problemLines(assign.error) : [];
 
   return (
     <div className="flex flex-col gap-3">
@@ -58,14 +71,7 @@ export function AssignProgram({ engineId }: { engineId: string }) {
           ))}
         </Alert>
       )}
-      {assign.data && (
-        <p role="status" className="font-semibold">
-          Run created.{' '}
-          <Link to={`/runs/${assign.data.run.id}`} className="underline underline-offset-4">
-            Open the run
-          </Link>
-        </p>
-      )}
+      {assign.data && <RunCreated runId={assign.data.run.id} />}
     </div>
   );
 }

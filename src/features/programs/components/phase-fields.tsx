@@ -22,6 +22,62 @@ export const ceilingLabel: Record<(typeof THROTTLE_CEILINGS)[number], string> = 
   varied: 'Varied (limits set by the rules)',
 };
 
+/** Who runs the phase, how long it must run in band, and its throttle ceiling. */
+function PhaseBasics({ index }: { index: number }) {
+  const { register, formState } = useFormContext<ProgramFormValues>();
+  const base = `phases.${index}` as const;
+  const error = (name: string) => errorAt(formState.errors, `${base}.${name}`);
+  return (
+    <div className="grid gap-3 sm:grid-cols-3">
+      <SelectField
+        label="Performed by"
+        error={error('performedBy')}
+        {...register(`${base}.performedBy`)}
+      >
+        <option value="workshop">The workshop</option>
+        <option value="skipper">The skipper</option>
+      </SelectField>
+      <TextField
+        label="Required minutes in band"
+        inputMode="numeric"
+        error={error('requiredMinutes')}
+        {...register(`${base}.requiredMinutes`, numberOptions)}
+      />
+      <SelectField
+        label="Throttle ceiling"
+        error={error('throttleCeiling')}
+        {...register(`${base}.throttleCeiling`)}
+      >
+        {THROTTLE_CEILINGS.map((ceiling) => (
+          <option key={ceiling} value={ceiling}>
+            {ceilingLabel[ceiling]}
+          </option>
+        ))}
+      </SelectField>
+    </div>
+  );
+}
+
+function PhaseMoves({ index, count, onMove, onRemove }: PhaseFieldsProps) {
+  return (
+    <div className="flex flex-wrap gap-2">
+      <Button variant="secondary" disabled={index === 0} onClick={() => onMove(index, index - 1)}>
+        Move up
+      </Button>
+      <Button
+        variant="secondary"
+        disabled={index === count - 1}
+        onClick={() => onMove(index, index + 1)}
+      >
+        Move down
+      </Button>
+      <Button variant="secondary" disabled={count === 1} onClick={() => onRemove(index)}>
+        Remove phase
+      </Button>
+    </div>
+  );
+}
+
 export function PhaseFields({ index, count, onMove, onRemove }: PhaseFieldsProps) {
   const { register, formState } = useFormContext<ProgramFormValues>();
   const base = `phases.${index}` as const;
@@ -30,33 +86,7 @@ export function PhaseFields({ index, count, onMove, onRemove }: PhaseFieldsProps
     <Card title={`Phase ${index + 1}`} level={3} aria-label={`Phase ${index + 1}`}>
       <div className="flex flex-col gap-4">
         <TextField label="Phase name" error={error('name')} {...register(`${base}.name`)} />
-        <div className="grid gap-3 sm:grid-cols-3">
-          <SelectField
-            label="Performed by"
-            error={error('performedBy')}
-            {...register(`${base}.performedBy`)}
-          >
-            <option value="workshop">The workshop</option>
-            <option value="skipper">The skipper</option>
-          </SelectField>
-          <TextField
-            label="Required minutes in band"
-            inputMode="numeric"
-            error={error('requiredMinutes')}
-            {...register(`${base}.requiredMinutes`, numberOptions)}
-          />
-          <SelectField
-            label="Throttle ceiling"
-            error={error('throttleCeiling')}
-            {...register(`${base}.throttleCeiling`)}
-          >
-            {THROTTLE_CEILINGS.map((ceiling) => (
-              <option key={ceiling} value={ceiling}>
-                {ceilingLabel[ceiling]}
-              </option>
-            ))}
-          </SelectField>
-        </div>
+        <PhaseBasics index={index} />
         <BandFields index={index} />
         <RulesFields index={index} />
         <Field label="Instructions" error={error('instructions')}>
@@ -69,25 +99,7 @@ export function PhaseFields({ index, count, onMove, onRemove }: PhaseFieldsProps
             />
           )}
         </Field>
-        <div className="flex flex-wrap gap-2">
-          <Button
-            variant="secondary"
-            disabled={index === 0}
-            onClick={() => onMove(index, index - 1)}
-          >
-            Move up
-          </Button>
-          <Button
-            variant="secondary"
-            disabled={index === count - 1}
-            onClick={() => onMove(index, index + 1)}
-          >
-            Move down
-          </Button>
-          <Button variant="secondary" disabled={count === 1} onClick={() => onRemove(index)}>
-            Remove phase
-          </Button>
-        </div>
+        <PhaseMoves index={index} count={count} onMove={onMove} onRemove={onRemove} />
       </div>
     </Card>
   );

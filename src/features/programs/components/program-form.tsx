@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { FormProvider, useFieldArray, useForm, type Path } from 'react-hook-form';
+import { FormProvider, useFieldArray, useForm, useFormContext, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import {
   MAX_PHASES,
@@ -21,18 +21,98 @@ import {
 } from '../form-values';
 import { PhaseFields } from './phase-fields';
 
+/** The program's name, notes and first service. */
+function ProgramDetailsCard() {
+  const { register, formState } = useFormContext<ProgramFormValues>();
+  const error = (name: string) => errorAt(formState.errors, name);
+  return (
+    <Card title="Program">
+      <div className="flex flex-col gap-4">
+        <TextField label="Program name" error={error('name')} {...register('name')} />
+        <Field label="Notes" error={error('notes')}>
+          {(c) => (
+            <textarea {...c} rows={3} className={`${controlClass} py-2`} {...register('notes')} />
+          )}
+        </Field>
+        <div className="grid gap-3 sm:grid-cols-2">
+          <TextField
+            label="First service after (engine hours)"
+            inputMode="decimal"
+            error={
+              error('firstService.hours') ?? error('firstService.root') ?? error('firstService')
+            }
+            {...register('firstService.hours', numberOptions)}
+          />
+          <TextField
+            label="First service after (months)"
+            inputMode="numeric"
+            error={error('firstService.months')}
+            {...register('firstService.months', numberOptions)}
+          />
+        </div>
+      </div>
+    </Card>
+  );
+}
+
+/** Every phase in order, each movable and removable, and a way to add one. */
+function PhaseCards() {
+  const { control } = useFormContext<ProgramFormValues>();
+  const phases = useFieldArray({ control, name: 'phases' });
+  return (
+    <>
+      <h2 className="text-xl font-bold">Phases ({phases.fields.length})</h2>
+      {phases.fields.map((field, index) => (
+        <PhaseFields
+          key={field.id}
+          index={index}
+          count={phases.fields.length}
+          onMove={phases.move}
+          onRemove={phases.remove}
+        />
+      ))}
+      <Button
+        variant="secondary"
+        className="self-start"
+        disabled={phases.fields.length >= MAX_PHASES}
+        onClick={() => phases.append(newPhase())}
+      >
+        Add phase
+      </Button>
+    </>
+  );
+}
+
+/** What the last save came to: what the server refused, or that it was saved. */
+function SaveOutcome({ problems, saved }: { problems: string[]; saved: boolean }) {
+  return (
+    <>
+      {problems.length > 0 && (
+        <Alert title="The program was not saved">
+          {problems.map((p) => (
+            <p key={p}>{p}</p>
+          ))}
+        </Alert>
+      )}
+      {saved && (
+        <p role="status" className="font-semibold">
+          Program saved.
+        </p>
+      )}
+    </>
+  );
+}
+
 /** Edits a workshop's own program. The server checks it again and names any field it refuses. */
 export function ProgramForm({ program }: { program: ProgramDetail }) {
   const form = useForm<ProgramFormValues, unknown, Program>({
     resolver: zodResolver(ProgramSchema),
     defaultValues: program.definition,
   });
-  const { register, control, handleSubmit, setError, reset, formState } = form;
-  const phases = useFieldArray({ control, name: 'phases' });
+  const { handleSubmit, setError, reset } = form;
   const save = useSaveProgram(program.id);
   const [problems, setProblems] = useState<string[]>([]);
   const [saved, setSaved] = useState(false);
-  const error = (name: string) => errorAt(formState.errors, name);
 
   const onSubmit = handleSubmit((definition) => {
     setProblems([]);
@@ -57,67 +137,9 @@ export function ProgramForm({ program }: { program: ProgramDetail }) {
         className="flex flex-col gap-5"
         aria-label="Edit program"
       >
-        <Card title="Program">
-          <div className="flex flex-col gap-4">
-            <TextField label="Program name" error={error('name')} {...register('name')} />
-            <Field label="Notes" error={error('notes')}>
-              {(c) => (
-                <textarea
-                  {...c}
-                  rows={3}
-                  className={`${controlClass} py-2`}
-                  {...register('notes')}
-                />
-              )}
-            </Field>
-            <div className="grid gap-3 sm:grid-cols-2">
-              <TextField
-                label="First service after (engine hours)"
-                inputMode="decimal"
-                error={
-                  error('firstService.hours') ?? error('firstService.root') ?? error('firstService')
-                }
-                {...register('firstService.hours', numberOptions)}
-              />
-              <TextField
-                label="First service after (months)"
-                inputMode="numeric"
-                error={error('firstService.months')}
-                {...register('firstService.months', numberOptions)}
-              />
-            </div>
-          </div>
-        </Card>
-        <h2 className="text-xl font-bold">Phases ({phases.fields.length})</h2>
-        {phases.fields.map((field, index) => (
-          <PhaseFields
-            key={field.id}
-            index={index}
-            count={phases.fields.length}
-            onMove={phases.move}
-            onRemove={phases.remove}
-          />
-        ))}
-        <Button
-          variant="secondary"
-          className="self-start"
-          disabled={phases.fields.length >= MAX_PHASES}
-          onClick={() => phases.append(newPhase())}
-        >
-          Add phase
-        </Button>
-        {problems.length > 0 && (
-          <Alert title="The program was not saved">
-            {problems.map((p) => (
-              <p key={p}>{p}</p>
-            ))}
-          </Alert>
-        )}
-        {saved && (
-          <p role="status" className="font-semibold">
-            Program saved.
-          </p>
-        )}
+        <ProgramDetailsCard />
+        <PhaseCards />
+        <SaveOutcome problems={problems} saved={saved} />
         <Button
           type="submit"
           className="self-start"
