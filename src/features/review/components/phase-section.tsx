@@ -54,6 +54,60 @@ function Reasons({ phase }: { phase: ReviewPhase }) {
   );
 }
 
+/** The phase's number and name, who runs it, its band and ceiling, when it ran, and its verdict. */
+function PhaseHeader({ phase, index }: { phase: ReviewPhase; index: number }) {
+  return (
+    <div className="mb-3 flex flex-wrap items-start justify-between gap-2">
+      <div>
+        <h3 id={`phase-${phase.id}`} className="text-lg font-bold">
+          {index + 1}. {phase.name}
+        </h3>
+        <p className="text-muted">
+          {phase.performedBy === 'workshop' ? 'By the workshop' : 'By the skipper'} · band{' '}
+          <span className="figures">
+            {phase.band.rpmMin}–{phase.band.rpmMax}
+          </span>{' '}
+          rpm, {CEILING_WORDS[phase.throttleCeiling]}
+          {phase.firstAt !== null && phase.lastAt !== null && (
+            <> · run {formatSpan(phase.firstAt, phase.lastAt)}</>
+          )}
+        </p>
+      </div>
+      <VerdictMark verdict={phase.verdict} />
+    </div>
+  );
+}
+
+/** The chart with its summary in words as the caption; the chart loads on its own. */
+function ChartFigure({
+  phase,
+  chart,
+  ratedRpmMax,
+}: {
+  phase: ReviewPhase;
+  chart: PhaseChart;
+  ratedRpmMax: number;
+}) {
+  return (
+    <figure className="flex flex-col gap-2">
+      <figcaption>
+        <ChartSummary phase={phase} chart={chart} />
+      </figcaption>
+      {chart.points.length > 0 && (
+        <Suspense
+          fallback={
+            <p role="status" className="text-muted">
+              Loading the chart…
+            </p>
+          }
+        >
+          <RunChart chart={chart} ratedRpmMax={ratedRpmMax} title={phase.name} />
+        </Suspense>
+      )}
+    </figure>
+  );
+}
+
 /** One phase: its band, its figures, every reason in words and when, and the chart. */
 export function PhaseSection({
   phase,
@@ -68,43 +122,11 @@ export function PhaseSection({
 }) {
   return (
     <Card level={3} aria-labelledby={`phase-${phase.id}`}>
-      <div className="mb-3 flex flex-wrap items-start justify-between gap-2">
-        <div>
-          <h3 id={`phase-${phase.id}`} className="text-lg font-bold">
-            {index + 1}. {phase.name}
-          </h3>
-          <p className="text-muted">
-            {phase.performedBy === 'workshop' ? 'By the workshop' : 'By the skipper'} · band{' '}
-            <span className="figures">
-              {phase.band.rpmMin}–{phase.band.rpmMax}
-            </span>{' '}
-            rpm, {CEILING_WORDS[phase.throttleCeiling]}
-            {phase.firstAt !== null && phase.lastAt !== null && (
-              <> · run {formatSpan(phase.firstAt, phase.lastAt)}</>
-            )}
-          </p>
-        </div>
-        <VerdictMark verdict={phase.verdict} />
-      </div>
+      <PhaseHeader phase={phase} index={index} />
       <div className="flex flex-col gap-4">
         <Figures phase={phase} />
         <Reasons phase={phase} />
-        <figure className="flex flex-col gap-2">
-          <figcaption>
-            <ChartSummary phase={phase} chart={chart} />
-          </figcaption>
-          {chart.points.length > 0 && (
-            <Suspense
-              fallback={
-                <p role="status" className="text-muted">
-                  Loading the chart…
-                </p>
-              }
-            >
-              <RunChart chart={chart} ratedRpmMax={ratedRpmMax} title={phase.name} />
-            </Suspense>
-          )}
-        </figure>
+        <ChartFigure phase={phase} chart={chart} ratedRpmMax={ratedRpmMax} />
       </div>
     </Card>
   );

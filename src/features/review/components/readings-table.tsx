@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { BAND_WORDS } from '../../../../shared/review/readings';
+import { BAND_WORDS, type ReadingRow } from '../../../../shared/review/readings';
 import { Button, buttonClass } from '../../../components/ui/button';
 import { LoadError, Loading } from '../../../components/ui/status-message';
 import { Table, Td, Th } from '../../../components/ui/table';
@@ -8,6 +8,63 @@ import { formatMoment } from '../format';
 
 const PAGE = 50;
 const BAND_MARK = { 'in-band': '■', over: '▲', under: '▽' } as const;
+
+function ReadingTableRow({ reading: r }: { reading: ReadingRow }) {
+  return (
+    <tr>
+      <Td className="figures whitespace-nowrap">{formatMoment(r.at)}</Td>
+      <Td>{r.phaseName}</Td>
+      <Td className="figures">
+        {r.rpm}
+        {r.rpmSource === 'frequency' && r.frequencyHz !== null ? ` (${r.frequencyHz} Hz)` : ''}
+      </Td>
+      <Td>{r.throttle}</Td>
+      <Td className="whitespace-nowrap">
+        {r.band ? (
+          <>
+            <span aria-hidden="true">{BAND_MARK[r.band]} </span>
+            {BAND_WORDS[r.band]}
+          </>
+        ) : (
+          '—'
+        )}
+      </Td>
+      <Td className="figures">{r.speedKn !== null ? `${r.speedKn} kn` : '—'}</Td>
+      <Td className="figures">{r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}</Td>
+      <Td>{r.note ?? ''}</Td>
+    </tr>
+  );
+}
+
+function ReadingsPager({
+  offset,
+  last,
+  total,
+  onGo,
+}: {
+  offset: number;
+  last: number;
+  total: number;
+  onGo: (offset: number) => void;
+}) {
+  return (
+    <nav aria-label="Readings pages" className="flex flex-wrap items-center gap-3">
+      <Button
+        variant="secondary"
+        disabled={offset === 0}
+        onClick={() => onGo(Math.max(0, offset - PAGE))}
+      >
+        Earlier
+      </Button>
+      <span className="figures">
+        {offset + 1}–{last} of {total}
+      </span>
+      <Button variant="secondary" disabled={last >= total} onClick={() => onGo(offset + PAGE)}>
+        Later
+      </Button>
+    </nav>
+  );
+}
 
 /** Every reading, fifty at a time, with the whole list as a CSV download. */
 export function ReadingsTable({ runId, total }: { runId: string; total: number }) {
@@ -45,56 +102,13 @@ export function ReadingsTable({ runId, total }: { runId: string; total: number }
           </thead>
           <tbody>
             {readings.data.readings.map((r) => (
-              <tr key={r.id}>
-                <Td className="figures whitespace-nowrap">{formatMoment(r.at)}</Td>
-                <Td>{r.phaseName}</Td>
-                <Td className="figures">
-                  {r.rpm}
-                  {r.rpmSource === 'frequency' && r.frequencyHz !== null
-                    ? ` (${r.frequencyHz} Hz)`
-                    : ''}
-                </Td>
-                <Td>{r.throttle}</Td>
-                <Td className="whitespace-nowrap">
-                  {r.band ? (
-                    <>
-                      <span aria-hidden="true">{BAND_MARK[r.band]} </span>
-                      {BAND_WORDS[r.band]}
-                    </>
-                  ) : (
-                    '—'
-                  )}
-                </Td>
-                <Td className="figures">{r.speedKn !== null ? `${r.speedKn} kn` : '—'}</Td>
-                <Td className="figures">
-                  {r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}
-                </Td>
-                <Td>{r.note ?? ''}</Td>
-              </tr>
+              <ReadingTableRow key={r.id} reading={r} />
             ))}
           </tbody>
         </Table>
       )}
       {readings.data && readings.data.total > PAGE && (
-        <nav aria-label="Readings pages" className="flex flex-wrap items-center gap-3">
-          <Button
-            variant="secondary"
-            disabled={offset === 0}
-            onClick={() => setOffset(Math.max(0, offset - PAGE))}
-          >
-            Earlier
-          </Button>
-          <span className="figures">
-            {offset + 1}–{last} of {readings.data.total}
-          </span>
-          <Button
-            variant="secondary"
-            disabled={last >= readings.data.total}
-            onClick={() => setOffset(offset + PAGE)}
-          >
-            Later
-          </Button>
-        </nav>
+        <ReadingsPager offset={offset} last={last} total={readings.data.total} onGo={setOffset} />
       )}
     </div>
   );

@@ -24,6 +24,29 @@ function eventWords(
   }
 }
 
+function EventItem({
+  event,
+  phaseName,
+}: {
+  event: LoggedEvent;
+  phaseName: (id: string) => string;
+}) {
+  const { mark, text } = eventWords(event, phaseName);
+  return (
+    <li className="flex gap-3 py-2">
+      <span className="figures w-40 shrink-0 text-sm text-muted">{formatMoment(event.at)}</span>
+      <span aria-hidden="true" className="w-4 font-bold">
+        {mark}
+      </span>
+      <span
+        className={event.kind === 'note' || event.kind === 'alert' ? 'font-semibold' : undefined}
+      >
+        {text}
+      </span>
+    </li>
+  );
+}
+
 /** Notes, alerts, outings and phase changes as they happened (device time). */
 export function EventList({
   events,
@@ -51,26 +74,9 @@ export function EventList({
         </Button>
       )}
       <ol className="flex flex-col divide-y divide-line">
-        {list.map((event) => {
-          const { mark, text } = eventWords(event, name);
-          return (
-            <li key={event.id} className="flex gap-3 py-2">
-              <span className="figures w-40 shrink-0 text-sm text-muted">
-                {formatMoment(event.at)}
-              </span>
-              <span aria-hidden="true" className="w-4 font-bold">
-                {mark}
-              </span>
-              <span
-                className={
-                  event.kind === 'note' || event.kind === 'alert' ? 'font-semibold' : undefined
-                }
-              >
-                {text}
-              </span>
-            </li>
-          );
-        })}
+        {list.map((event) => (
+          <EventItem key={event.id} event={event} phaseName={name} />
+        ))}
       </ol>
     </div>
   );
