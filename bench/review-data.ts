@@ -32,7 +32,7 @@ const STATES = [
 ];
 
 type Native = Database;
-export type BenchIds = { workshop: string; manager: string };
+type BenchIds = { workshop: string; manager: string };
 
 function insertWorkshop(db: Native, ids: BenchIds, passwordHash: string) {
   db.prepare(

@@ -13,7 +13,7 @@ import { DEMO_PASSWORD, DEMO_USERS, DEMO_WORKSHOP } from './demo-people.js';
 import { addDemoRuns } from './demo-run-records.js';
 
 /** True when the database holds no workshop yet: the only case in which demo data is added. */
-export async function isEmpty(dataSource: DataSource): Promise<boolean> {
+async function isEmpty(dataSource: DataSource): Promise<boolean> {
   return (await dataSource.getRepository(Workshop).count()) === 0;
 }
 

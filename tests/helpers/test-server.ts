@@ -37,13 +37,10 @@ export type TestServer = {
 };
 
 /** A real app on a real, migrated SQLite file in a temporary folder, with the demo workshop in it. */
-export async function startTestServer(
-  overrides: Partial<AppDeps> = {},
-  options: { demo?: boolean } = {},
-): Promise<TestServer> {
+export async function startTestServer(overrides: Partial<AppDeps> = {}): Promise<TestServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-test-'));
   const dataSource = await openDatabase(path.join(dir, 'ringseat.sqlite'));
-  await prepareData(dataSource, { demo: options.demo === false ? 'none' : 'demo' });
+  await prepareData(dataSource, { demo: 'demo' });
   const app = createApp({ dataSource, logger: createLogger('silent'), dataDir: dir, ...overrides });
   return {
     app,

@@ -67,7 +67,7 @@ function boardRows(dataSource: DataSource, workshopId: string): BoardSqlRow[] {
 }
 
 /** SQLite keeps TypeORM datetimes as UTC text, "2026-12-01 09:00:00.000". */
-export const sqlDateMs = (text: string | null): number | null =>
+const sqlDateMs = (text: string | null): number | null =>
   text === null ? null : Date.parse(`${text.replace(' ', 'T')}Z`);
 const iso = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
 

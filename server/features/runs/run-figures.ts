@@ -9,7 +9,7 @@ import type { Run } from './run.entity.js';
 import { countRunEvents, latestHourMeters, loadRunEvents } from './run-events.js';
 
 /** Plenty for any honest run; a device stuck raising alerts should not swamp the page. */
-export const MAX_LISTED_EVENTS = 1000;
+const MAX_LISTED_EVENTS = 1000;
 
 /** Everything worked out from a run's events: the accounting, the charts and the log. */
 export interface RunFigures {

@@ -5,7 +5,7 @@ import {
 } from '../../../shared/sync/sync.schema.js';
 import { fieldErrors } from '../../middleware/validate.js';
 
-export type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
+type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
 
 /** Checks each item on its own: an invalid item is rejected with its reason, the others go on. */
 export function checkItems(items: unknown[]): Checked[] {
