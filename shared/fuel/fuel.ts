@@ -4,7 +4,7 @@ import { litresToUsGallons } from '../units/convert';
 
 /**
  * Typical densities, kg/L: petrol about 0.72–0.775, diesel about 0.82–0.845
- * (EN 228 / EN 590 ranges, from memory). Density is always a parameter; these only seed forms.
+ * (EN 228 / EN 590 ranges, from memory). Density is always a parameter; these only prefill forms.
  */
 export const FUEL_DENSITY_KG_PER_L = {
   petrol: { min: 0.72, max: 0.775 },

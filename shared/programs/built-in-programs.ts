@@ -3,7 +3,7 @@ import { FOUR_STROKE_OUTBOARD } from './program-four-stroke-outboard';
 import { INBOARD_DIESEL } from './program-inboard-diesel';
 import { TWO_STROKE_OUTBOARD } from './program-two-stroke-outboard';
 
-/** Keys are stable: seed data and copied templates refer to them. */
+/** Keys are stable: demo data and copied templates refer to them. */
 export const BUILT_IN_PROGRAM_KEYS = [
   'four-stroke-outboard',
   'two-stroke-outboard',

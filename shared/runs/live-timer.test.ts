@@ -133,8 +133,8 @@ describe('live timer', () => {
 });
 
 /** Simulates a 10-hour day: readings every 20–90 s, stops, restarts and phase changes. */
-function tenHourDay(seed: number): RunEvent[] {
-  let state = seed >>> 0;
+function tenHourDay(randomStart: number): RunEvent[] {
+  let state = randomStart >>> 0;
   const random = () => (state = (Math.imul(state, 1664525) + 1013904223) >>> 0) / 4294967296;
   const events: RunEvent[] = [start(T0)];
   let phase = 'a';
@@ -165,8 +165,8 @@ function tenHourDay(seed: number): RunEvent[] {
 describe('live timer against a single computation', () => {
   it('zero drift: at any now, the figures equal the one computation of the whole day cut at now', () => {
     let checked = 0;
-    for (const seed of [1, 2, 3]) {
-      const day = tenHourDay(seed);
+    for (const randomStart of [1, 2, 3]) {
+      const day = tenHourDay(randomStart);
       const whole = buildTimeline(orderEvents(day)).segments;
       for (let now = T0; now <= T0 + 10 * 60 * MIN + 15 * MIN; now += 61_337) {
         const live = liveTimerState(

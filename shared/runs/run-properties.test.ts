@@ -131,10 +131,10 @@ describe('accounting properties', () => {
         eventsArb({ withClockJumps: true }),
         fc.integer(),
         fc.integer({ min: 0, max: 10 }),
-        (events, seed, copies) => {
+        (events, randomStart, copies) => {
           const delivered = shuffled(
-            [...events, ...shuffled(events, seed + 1).slice(0, copies)],
-            seed,
+            [...events, ...shuffled(events, randomStart + 1).slice(0, copies)],
+            randomStart,
           );
           expect(accountRun(delivered, phases)).toEqual(accountRun(events, phases));
         },

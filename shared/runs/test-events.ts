@@ -123,9 +123,9 @@ export function eventsFromSteps(steps: readonly EventStep[]): RunEvent[] {
   });
 }
 
-/** A deterministic shuffle from a seed (mulberry32), so a failing case can be replayed. */
-export function shuffled<T>(items: readonly T[], seed: number): T[] {
-  let state = seed >>> 0;
+/** A deterministic shuffle from a starting number (mulberry32), so a failing case can be replayed. */
+export function shuffled<T>(items: readonly T[], randomStart: number): T[] {
+  let state = randomStart >>> 0;
   const random = () => {
     state = (state + 0x6d2b79f5) >>> 0;
     let t = state;

@@ -11,7 +11,7 @@ declare module 'vitest' {
   }
 }
 
-/** One real server (built client + API + seeded database) shared by the browser tests. */
+/** One real server (built client + API + the demo workshop) shared by the browser tests. */
 export default async function setup(project: TestProject) {
   if (!fs.existsSync(CHROMIUM_PATH)) throw new Error(chromiumMissingMessage());
   ensureClientBuilt();
