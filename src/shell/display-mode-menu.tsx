@@ -1,4 +1,4 @@
-import { useEffect, useId, useRef, useState } from 'react';
+import { useEffect, useId, useRef, useState, type RefObject } from 'react';
 import { HalfIcon, MoonIcon, SunIcon } from '../components/ui/icons';
 import { buttonClass } from '../components/ui/button';
 import { cx } from '../components/ui/cx';
@@ -10,6 +10,86 @@ const modes: Record<DisplayMode, { label: string; note: string; Icon: typeof Sun
   system: { label: 'System', note: 'Follows this device', Icon: HalfIcon },
 };
 
+/** While open, a press anywhere outside `root` closes it. */
+function useCloseOnOutsidePointer(
+  open: boolean,
+  root: RefObject<HTMLElement | null>,
+  setOpen: (open: boolean) => void,
+) {
+  useEffect(() => {
+    if (!open) return;
+    const closeOutside = (event: PointerEvent) => {
+      if (!root.current?.contains(event.target as Node)) setOpen(false);
+    };
+    document.addEventListener('pointerdown', closeOutside);
+    return () => document.removeEventListener('pointerdown', closeOutside);
+  }, [open, root, setOpen]);
+}
+
+function ModeButton({
+  value,
+  chosen,
+  noteId,
+  onChoose,
+}: {
+  value: DisplayMode;
+  chosen: boolean;
+  noteId: string;
+  onChoose: (mode: DisplayMode) => void;
+}) {
+  const { label, note, Icon } = modes[value];
+  return (
+    <button
+      type="button"
+      aria-pressed={chosen}
+      onClick={() => onChoose(value)}
+      aria-label={label}
+      aria-describedby={noteId}
+      className={cx(
+        'flex min-h-touch items-center gap-3 rounded-md border-2 px-3 py-2 text-left',
+        chosen ? 'border-ink bg-sunk font-bold' : 'border-transparent hover:border-line',
+      )}
+    >
+      <Icon />
+      <span className="flex flex-col">
+        <span>{label}</span>
+        <span id={noteId} className="text-sm font-normal text-muted">
+          {note}
+        </span>
+      </span>
+    </button>
+  );
+}
+
+function ModeChoices({
+  panelId,
+  mode,
+  onChoose,
+}: {
+  panelId: string;
+  mode: DisplayMode;
+  onChoose: (mode: DisplayMode) => void;
+}) {
+  return (
+    <div
+      id={panelId}
+      role="group"
+      aria-label="Choose display mode"
+      className="fixed inset-x-2 top-16 z-30 flex flex-col gap-1 rounded-lg border-2 border-ink bg-surface p-2 sm:absolute sm:inset-x-auto sm:right-0 sm:top-full sm:mt-2 sm:w-72"
+    >
+      {DISPLAY_MODES.map((value) => (
+        <ModeButton
+          key={value}
+          value={value}
+          chosen={mode === value}
+          noteId={`${panelId}-${value}`}
+          onChoose={onChoose}
+        />
+      ))}
+    </div>
+  );
+}
+
 /** Header control for day, night or system display; the choice is kept on this device. */
 export function DisplayModeMenu() {
   const [mode, setMode] = useDisplayMode();
@@ -19,14 +99,7 @@ export function DisplayModeMenu() {
   const buttonRef = useRef<HTMLButtonElement>(null);
   const Current = modes[mode].Icon;
 
-  useEffect(() => {
-    if (!open) return;
-    const closeOutside = (event: PointerEvent) => {
-      if (!rootRef.current?.contains(event.target as Node)) setOpen(false);
-    };
-    document.addEventListener('pointerdown', closeOutside);
-    return () => document.removeEventListener('pointerdown', closeOutside);
-  }, [open]);
+  useCloseOnOutsidePointer(open, rootRef, setOpen);
 
   const choose = (next: DisplayMode) => {
     setMode(next);
@@ -57,42 +130,7 @@ export function DisplayModeMenu() {
         <Current />
         <span className="sr-only sm:not-sr-only">Display mode</span>
       </button>
-      {open && (
-        <div
-          id={panelId}
-          role="group"
-          aria-label="Choose display mode"
-          className="fixed inset-x-2 top-16 z-30 flex flex-col gap-1 rounded-lg border-2 border-ink bg-surface p-2 sm:absolute sm:inset-x-auto sm:right-0 sm:top-full sm:mt-2 sm:w-72"
-        >
-          {DISPLAY_MODES.map((value) => {
-            const { label, note, Icon } = modes[value];
-            return (
-              <button
-                key={value}
-                type="button"
-                aria-pressed={mode === value}
-                onClick={() => choose(value)}
-                aria-label={label}
-                aria-describedby={`${panelId}-${value}`}
-                className={cx(
-                  'flex min-h-touch items-center gap-3 rounded-md border-2 px-3 py-2 text-left',
-                  mode === value
-                    ? 'border-ink bg-sunk font-bold'
-                    : 'border-transparent hover:border-line',
-                )}
-              >
-                <Icon />
-                <span className="flex flex-col">
-                  <span>{label}</span>
-                  <span id={`${panelId}-${value}`} className="text-sm font-normal text-muted">
-                    {note}
-                  </span>
-                </span>
-              </button>
-            );
-          })}
-        </div>
-      )}
+      {open && <ModeChoices panelId={panelId} mode={mode} onChoose={choose} />}
     </div>
   );
 }

@@ -1,4 +1,4 @@
-import { useId, useRef, useState, type FormEvent } from 'react';
+import { useId, useRef, useState, type FormEvent, type RefObject } from 'react';
 import {
   ACCEPTED_FILE_TYPES,
   ACCEPTED_TYPE_WORDS,
@@ -13,21 +13,49 @@ import { TooLargeError, useUploadAttachment } from '../api';
 
 const accept = Object.keys(ACCEPTED_FILE_TYPES).join(',');
 
-/** Picks one photo or document, with an optional caption, and sends it. */
-export function UploadForm({
-  recordType,
-  recordId,
+/** Why the last upload failed, in words; null when it did not. */
+function uploadProblem(error: Error | null): string | null {
+  if (!error) return null;
+  return error instanceof TooLargeError ? error.message : errorMessage(error);
+}
+
+function FileField({
+  inputRef,
+  onChoose,
 }: {
-  recordType: AttachmentRecordType;
-  recordId: string;
+  inputRef: RefObject<HTMLInputElement | null>;
+  onChoose: (file: File | null) => void;
 }) {
+  const id = useId();
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="font-semibold">
+        Photo or document
+      </label>
+      <p
+        id={`${id}-hint`}
+        className="text-sm text-muted"
+      >{`Send ${ACCEPTED_TYPE_WORDS}, up to ${MAX_ATTACHMENT_BYTES / (1024 * 1024)} MB.`}</p>
+      <input
+        ref={inputRef}
+        id={id}
+        type="file"
+        accept={accept}
+        aria-describedby={`${id}-hint`}
+        className="min-h-touch rounded-md border-2 border-dashed border-line bg-surface p-2 file:mr-3 file:min-h-10 file:rounded-md file:border-2 file:border-ink file:bg-surface file:px-3 file:font-semibold file:text-ink"
+        onChange={(e) => onChoose(e.target.files?.[0] ?? null)}
+      />
+    </div>
+  );
+}
+
+/** The chosen file and caption, and sending them; a sent file clears the form for the next. */
+function useUploadForm(recordType: AttachmentRecordType, recordId: string) {
   const upload = useUploadAttachment(recordType, recordId);
   const [file, setFile] = useState<File | null>(null);
   const [caption, setCaption] = useState('');
   const [missing, setMissing] = useState(false);
   const input = useRef<HTMLInputElement>(null);
-  const id = useId();
-
   const onSubmit = (event: FormEvent) => {
     event.preventDefault();
     if (!file) return setMissing(true);
@@ -42,14 +70,27 @@ export function UploadForm({
       },
     );
   };
+  const choose = (chosen: File | null) => {
+    setFile(chosen);
+    setMissing(false);
+    upload.reset();
+  };
+  const problem = missing ? 'Choose a photo or document first.' : uploadProblem(upload.error);
+  return { upload, caption, setCaption, input, onSubmit, choose, problem };
+}
 
-  const problem = missing
-    ? 'Choose a photo or document first.'
-    : upload.isError
-      ? upload.error instanceof TooLargeError
-        ? upload.error.message
-        : errorMessage(upload.error)
-      : null;
+/** Picks one photo or document, with an optional caption, and sends it. */
+export function UploadForm({
+  recordType,
+  recordId,
+}: {
+  recordType: AttachmentRecordType;
+  recordId: string;
+}) {
+  const { upload, caption, setCaption, input, onSubmit, choose, problem } = useUploadForm(
+    recordType,
+    recordId,
+  );
   return (
     <form
       noValidate
@@ -58,28 +99,7 @@ export function UploadForm({
       aria-label="Add a photo or document"
     >
       {problem && <Alert title="Not attached">{problem}</Alert>}
-      <div className="flex flex-col gap-1">
-        <label htmlFor={id} className="font-semibold">
-          Photo or document
-        </label>
-        <p
-          id={`${id}-hint`}
-          className="text-sm text-muted"
-        >{`Send ${ACCEPTED_TYPE_WORDS}, up to ${MAX_ATTACHMENT_BYTES / (1024 * 1024)} MB.`}</p>
-        <input
-          ref={input}
-          id={id}
-          type="file"
-          accept={accept}
-          aria-describedby={`${id}-hint`}
-          className="min-h-touch rounded-md border-2 border-dashed border-line bg-surface p-2 file:mr-3 file:min-h-10 file:rounded-md file:border-2 file:border-ink file:bg-surface file:px-3 file:font-semibold file:text-ink"
-          onChange={(e) => {
-            setFile(e.target.files?.[0] ?? null);
-            setMissing(false);
-            upload.reset();
-          }}
-        />
-      </div>
+      <FileField inputRef={input} onChoose={choose} />
       <TextField
         label="Caption (optional)"
         value={caption}

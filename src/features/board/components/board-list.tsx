@@ -20,6 +20,38 @@ function RunLink({ run }: { run: BoardRow }) {
   );
 }
 
+function BoardTableRow({ run }: { run: BoardRow }) {
+  return (
+    <tr>
+      <Td>
+        <RunLink run={run} />
+        <p className="text-sm">{engineWords(run)}</p>
+        <p className="figures text-sm text-muted">{run.engine.serialNumber}</p>
+      </Td>
+      <Td>
+        <RunStatePill state={run.state} />
+      </Td>
+      <Td>
+        <ProgressBar
+          share={run.progress}
+          label={`Progress of ${run.vessel.name} ${run.engine.position}`}
+        />
+        <p className="text-sm text-muted">{run.currentPhaseName ?? 'All phases done'}</p>
+      </Td>
+      <Td>
+        <div className="flex flex-col items-start gap-1">
+          <VerdictPill verdict={run.verdict} />
+          <FlagList flags={run.flags.filter((f) => f !== 'breach')} breachCount={run.breachCount} />
+        </div>
+      </Td>
+      <Td>
+        <FirstServiceText service={run.firstService} />
+      </Td>
+      <Td className="whitespace-nowrap">{activity(run)}</Td>
+    </tr>
+  );
+}
+
 /** Wide screens: one row per run. */
 export function BoardTable({ runs }: { runs: BoardRow[] }) {
   return (
@@ -37,36 +69,7 @@ export function BoardTable({ runs }: { runs: BoardRow[] }) {
       </thead>
       <tbody>
         {runs.map((run) => (
-          <tr key={run.id}>
-            <Td>
-              <RunLink run={run} />
-              <p className="text-sm">{engineWords(run)}</p>
-              <p className="figures text-sm text-muted">{run.engine.serialNumber}</p>
-            </Td>
-            <Td>
-              <RunStatePill state={run.state} />
-            </Td>
-            <Td>
-              <ProgressBar
-                share={run.progress}
-                label={`Progress of ${run.vessel.name} ${run.engine.position}`}
-              />
-              <p className="text-sm text-muted">{run.currentPhaseName ?? 'All phases done'}</p>
-            </Td>
-            <Td>
-              <div className="flex flex-col items-start gap-1">
-                <VerdictPill verdict={run.verdict} />
-                <FlagList
-                  flags={run.flags.filter((f) => f !== 'breach')}
-                  breachCount={run.breachCount}
-                />
-              </div>
-            </Td>
-            <Td>
-              <FirstServiceText service={run.firstService} />
-            </Td>
-            <Td className="whitespace-nowrap">{activity(run)}</Td>
-          </tr>
+          <BoardTableRow key={run.id} run={run} />
         ))}
       </tbody>
     </Table>

@@ -19,6 +19,38 @@ function Line({ line }: { line: OutboxLine }) {
   );
 }
 
+/** What the server refused stays on the device, with its reason, for the workshop to see. */
+function RefusedLines({ lines }: { lines: OutboxLine[] }) {
+  return (
+    <section className="mt-4">
+      <h3 className="font-bold">Refused by the server ({lines.length})</h3>
+      <p className="text-sm">These stay on this device; show them to your workshop.</p>
+      <ul>
+        {lines.map((l) => (
+          <Line key={l.id} line={l} />
+        ))}
+      </ul>
+    </section>
+  );
+}
+
+function WaitingLines({ lines }: { lines: OutboxLine[] }) {
+  return (
+    <section className="mt-4">
+      <h3 className="font-bold">Waiting to send ({lines.length})</h3>
+      {lines.length === 0 ? (
+        <p className="text-sm">Nothing is waiting.</p>
+      ) : (
+        <ul className="max-h-72 overflow-y-auto">
+          {lines.map((l) => (
+            <Line key={l.id} line={l} />
+          ))}
+        </ul>
+      )}
+    </section>
+  );
+}
+
 /** The outbox in full: what waits, what the server refused and why, and when sync last worked. */
 export function SyncDetails({ onClose }: { onClose: () => void }) {
   const lines = useOutboxLines() ?? [];
@@ -55,29 +87,8 @@ export function SyncDetails({ onClose }: { onClose: () => void }) {
           Close
         </Button>
       </div>
-      {refused.length > 0 && (
-        <section className="mt-4">
-          <h3 className="font-bold">Refused by the server ({refused.length})</h3>
-          <p className="text-sm">These stay on this device; show them to your workshop.</p>
-          <ul>
-            {refused.map((l) => (
-              <Line key={l.id} line={l} />
-            ))}
-          </ul>
-        </section>
-      )}
-      <section className="mt-4">
-        <h3 className="font-bold">Waiting to send ({waiting.length})</h3>
-        {waiting.length === 0 ? (
-          <p className="text-sm">Nothing is waiting.</p>
-        ) : (
-          <ul className="max-h-72 overflow-y-auto">
-            {waiting.map((l) => (
-              <Line key={l.id} line={l} />
-            ))}
-          </ul>
-        )}
-      </section>
+      {refused.length > 0 && <RefusedLines lines={refused} />}
+      <WaitingLines lines={waiting} />
     </dialog>
   );
 }

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Controller, useForm, useWatch } from 'react-hook-form';
+import { Controller, useForm, useWatch, type Control, type FieldErrors } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { InviteInputSchema, ROLES, type InviteInput } from '../../../../shared/auth/auth.schema';
@@ -13,36 +13,64 @@ import { VesselChoice, type VesselOption } from './vessel-choice';
 
 type InviteFormValues = z.input<typeof InviteInputSchema>;
 
-/** Invites a person to the workshop and shows the link to pass on. */
-export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
+/** The vessels a new skipper may log, chosen before the invite goes out. */
+function VesselsField({
+  control,
+  vessels,
+  errors,
+}: {
+  control: Control<InviteFormValues>;
+  vessels: VesselOption[];
+  errors: FieldErrors<InviteFormValues>;
+}) {
+  return (
+    <Controller
+      control={control}
+      name="vesselIds"
+      render={({ field, fieldState }) => (
+        <VesselChoice
+          vessels={vessels}
+          value={field.value ?? []}
+          onChange={field.onChange}
+          error={fieldState.error?.message ?? errors.vesselIds?.root?.message}
+        />
+      )}
+    />
+  );
+}
+
+/** The invite form and sending it: the link comes back, or the server's refusal. */
+function useInviteForm() {
   const invite = useInvite();
   const [sent, setSent] = useState<SentInvite | null>(null);
   const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, control, handleSubmit, setError, reset, formState } = useForm<
-    InviteFormValues,
-    unknown,
-    InviteInput
-  >({
+  const form = useForm<InviteFormValues, unknown, InviteInput>({
     resolver: zodResolver(InviteInputSchema),
     defaultValues: { email: '', role: 'skipper', vesselIds: [] },
   });
-  const role = useWatch({ control, name: 'role' });
-
-  const onSubmit = handleSubmit((input) => {
+  const onSubmit = form.handleSubmit((input) => {
     setRefusal(null);
     setSent(null);
     const body = { ...input, vesselIds: input.role === 'skipper' ? input.vesselIds : [] };
     invite.mutate(body, {
       onSuccess: (result) => {
         setSent(result);
-        reset();
+        form.reset();
       },
       onError: (error) => {
-        const messages = serverErrorMessages(error, setError, ['email', 'role', 'vesselIds']);
+        const messages = serverErrorMessages(error, form.setError, ['email', 'role', 'vesselIds']);
         setRefusal(messages.join(' ') || null);
       },
     });
   });
+  return { form, invite, sent, refusal, onSubmit };
+}
+
+/** Invites a person to the workshop and shows the link to pass on. */
+export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
+  const { form, invite, sent, refusal, onSubmit } = useInviteForm();
+  const { register, control, formState } = form;
+  const role = useWatch({ control, name: 'role' });
 
   return (
     <div className="flex flex-col gap-4">
@@ -65,18 +93,7 @@ export function InviteForm({ vessels = [] }: { vessels?: VesselOption[] }) {
           ))}
         </SelectField>
         {role === 'skipper' && vessels.length > 0 && (
-          <Controller
-            control={control}
-            name="vesselIds"
-            render={({ field, fieldState }) => (
-              <VesselChoice
-                vessels={vessels}
-                value={field.value ?? []}
-                onChange={field.onChange}
-                error={fieldState.error?.message ?? formState.errors.vesselIds?.root?.message}
-              />
-            )}
-          />
+          <VesselsField control={control} vessels={vessels} errors={formState.errors} />
         )}
         <Button
           type="submit"
