@@ -53,6 +53,43 @@ const prefetch = (start: () => void) => () => {
   return null;
 };
 
+/** The pages inside the app shell: each waits for a signed-in session (requireSession). */
+function signedInRoutes(queryClient: QueryClient): RouteObject[] {
+  return [
+    {
+      index: true,
+      loader: prefetch(() => void queryClient.prefetchQuery(vesselQueries.list())),
+      lazy: () => import('./routes/home'),
+      errorElement,
+    },
+    {
+      path: 'team',
+      loader: prefetch(() => {
+        if (queryClient.getQueryData(authQueries.me().queryKey)?.role !== 'manager') return;
+        void queryClient.prefetchQuery(teamQueries.users());
+        void queryClient.prefetchQuery(vesselQueries.list());
+      }),
+      lazy: () => import('./routes/team'),
+      errorElement,
+    },
+    // The deck is its own app (src/deck); the address is already /deck…, so load the page.
+    { path: 'deck/*', element: <ReloadPage /> },
+    { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
+    { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
+    { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },
+    {
+      path: 'engines/:id/checklist',
+      lazy: () => import('./routes/engine-checklist'),
+      errorElement,
+    },
+    { path: 'runs', lazy: () => import('./routes/runs'), errorElement },
+    { path: 'runs/:id', lazy: () => import('./routes/run-review'), errorElement },
+    { path: 'programs', lazy: () => import('./routes/programs'), errorElement },
+    { path: 'programs/:id', lazy: () => import('./routes/program'), errorElement },
+    { path: '*', lazy: () => import('./routes/not-found'), errorElement },
+  ];
+}
+
 export function createRoutes(queryClient: QueryClient): RouteObject[] {
   return [
     {
@@ -73,39 +110,7 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           loader: requireSession(queryClient),
           element: <AppShell />,
           errorElement,
-          children: [
-            {
-              index: true,
-              loader: prefetch(() => void queryClient.prefetchQuery(vesselQueries.list())),
-              lazy: () => import('./routes/home'),
-              errorElement,
-            },
-            {
-              path: 'team',
-              loader: prefetch(() => {
-                if (queryClient.getQueryData(authQueries.me().queryKey)?.role !== 'manager') return;
-                void queryClient.prefetchQuery(teamQueries.users());
-                void queryClient.prefetchQuery(vesselQueries.list());
-              }),
-              lazy: () => import('./routes/team'),
-              errorElement,
-            },
-            // The deck is its own app (src/deck); the address is already /deck…, so load the page.
-            { path: 'deck/*', element: <ReloadPage /> },
-            { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
-            { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
-            { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },
-            {
-              path: 'engines/:id/checklist',
-              lazy: () => import('./routes/engine-checklist'),
-              errorElement,
-            },
-            { path: 'runs', lazy: () => import('./routes/runs'), errorElement },
-            { path: 'runs/:id', lazy: () => import('./routes/run-review'), errorElement },
-            { path: 'programs', lazy: () => import('./routes/programs'), errorElement },
-            { path: 'programs/:id', lazy: () => import('./routes/program'), errorElement },
-            { path: '*', lazy: () => import('./routes/not-found'), errorElement },
-          ],
+          children: signedInRoutes(queryClient),
         },
       ],
     },

@@ -44,6 +44,25 @@ function DetailsCard({ engine }: { engine: EngineRow }) {
   );
 }
 
+/** The checklist's state and the way to start, continue or view it. */
+function ChecklistCard({ engine: e }: { engine: EngineRow }) {
+  return (
+    <Card title="Commissioning checklist">
+      <div className="flex flex-wrap items-center gap-3">
+        <ChecklistPill engine={e} />
+        {e.checklist?.completedAt && <span>Completed {formatDate(e.checklist.completedAt)}</span>}
+      </div>
+      <ButtonLink to={`/engines/${e.id}/checklist`} className="mt-3">
+        {e.checklist?.completedAt
+          ? 'View the checklist'
+          : e.checklist
+            ? 'Continue the checklist'
+            : 'Start the checklist'}
+      </ButtonLink>
+    </Card>
+  );
+}
+
 function EnginePage({ id }: { id: string }) {
   const engine = useEngine(id);
   const archive = useArchiveEngine();
@@ -65,19 +84,7 @@ function EnginePage({ id }: { id: string }) {
         <ArchivedPill archivedAt={e.archivedAt} />
       </div>
       <p className="figures text-lg">{e.serialNumber}</p>
-      <Card title="Commissioning checklist">
-        <div className="flex flex-wrap items-center gap-3">
-          <ChecklistPill engine={e} />
-          {e.checklist?.completedAt && <span>Completed {formatDate(e.checklist.completedAt)}</span>}
-        </div>
-        <ButtonLink to={`/engines/${e.id}/checklist`} className="mt-3">
-          {e.checklist?.completedAt
-            ? 'View the checklist'
-            : e.checklist
-              ? 'Continue the checklist'
-              : 'Start the checklist'}
-        </ButtonLink>
-      </Card>
+      <ChecklistCard engine={e} />
       <DetailsCard engine={e} />
       {!e.archivedAt && (
         <Card title="Assign break-in program" aria-label="Assign break-in program">

@@ -1,21 +1,12 @@
-import { useEffect, useState } from 'react';
+import { useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import { readShow } from '../../../shared/review/board-filter';
 import type { BoardShow } from '../../../shared/review/review.schema';
 import { useBoard } from '../../features/board/api';
 import { BOARD_PAGE, RunsBoard } from '../../features/board/components/runs-board';
 import { LoadError, Loading } from '../../components/ui/status-message';
+import { useSettled } from '../../lib/use-settled';
 import { StaffOnly } from './staff-only';
-
-/** The search asks the server once typing pauses, not on every key. */
-function useSettled(value: string, ms = 250) {
-  const [settled, setSettled] = useState(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setSettled(value), ms);
-    return () => clearTimeout(timer);
-  }, [value, ms]);
-  return settled;
-}
 
 function RunsPage() {
   const [params, setParams] = useSearchParams();

@@ -64,10 +64,34 @@ function EnginesCard({ vessel }: { vessel: VesselView }) {
   );
 }
 
+/** The vessel's facts, edited in place. */
+function VesselRecordCard({ vessel: v }: { vessel: VesselView }) {
+  const [editing, setEditing] = useState(false);
+  return (
+    <Card title="Vessel">
+      {editing ? (
+        <VesselForm
+          vessel={v}
+          onSaved={() => setEditing(false)}
+          onCancel={() => setEditing(false)}
+        />
+      ) : (
+        <div className="flex flex-col gap-4">
+          <VesselFacts vessel={v} />
+          {!v.archivedAt && (
+            <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>
+              Edit vessel
+            </Button>
+          )}
+        </div>
+      )}
+    </Card>
+  );
+}
+
 function VesselPage({ id }: { id: string }) {
   const vessel = useVessel(id);
   const archive = useArchiveVessel();
-  const [editing, setEditing] = useState(false);
   if (vessel.isPending) return <Loading label="Loading the vessel…" />;
   if (vessel.isError)
     return <LoadError error={vessel.error} what="the vessel" onRetry={() => vessel.refetch()} />;
@@ -85,24 +109,7 @@ function VesselPage({ id }: { id: string }) {
         <h1 className="text-3xl font-bold">{v.name}</h1>
         <ArchivedPill archivedAt={v.archivedAt} />
       </div>
-      <Card title="Vessel">
-        {editing ? (
-          <VesselForm
-            vessel={v}
-            onSaved={() => setEditing(false)}
-            onCancel={() => setEditing(false)}
-          />
-        ) : (
-          <div className="flex flex-col gap-4">
-            <VesselFacts vessel={v} />
-            {!v.archivedAt && (
-              <Button variant="secondary" className="self-start" onClick={() => setEditing(true)}>
-                Edit vessel
-              </Button>
-            )}
-          </div>
-        )}
-      </Card>
+      <VesselRecordCard vessel={v} />
       <EnginesCard vessel={v} />
       <Card title="Skippers">
         <SkipperLinks vessel={v} />

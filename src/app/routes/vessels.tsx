@@ -1,37 +1,25 @@
 import { useEffect, useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
-import {
-  VESSEL_TYPES,
-  vesselTypeLabel,
-  type ListStatus,
-} from '../../../shared/vessels/vessel.schema';
+import type { ListStatus } from '../../../shared/vessels/vessel.schema';
 import { useSkippers, useVesselList } from '../../features/vessels/api';
 import { useEngineList } from '../../features/vessels/engine-api';
 import { EnginesList } from '../../features/vessels/components/engines-list';
-import { ListControls } from '../../features/vessels/components/list-controls';
 import { SkippersList } from '../../features/vessels/components/skippers-list';
 import {
-  checklistStateOf,
-  type ChecklistState,
-} from '../../features/vessels/components/status-pills';
+  ChecklistFilter,
+  ListControls,
+  VesselTypeFilter,
+} from '../../features/vessels/components/list-controls';
+import { checklistStateOf } from '../../features/vessels/components/status-pills';
 import { VesselForm } from '../../features/vessels/components/vessel-form';
 import { VesselsList } from '../../features/vessels/components/vessels-list';
 import { Button } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
 import { cx } from '../../components/ui/cx';
-import { SelectField, TextField } from '../../components/ui/field';
+import { TextField } from '../../components/ui/field';
 import { LoadError, Loading } from '../../components/ui/status-message';
+import { useSettled } from '../../lib/use-settled';
 import { StaffOnly } from './staff-only';
-
-/** The search box answers while typing, without a request per keystroke. */
-function useDebounced(value: string, ms = 250) {
-  const [settled, setSettled] = useState(value);
-  useEffect(() => {
-    const timer = setTimeout(() => setSettled(value), ms);
-    return () => clearTimeout(timer);
-  }, [value, ms]);
-  return settled;
-}
 
 /** Each list starts with its own search and filters: a vessel's home port means nothing to an engine. */
 type View = 'vessels' | 'engines' | 'skippers';
@@ -118,7 +106,7 @@ function useListState() {
     ['archived', 'all'].includes(params.get('status') ?? '') ? params.get('status') : 'active'
   ) as ListStatus;
   const [q, setQ] = useState(params.get('q') ?? '');
-  const settledQ = useDebounced(q);
+  const settledQ = useSettled(q);
   const set = (key: string, value: string) =>
     setParams(
       (p) => {
@@ -163,25 +151,9 @@ function Filters({ list }: { list: ReturnType<typeof useListState> }) {
       onStatus={(s) => set('status', s === 'active' ? '' : s)}
     >
       {view === 'vessels' ? (
-        <SelectField label="Type" value={extra} onChange={(e) => set('filter', e.target.value)}>
-          <option value="">Any type</option>
-          {VESSEL_TYPES.map((t) => (
-            <option key={t} value={t}>
-              {vesselTypeLabel[t]}
-            </option>
-          ))}
-        </SelectField>
+        <VesselTypeFilter value={extra} onChange={(type) => set('filter', type)} />
       ) : (
-        <SelectField
-          label="Checklist"
-          value={extra}
-          onChange={(e) => set('filter', e.target.value as ChecklistState)}
-        >
-          <option value="">Any state</option>
-          <option value="not-started">Not started</option>
-          <option value="in-progress">Started, not completed</option>
-          <option value="completed">Completed</option>
-        </SelectField>
+        <ChecklistFilter value={extra} onChange={(state) => set('filter', state)} />
       )}
     </ListControls>
   );

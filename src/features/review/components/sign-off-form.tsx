@@ -72,6 +72,27 @@ function DecisionChoices({
   );
 }
 
+/** The decision form and sending it; a refusal the fields do not show goes in the alert. */
+function useSignOffForm(runId: string, onDecided?: (result: DecisionView) => void) {
+  const signOff = useSignOff(runId, onDecided);
+  const [refusal, setRefusal] = useState<string | null>(null);
+  const form = useForm<SignOffFormValues, unknown, SignOffInput>({
+    resolver: zodResolver(SignOffInputSchema),
+    defaultValues: { decision: 'confirm', comments: '' },
+  });
+  const decision = useWatch({ control: form.control, name: 'decision' });
+  const onSubmit = form.handleSubmit((input) => {
+    setRefusal(null);
+    signOff.mutate(input, {
+      onError: (error) => {
+        const messages = serverErrorMessages(error, form.setError, ['decision', 'comments']);
+        setRefusal(messages.join(' ') || null);
+      },
+    });
+  });
+  return { signOff, form, decision, refusal, onSubmit };
+}
+
 /** The technician's decision on a submitted run. */
 export function SignOffForm({
   runId,
@@ -82,26 +103,8 @@ export function SignOffForm({
   verdict: Verdict;
   onDecided?: (result: DecisionView) => void;
 }) {
-  const signOff = useSignOff(runId, onDecided);
-  const [refusal, setRefusal] = useState<string | null>(null);
-  const { register, control, handleSubmit, setError, formState } = useForm<
-    SignOffFormValues,
-    unknown,
-    SignOffInput
-  >({
-    resolver: zodResolver(SignOffInputSchema),
-    defaultValues: { decision: 'confirm', comments: '' },
-  });
-  const decision = useWatch({ control, name: 'decision' });
-  const onSubmit = handleSubmit((input) => {
-    setRefusal(null);
-    signOff.mutate(input, {
-      onError: (error) => {
-        const messages = serverErrorMessages(error, setError, ['decision', 'comments']);
-        setRefusal(messages.join(' ') || null);
-      },
-    });
-  });
+  const { signOff, form, decision, refusal, onSubmit } = useSignOffForm(runId, onDecided);
+  const { register, formState } = form;
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Sign-off">
       {refusal && <Alert title="Not saved">{refusal}</Alert>}

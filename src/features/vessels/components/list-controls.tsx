@@ -1,6 +1,11 @@
 import type { ReactNode } from 'react';
-import type { ListStatus } from '../../../../shared/vessels/vessel.schema';
+import {
+  VESSEL_TYPES,
+  vesselTypeLabel,
+  type ListStatus,
+} from '../../../../shared/vessels/vessel.schema';
 import { SelectField, TextField } from '../../../components/ui/field';
+import type { ChecklistState } from './status-pills';
 
 /** Search and filters above a list. Changes apply as they are made; nothing to submit. */
 export function ListControls({
@@ -44,5 +49,47 @@ export function ListControls({
       </SelectField>
       {children}
     </search>
+  );
+}
+
+/** The vessel list's extra filter: one type, or any. */
+export function VesselTypeFilter({
+  value,
+  onChange,
+}: {
+  value: string;
+  onChange: (type: string) => void;
+}) {
+  return (
+    <SelectField label="Type" value={value} onChange={(e) => onChange(e.target.value)}>
+      <option value="">Any type</option>
+      {VESSEL_TYPES.map((t) => (
+        <option key={t} value={t}>
+          {vesselTypeLabel[t]}
+        </option>
+      ))}
+    </SelectField>
+  );
+}
+
+/** The engine list's extra filter: how far the commissioning checklist has got, or any. */
+export function ChecklistFilter({
+  value,
+  onChange,
+}: {
+  value: string;
+  onChange: (state: ChecklistState | '') => void;
+}) {
+  return (
+    <SelectField
+      label="Checklist"
+      value={value}
+      onChange={(e) => onChange(e.target.value as ChecklistState | '')}
+    >
+      <option value="">Any state</option>
+      <option value="not-started">Not started</option>
+      <option value="in-progress">Started, not completed</option>
+      <option value="completed">Completed</option>
+    </SelectField>
   );
 }

@@ -37,6 +37,30 @@ function VesselLinks({ vessels }: { vessels: Row['vessels'] }) {
   );
 }
 
+function SkipperCells({ skipper: s }: { skipper: Row }) {
+  return (
+    <>
+      <Td className="font-bold">{s.name}</Td>
+      <Td className="break-all">{s.email}</Td>
+      <Td>
+        <VesselLinks vessels={s.vessels} />
+      </Td>
+    </>
+  );
+}
+
+function SkipperCard({ skipper: s }: { skipper: Row }) {
+  return (
+    <Card level={3} title={s.name}>
+      <p className="break-all text-muted">{s.email}</p>
+      <p>
+        <span className="text-muted">Vessels </span>
+        <VesselLinks vessels={s.vessels} />
+      </p>
+    </Card>
+  );
+}
+
 /** The workshop's skippers and the vessels each may log; linking is done on the vessel's page. */
 export function SkippersList({
   skippers,
@@ -72,24 +96,8 @@ export function SkippersList({
       sort={sort}
       sortBy={sortBy}
       setSort={setSort}
-      cells={(s) => (
-        <>
-          <Td className="font-bold">{s.name}</Td>
-          <Td className="break-all">{s.email}</Td>
-          <Td>
-            <VesselLinks vessels={s.vessels} />
-          </Td>
-        </>
-      )}
-      card={(s) => (
-        <Card level={3} title={s.name}>
-          <p className="break-all text-muted">{s.email}</p>
-          <p>
-            <span className="text-muted">Vessels </span>
-            <VesselLinks vessels={s.vessels} />
-          </p>
-        </Card>
-      )}
+      cells={(s) => <SkipperCells skipper={s} />}
+      card={(s) => <SkipperCard skipper={s} />}
     />
   );
 }
