@@ -1,9 +1,9 @@
 import { useLiveQuery } from 'dexie-react-hooks';
 import { db, type SyncState } from '../../lib/db';
 import { outboxCounts, type OutboxCounts } from './outbox';
-import { syncNow, useSyncStatus } from './sync-engine';
+import { syncNow } from './sync-engine';
 
-export { useSyncStatus };
+export { useSyncStatus } from './sync-status';
 
 /** How much waits to be sent, and how much the server refused; live from the device database. */
 export const useOutboxCounts = (): OutboxCounts | undefined => useLiveQuery(outboxCounts, []);

@@ -4,9 +4,7 @@ import { db } from '../../lib/db';
 import { nextPushBatch, recordResults, rejectAll } from './outbox';
 import { uploadPendingPhotos, isFinalRefusal } from './photos';
 import { pullAll } from './pull';
-import { getSyncStatus, setSyncStatus } from './sync-status';
-
-export { useSyncStatus } from './sync-status';
+import { setSyncStatus } from './sync-status';
 
 const ONLINE_INTERVAL_MS = 60_000;
 const BACKOFF_BASE_MS = 2_000;
@@ -108,5 +106,3 @@ export function startSync(): () => void {
     clearTimeout(retryTimer);
   };
 }
-
-export const syncStatusNow = getSyncStatus;
