@@ -6,7 +6,7 @@ import { THROTTLE_WORDS } from './format';
 import type { ReadingDetails } from './reading-details.schema';
 import { buildEntries, type PadEngine } from './reading-entry';
 
-export interface PadSeed {
+export interface PadSetup {
   engines: PadEngine[];
   lastRpm: number | null;
   lastThrottle: ThrottlePosition | null;
@@ -29,7 +29,7 @@ function usePadMessages() {
 }
 
 /** What is typed and chosen on the pad; every change clears what the pad last said. */
-function usePadEntry({ engines, lastRpm, lastThrottle }: PadSeed, settle: () => void) {
+function usePadEntry({ engines, lastRpm, lastThrottle }: PadSetup, settle: () => void) {
   const [target, setTarget] = useState<string>(engines.length > 1 ? 'both' : engines[0].engineId);
   const [mode, setMode] = useState<'rpm' | 'hz'>('rpm');
   const [text, setText] = useState(lastRpm === null ? '' : String(lastRpm));
@@ -68,9 +68,9 @@ const loggedWords = (rpms: number[], throttle: ThrottlePosition, chosen: PadEngi
   `Logged ${rpms.join(' and ')} rpm at ${THROTTLE_WORDS[throttle]} for ${chosen.map((e) => e.label).join(' and ')}.`;
 
 /** The pad's state: what is typed, for which engine, and logging it all or nothing. */
-export function useReadingPad(seed: PadSeed) {
+export function useReadingPad(setup: PadSetup) {
   const messages = usePadMessages();
-  const entry = usePadEntry(seed, messages.settle);
+  const entry = usePadEntry(setup, messages.settle);
   const [details, setDetails] = useState<ReadingDetails | null>(null);
   const [gpsOn, setGpsOn] = useState(false);
   const gps = useGpsSpeed(gpsOn);
@@ -91,7 +91,7 @@ export function useReadingPad(seed: PadSeed) {
     if (result.kind === 'confirm') return messages.setConfirm(result.message);
     setSaving(true);
     try {
-      await seed.onLog(result.entries, details?.photo ?? undefined);
+      await setup.onLog(result.entries, details?.photo ?? undefined);
       messages.setLogged(loggedWords(result.rpms, throttle!, chosen));
       setDetails(null);
       messages.setConfirm(null);
@@ -108,7 +108,7 @@ export function useReadingPad(seed: PadSeed) {
 
   return {
     ...entry,
-    engines: seed.engines,
+    engines: setup.engines,
     details,
     gpsOn,
     gps,

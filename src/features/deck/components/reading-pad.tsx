@@ -3,7 +3,7 @@ import { THROTTLE_POSITIONS } from '../../../../shared/programs/throttle';
 import { Button } from '../../../components/ui/button';
 import { THROTTLE_LABEL, THROTTLE_WORDS } from '../format';
 import { EMPTY_DETAILS } from '../reading-details.schema';
-import { useReadingPad, type PadSeed, type ReadingPadState } from '../use-reading-pad';
+import { useReadingPad, type PadSetup, type ReadingPadState } from '../use-reading-pad';
 import { DetailsSummary } from './details-summary';
 import { ChoiceChips } from './keypad';
 import { ENTRY_FIELDS, SpeedEntry } from './speed-entry';
@@ -22,8 +22,8 @@ const modeOptions = [
 ] as const;
 
 /** Log a reading in two taps: the speed (stepper or keypad, prefilled from the last one), then Log. */
-export function ReadingPad(seed: PadSeed) {
-  const pad = useReadingPad(seed);
+export function ReadingPad(setup: PadSetup) {
+  const pad = useReadingPad(setup);
   const id = useId();
   const [detailsOpen, setDetailsOpen] = useState(false);
   const { engines, problem } = pad;
