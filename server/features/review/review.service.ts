@@ -7,6 +7,7 @@ import { runTrail } from './run-trail.js';
 import { Certificate } from '../signoff/certificate.entity.js';
 import { RunReview } from '../signoff/run-review.entity.js';
 import { loadRunContext, type RunContext } from '../runs/run-context.js';
+import { commissionedEngineOf } from '../runs/run-engine.js';
 import { RunFiguresCache } from '../runs/run-figures.js';
 
 const iso = (d: Date | null) => d?.toISOString() ?? null;
@@ -38,7 +39,7 @@ export class ReviewService {
         hin: ctx.vessel.hin,
         homePort: ctx.vessel.homePort,
       },
-      engine: engineView(ctx),
+      engine: commissionedEngineOf(ctx.engine),
       skippers: ctx.skippers.map(({ id, name }) => ({ id, name })),
       account: {
         verdict: ctx.account.verdict,
@@ -74,20 +75,6 @@ function runPart({ run }: RunContext) {
     lastEventAt: run.lastEventAt,
     clockSkewMs: skew,
     clockSkewFlag: skew !== null && Math.abs(skew) > CLOCK_SKEW_FLAG_MS,
-  };
-}
-
-function engineView({ engine }: RunContext) {
-  return {
-    id: engine.id,
-    position: engine.position,
-    maker: engine.maker,
-    model: engine.model,
-    serialNumber: engine.serialNumber,
-    ratedRpmMin: engine.ratedRpmMin,
-    ratedRpmMax: engine.ratedRpmMax,
-    hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
-    commissionedOn: engine.commissionedOn,
   };
 }
 

@@ -10,6 +10,7 @@ import { Program } from '../programs/program.entity.js';
 import { Engine } from '../vessels/engine.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import { visibleRun, visibleRunsWhere } from './run-access.js';
+import { runEngineOf } from './run-engine.js';
 import { Run } from './run.entity.js';
 import { reserveChangeSeq } from '../../lib/change-seq.js';
 import type { RunDetail, RunView } from '../../../shared/runs/run-view.js';
@@ -137,15 +138,7 @@ function toRunView(run: Run, vesselName: string): RunView {
     id: run.id,
     state: run.state,
     vessel: { id: run.vesselId, name: vesselName },
-    engine: {
-      id: engine.id,
-      position: engine.position,
-      maker: engine.maker,
-      model: engine.model,
-      serialNumber: engine.serialNumber,
-      ratedRpmMin: engine.ratedRpmMin,
-      ratedRpmMax: engine.ratedRpmMax,
-    },
+    engine: runEngineOf(engine),
     programId: run.programId,
     programName: run.program.name,
     phaseCount: run.program.phases.length,

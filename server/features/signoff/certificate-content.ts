@@ -2,6 +2,7 @@ import type { PhaseChart } from '../../../shared/review/chart-series.js';
 import type { CertificateContent } from '../../../shared/review/certificate-content.js';
 import { calendarDateIn } from '../../../shared/review/first-service.js';
 import type { RunContext } from '../runs/run-context.js';
+import { commissionedEngineOf } from '../runs/run-engine.js';
 
 const minutes = (ms: number) => Math.round(ms / 600) / 100;
 const isoOrNull = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
@@ -38,16 +39,8 @@ export function certificateContent(
 }
 
 function enginePart({ engine }: RunContext): CertificateContent['engine'] {
-  return {
-    position: engine.position,
-    maker: engine.maker,
-    model: engine.model,
-    serialNumber: engine.serialNumber,
-    ratedRpmMin: engine.ratedRpmMin,
-    ratedRpmMax: engine.ratedRpmMax,
-    hourMeterAtCommissioning: engine.hourMeterAtCommissioning,
-    commissionedOn: engine.commissionedOn,
-  };
+  const { id: _id, ...facts } = commissionedEngineOf(engine);
+  return facts;
 }
 
 /** Each phase as it stands: its band, the times logged, its verdict and the reasons for it. */
