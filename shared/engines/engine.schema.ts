@@ -160,23 +160,9 @@ export type EngineFormInput = z.input<typeof EngineInputSchema>;
 /** Every field of the engine form, in the order the form shows them. */
 export const ENGINE_FIELDS = Object.keys(EngineFieldsSchema.shape) as Array<keyof EngineInput>;
 
-export const positionLabel: Record<EnginePosition, string> = {
-  single: 'Single',
-  port: 'Port',
-  starboard: 'Starboard',
-  centre: 'Centre',
-  inboard: 'Inboard',
-};
-
-export const installationLabel: Record<Installation, string> = {
-  outboard: 'Outboard',
-  inboard: 'Inboard (shaft)',
-  sterndrive: 'Sterndrive',
-};
-
-export const tachSourceLabel: Record<TachSource, string> = {
-  'charging-coil': 'Charging coil (under the flywheel)',
-  'belt-alternator': 'Belt-driven alternator',
-  ignition: 'Ignition pulses',
-  none: 'No tachometer signal',
-};
+/** Older names of the words in engine-words.ts, kept for the modules that still use them. */
+export {
+  INSTALLATION_WORDS as installationLabel,
+  POSITION_WORDS as positionLabel,
+  TACH_SOURCE_WORDS as tachSourceLabel,
+} from './engine-words';

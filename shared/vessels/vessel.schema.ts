@@ -41,15 +41,8 @@ export const VesselInputSchema = z.object({
 });
 export type VesselInput = z.infer<typeof VesselInputSchema>;
 
-export const vesselTypeLabel: Record<VesselType, string> = {
-  workboat: 'Workboat',
-  'sport-fishing': 'Sport-fishing boat',
-  'sailing-yacht': 'Sailing yacht',
-  'motor-yacht': 'Motor yacht',
-  rib: 'RIB',
-  runabout: 'Runabout',
-  other: 'Other',
-};
+/** The older name of VESSEL_TYPE_WORDS (vessel-words.ts). */
+export { VESSEL_TYPE_WORDS as vesselTypeLabel } from './vessel-words';
 
 /** Which records a list shows: the ones in use, the archived ones, or both. */
 export const ListStatusSchema = z.enum(['active', 'archived', 'all'], {
