@@ -30,6 +30,7 @@ import { reviewRouter } from './features/review/review.router.js';
 import { ReviewService } from './features/review/review.service.js';
 import { RunSummaries } from './features/review/run-summaries.js';
 import { hasOpenRun } from './features/runs/run-access.js';
+import { RunCancellation } from './features/runs/cancel-run.js';
 import { runsRouter } from './features/runs/runs.router.js';
 import { RunsService } from './features/runs/runs.service.js';
 import { CertificateStore } from './features/signoff/certificate-store.js';
@@ -116,7 +117,7 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   api.use(syncRouter(new SyncService(db, clock, vessels)));
   api.use(workshopsRouter(db));
   api.use(programsRouter(new ProgramsService(db, clock)));
-  api.use(runsRouter(new RunsService(db)));
+  api.use(runsRouter(new RunsService(db), new RunCancellation(db, clock)));
   const summaries = new RunSummaries(db);
   api.use(boardRouter(new BoardService(db, summaries, clock)));
   api.use(reviewRouter(new ReviewService(db, clock), new ReadingsService(db)));

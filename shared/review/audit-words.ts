@@ -9,4 +9,6 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   'mail-sent': 'E-mail sent',
   'mail-failed': 'E-mail not sent',
   'service-reminder-sent': 'Service reminder sent',
+  'run-cancelled': 'Run cancelled',
+  'checklist-reopened': 'Checklist reopened',
 };

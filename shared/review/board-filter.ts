@@ -22,7 +22,7 @@ const haystack = (run: BoardRow) =>
 export function filterRuns(runs: readonly BoardRow[], show: BoardShow, q: string): BoardRow[] {
   const words = q.trim().toLowerCase().split(/\s+/).filter(Boolean);
   return runs.filter((run) => {
-    if (show === 'action' && !needsAction(run.group)) return false;
+    if (show === 'action' && (run.state === 'cancelled' || !needsAction(run.group))) return false;
     if (show !== 'action' && show !== 'all' && run.state !== show) return false;
     if (words.length === 0) return true;
     const text = haystack(run);

@@ -68,6 +68,7 @@ export const BoardQuerySchema = z.object({
     .default('action'),
   q: z
     .string({ error: 'The search text (q) must be text.' })
+  'cancelled',
     .trim()
     .max(80, { error: 'The search text (q) can have at most 80 characters.' })
     .default(''),

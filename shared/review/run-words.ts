@@ -8,6 +8,7 @@ export const RUN_STATE_WORDS: Record<RunState, string> = {
   submitted: 'Submitted for review',
   'signed-off': 'Signed off',
   returned: 'Returned to skipper',
+  cancelled: 'Cancelled',
 };
 
 /** The computation's verdict in words; never shown by colour alone. */

@@ -11,7 +11,9 @@ export type AuditAction =
   | 'certificate-downloaded'
   | 'mail-sent'
   | 'mail-failed'
-  | 'service-reminder-sent';
+  | 'service-reminder-sent'
+  | 'run-cancelled'
+  | 'checklist-reopened';
 
 export interface AuditInput {
   workshopId: string;

@@ -30,6 +30,7 @@ describe('the runs board', () => {
       submitted: 1,
       'signed-off': 1,
       returned: 0,
+      cancelled: 0,
     });
     expect(total).toBe(5);
     expect(runs.map((r) => `${r.vessel.name}/${r.group}`)).toEqual([

@@ -126,6 +126,8 @@ function serviceOf(row: BoardSqlRow, today: string): FirstServiceView | null {
 /** What the board points out on a run, in the order the flags are shown. */
 function flagsOf(row: BoardSqlRow, firstService: FirstServiceView | null): BoardFlagCode[] {
   const flags: BoardFlagCode[] = [];
+  // A cancelled run was a mistake: nothing on it asks anything of the workshop.
+  if (row.state === 'cancelled') return flags;
   if ((row.breachCount ?? 0) > 0) flags.push('breach');
   if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS)
     flags.push('clock-skew');

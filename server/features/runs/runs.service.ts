@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
+import { programSuits, type Suitability } from '../../../shared/programs/program-suits.js';
 import { checkProgramForEngine, resolvePhaseBand } from '../../../shared/programs/resolve-band.js';
 import { OPEN_RUN_STATES, type AssignProgramInput } from '../../../shared/runs/run.schema.js';
 import { ConflictError, ValidationError } from '../../lib/errors.js';
@@ -21,7 +22,7 @@ export class RunsService {
   /** Freezes a copy of the program, with its bands resolved for this engine, into a new planned run. */
   async assign(user: SessionUser, input: AssignProgramInput): Promise<Run> {
     return this.dataSource.transaction(async (manager) => {
-      const { engine, program } = await findAssignable(manager, user, input);
+      const { engine, program, suitability } = await findAssignable(manager, user, input);
       await this.refuseSecondOpenRun(manager, engine.id);
       const bands: Record<string, RpmBand> = {};
       for (const phase of program.definition.phases)
@@ -52,7 +53,7 @@ export class RunsService {
         action: 'run-assigned',
         actor: { id: user.id, name: user.name },
         at: new Date(),
-        detail: program.definition.name,
+        detail: assignedDetail(program.definition.name, suitability, input.reason),
       });
       return run;
     });
@@ -92,12 +93,15 @@ export class RunsService {
   }
 }
 
-/** The engine and program named, each in the user's workshop, the program current and fitting the engine. */
+/**
+ * The engine and program named, each in the user's workshop, the program current and fitting the
+ * engine; a program written for another kind of engine only with a reason.
+ */
 async function findAssignable(
   manager: EntityManager,
   user: SessionUser,
   input: AssignProgramInput,
-): Promise<{ engine: Engine; program: Program }> {
+): Promise<{ engine: Engine; program: Program; suitability: Suitability }> {
   const engine = await manager
     .getRepository(Engine)
     .findOne({ where: { id: input.engineId, workshopId: user.workshopId } });
@@ -122,7 +126,29 @@ async function findAssignable(
       check.issues.map((i) => ({ field: `program.${i.field}`, message: i.message })),
       'The program does not fit this engine.',
     );
-  return { engine, program };
+  return { engine, program, suitability: suitabilityWithReason(program, engine, input.reason) };
+}
+
+/** Whether the program suits the engine; one that does not is refused unless a reason is given. */
+function suitabilityWithReason(program: Program, engine: Engine, reason?: string): Suitability {
+  const suitability = programSuits(program.definition, engine);
+  if (!suitability.suits && !reason)
+    throw new ValidationError(
+      [
+        {
+          field: 'reason',
+          message: `"${program.name}" does not suit this engine: ${suitability.reasons.join(' ')} Give the reason (reason) for assigning it anyway.`,
+        },
+      ],
+      'The program does not suit this engine; a reason is needed to assign it.',
+    );
+  return suitability;
+}
+
+/** The trail's words for an assignment: the program, and why when it does not suit the engine. */
+function assignedDetail(name: string, suitability: Suitability, reason?: string): string {
+  if (suitability.suits) return reason ? `${name}. Reason: ${reason}` : name;
+  return `${name}, which does not suit this engine: ${suitability.reasons.join(' ')} Reason: ${reason}`;
 }
 
 /** Everything a device needs to run and judge the break-in offline: the view plus the frozen program and bands. */

@@ -22,6 +22,7 @@ const STATE_TONE: Record<RunState, 'solid' | 'outline' | 'quiet'> = {
   returned: 'outline',
   planned: 'quiet',
   'signed-off': 'quiet',
+  cancelled: 'quiet',
 };
 
 const STATE_MARK: Record<RunState, string> = {
@@ -30,6 +31,7 @@ const STATE_MARK: Record<RunState, string> = {
   returned: '↩',
   planned: '○',
   'signed-off': '✓',
+  cancelled: '✕',
 };
 
 export function RunStatePill({ state }: { state: RunState }) {

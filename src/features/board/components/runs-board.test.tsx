@@ -34,7 +34,7 @@ const row = (over: Partial<BoardRow> & Pick<BoardRow, 'id' | 'state' | 'group'>)
 
 const board: BoardView = {
   today: '2026-12-01',
-  counts: { planned: 0, 'under-way': 1, submitted: 1, 'signed-off': 0, returned: 0 },
+  counts: { planned: 0, 'under-way': 1, submitted: 1, 'signed-off': 0, returned: 0, cancelled: 0 },
   actionCount: 1,
   total: 2,
   matching: 150,

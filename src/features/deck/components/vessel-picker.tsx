@@ -10,6 +10,7 @@ const STATE_WORDS = {
   submitted: 'Submitted',
   'signed-off': 'Signed off',
   returned: 'Returned',
+  cancelled: 'Cancelled',
 } as const;
 
 /** The vessels stored on this device, each with its engines' runs, to pick one for the deck. */
