@@ -11,4 +11,6 @@ export interface ChecklistView {
   updatedBy: { id: string; name: string } | null;
   completedAt: string | null;
   completedBy: { id: string; name: string } | null;
+  /** The latest time a completed checklist was reopened, and why; null if it never was. */
+  reopened: { at: string; byName: string; reason: string } | null;
 }

@@ -113,3 +113,13 @@ export type CheckEntry = z.infer<typeof CheckEntrySchema>;
 
 /** A checklist with nothing filled in yet. */
 export const emptyChecklist = (): ChecklistInput => ChecklistInputSchema.parse({});
+
+/** POST /api/engines/:id/checklist/reopen: why the handover record is opened again. */
+export const ReopenChecklistInputSchema = z.object({
+  reason: z
+    .string({ error: 'Give the reason (reason) for reopening the checklist.' })
+    .trim()
+    .min(1, { error: 'Give the reason (reason) for reopening the checklist.' })
+    .max(500, { error: 'The reason (reason) can have at most 500 characters.' }),
+});
+export type ReopenChecklistInput = z.infer<typeof ReopenChecklistInputSchema>;

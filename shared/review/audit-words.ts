@@ -10,5 +10,6 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   'mail-failed': 'E-mail not sent',
   'service-reminder-sent': 'Service reminder sent',
   'run-cancelled': 'Run cancelled',
+  'checklist-completed': 'Checklist completed',
   'checklist-reopened': 'Checklist reopened',
 };

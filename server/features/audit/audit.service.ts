@@ -13,6 +13,7 @@ export type AuditAction =
   | 'mail-failed'
   | 'service-reminder-sent'
   | 'run-cancelled'
+  | 'checklist-completed'
   | 'checklist-reopened';
 
 export interface AuditInput {

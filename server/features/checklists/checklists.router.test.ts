@@ -76,7 +76,7 @@ describe('commissioning checklist', () => {
     expect(again.body.checklist.entries.charging.chemistry).toBeNull();
   });
 
-  it('refuses to complete with every unfinished item named, and changes nothing', async () => {
+  it('refuses to complete with every unfinished item named, keeping what was entered as the draft', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
     const id = await engineId('NV60-26-00418');
     const res = await tech.post(`/api/engines/${id}/checklist/complete`).send({
@@ -85,7 +85,9 @@ describe('commissioning checklist', () => {
       charging: {},
     });
     expect(res.status).toBe(400);
-    expect(res.body.detail).toBe('The checklist cannot be completed yet: 2 items need attention.');
+    expect(res.body.detail).toBe(
+      'The checklist cannot be completed yet: 2 items need attention. What you entered is saved as a draft.',
+    );
     expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual([
       'charging',
       'checks.leaks',
@@ -97,7 +99,11 @@ describe('commissioning checklist', () => {
       .getRepository(CommissioningChecklist)
       .findOneByOrFail({ engineId: id });
     expect(row.completedAt).toBeNull();
-    expect(row.entries.checks.leaks.result).toBeNull();
+    expect(row.entries.checks.leaks).toEqual({ result: 'fail', note: 'Weep at the fuel filter' });
+    const reloaded = (await tech.get(`/api/engines/${id}/checklist`)).body.checklist;
+    expect(reloaded).toMatchObject({ completedAt: null, updatedBy: { name: 'Ivo Brandt' } });
+    expect(reloaded.entries.fullThrottle).toMatchObject({ rpm: 5600, speedKn: 30 });
+    expect(reloaded.entries.checks.leaks.note).toBe('Weep at the fuel filter');
   });
 
   it('completes, recording who and when, and is then kept as the handover record', async () => {
@@ -114,6 +120,7 @@ describe('commissioning checklist', () => {
     const change = await manager.put(`/api/engines/${id}/checklist`).send(partDone);
     expect(change.status).toBe(409);
     expect(change.body.detail).toContain('completed at handover');
+    expect(change.body.detail).toContain('Reopen it, giving the reason');
     const engine = await manager.get(`/api/engines/${id}`);
     expect(engine.body.engine.checklist).toEqual({ completedAt: '2026-11-20T14:30:00.000Z' });
   });

@@ -1,6 +1,9 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { ChecklistInputSchema } from '../../../shared/checklists/checklist.schema.js';
+import {
+  ChecklistInputSchema,
+  ReopenChecklistInputSchema,
+} from '../../../shared/checklists/checklist.schema.js';
 import { currentUser, requireRole } from '../../middleware/require-role.js';
 import { validate } from '../../middleware/validate.js';
 import type { ChecklistsService } from './checklists.service.js';
@@ -41,6 +44,17 @@ export function checklistsRouter(service: ChecklistsService): Router {
     async (req, res) => {
       res.json({
         checklist: await service.complete(currentUser(res), String(req.params.id), req.body),
+      });
+    },
+  );
+
+  router.post(
+    '/engines/:id/checklist/reopen',
+    staff,
+    validate({ params: EngineParamsSchema, body: ReopenChecklistInputSchema }),
+    async (req, res) => {
+      res.json({
+        checklist: await service.reopen(currentUser(res), String(req.params.id), req.body),
       });
     },
   );

@@ -1,22 +1,26 @@
 import { randomUUID } from 'node:crypto';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import {
-  ChecklistInputSchema,
-  emptyChecklist,
-  type ChecklistInput,
+import type {
+  ChecklistInput,
+  ReopenChecklistInput,
 } from '../../../shared/checklists/checklist.schema.js';
 import type { ChecklistView } from '../../../shared/checklists/checklist-view.js';
 import {
   completionProblems,
   evaluateChecklist,
 } from '../../../shared/checklists/evaluate-checklist.js';
+import type { FieldError } from '../../../shared/problem/problem.schema.js';
 import { systemClock, type Clock } from '../../lib/clock.js';
 import { ConflictError, ValidationError } from '../../lib/errors.js';
-import { User } from '../users/user.entity.js';
+import { recordAudit, type AuditAction } from '../audit/audit.service.js';
 import type { Engine } from '../vessels/engine.entity.js';
 import { findVisibleEngine } from '../vessels/vessel-access.js';
 import { CommissioningChecklist } from './checklist.entity.js';
+import { checklistView } from './checklist-views.js';
+
+/** A completion either closes the checklist or leaves it as a draft with what is missing. */
+type Completion = { view: ChecklistView } | { problems: FieldError[] };
 
 export class ChecklistsService {
   constructor(
@@ -30,7 +34,7 @@ export class ChecklistsService {
     const row = await this.dataSource
       .getRepository(CommissioningChecklist)
       .findOne({ where: { engineId } });
-    return this.view(this.dataSource.manager, engine, row);
+    return checklistView(this.dataSource.manager, engine, row);
   }
 
   /** Saves a part-done checklist; nothing is required until it is completed. */
@@ -38,44 +42,71 @@ export class ChecklistsService {
     return this.dataSource.transaction(async (manager) => {
       const { engine, row } = await this.writable(manager, user, engineId);
       const saved = await this.store(manager, user, engine, row, input, false);
-      return this.view(manager, engine, saved);
+      return checklistView(manager, engine, saved);
     });
   }
 
   /**
-   * Saves and completes in one step, recording who and when. Refused with every unfinished or
-   * failed item named when the checklist is not ready; then nothing at all is changed.
+   * Completes the checklist, recording who and when. When it is not ready, everything entered is
+   * still saved as the draft (a technician at the dock must not lose a page of measurements to
+   * one open item) and the refusal names every unfinished or failed item.
    */
   async complete(
     user: SessionUser,
     engineId: string,
     input: ChecklistInput,
   ): Promise<ChecklistView> {
-    return this.dataSource.transaction(async (manager) => {
+    const outcome = await this.dataSource.transaction(async (manager): Promise<Completion> => {
       const { engine, row } = await this.writable(manager, user, engineId);
       const evaluation = evaluateChecklist(input, engine);
-      if (!evaluation.summary.readyToComplete) {
-        const problems = completionProblems(evaluation);
-        throw new ValidationError(
-          problems,
-          `The checklist cannot be completed yet: ${problems.length} ${problems.length === 1 ? 'item needs' : 'items need'} attention.`,
-        );
-      }
-      const saved = await this.store(manager, user, engine, row, input, true);
-      return this.view(manager, engine, saved);
+      const ready = evaluation.summary.readyToComplete;
+      const saved = await this.store(manager, user, engine, row, input, ready);
+      if (!ready) return { problems: completionProblems(evaluation) };
+      await this.trail(manager, user, engine, 'checklist-completed', '');
+      return { view: await checklistView(manager, engine, saved) };
+    });
+    if ('view' in outcome) return outcome.view;
+    const { problems } = outcome;
+    throw new ValidationError(
+      problems,
+      `The checklist cannot be completed yet: ${problems.length} ${problems.length === 1 ? 'item needs' : 'items need'} attention. What you entered is saved as a draft.`,
+    );
+  }
+
+  /** Opens a completed checklist again, with the reason in the engine's trail, to be edited and completed anew. */
+  async reopen(
+    user: SessionUser,
+    engineId: string,
+    input: ReopenChecklistInput,
+  ): Promise<ChecklistView> {
+    return this.dataSource.transaction(async (manager) => {
+      const engine = await this.changeable(manager, user, engineId);
+      const repo = manager.getRepository(CommissioningChecklist);
+      const row = await repo.findOne({ where: { engineId } });
+      if (!row?.completedAt)
+        throw new ConflictError('This checklist is not completed, so there is nothing to reopen.');
+      Object.assign(row, { completedAt: null, completedById: null, updatedById: user.id });
+      const saved = await repo.save(row);
+      await this.trail(manager, user, engine, 'checklist-reopened', input.reason);
+      return checklistView(manager, engine, saved);
     });
   }
 
-  private async writable(manager: EntityManager, user: SessionUser, engineId: string) {
+  private async changeable(manager: EntityManager, user: SessionUser, engineId: string) {
     const engine = await findVisibleEngine(manager, user, engineId);
     if (engine.archivedAt)
       throw new ConflictError('This engine is archived. Restore it before changing its checklist.');
+    return engine;
+  }
+
+  private async writable(manager: EntityManager, user: SessionUser, engineId: string) {
+    const engine = await this.changeable(manager, user, engineId);
     const row = await manager
       .getRepository(CommissioningChecklist)
       .findOne({ where: { engineId } });
     if (row?.completedAt) {
       throw new ConflictError(
-        'This checklist was completed at handover and is kept as the record of it; it can no longer be changed.',
+        'This checklist was completed at handover and is kept as the record of it. Reopen it, giving the reason, to change it.',
       );
     }
     return { engine, row };
@@ -102,50 +133,23 @@ export class ChecklistsService {
     return manager.getRepository(CommissioningChecklist).save(saved);
   }
 
-  private async view(
+  /** Completions and reopenings go into the engine's trail, so every handover record stays visible. */
+  private trail(
     manager: EntityManager,
+    user: SessionUser,
     engine: Engine,
-    row: CommissioningChecklist | null,
-  ): Promise<ChecklistView> {
-    if (!row) {
-      const entries = emptyChecklist();
-      const base = {
-        id: null,
-        engineId: engine.id,
-        entries,
-        updatedAt: null,
-        updatedBy: null,
-        completedAt: null,
-        completedBy: null,
-      };
-      return { ...base, evaluation: evaluateChecklist(entries, engine) };
-    }
-    // Stored entries go back through the schema, so fields added later get their defaults.
-    const entries = ChecklistInputSchema.parse(row.entries);
-    const people = await this.names(manager, [row.updatedById, row.completedById]);
-    return {
-      id: row.id,
-      engineId: engine.id,
-      entries,
-      // A completed checklist keeps the judgement made at handover; an open one follows the engine record.
-      evaluation: row.completedAt ? row.evaluation : evaluateChecklist(entries, engine),
-      updatedAt: row.updatedAt.toISOString(),
-      updatedBy: people(row.updatedById),
-      completedAt: row.completedAt?.toISOString() ?? null,
-      completedBy: people(row.completedById),
-    };
-  }
-
-  private async names(manager: EntityManager, ids: Array<string | null>) {
-    const wanted = ids.filter((id): id is string => Boolean(id));
-    const users = wanted.length
-      ? await manager
-          .getRepository(User)
-          .find({ select: { id: true, name: true }, where: { id: In(wanted) } })
-      : [];
-    const nameOf = new Map(users.map((u) => [u.id, u.name]));
-    return (id: string | null) =>
-      id ? { id, name: nameOf.get(id) ?? 'a former member of staff' } : null;
+    action: Extract<AuditAction, 'checklist-completed' | 'checklist-reopened'>,
+    detail: string,
+  ) {
+    return recordAudit(manager, {
+      workshopId: engine.workshopId,
+      recordType: 'engine',
+      recordId: engine.id,
+      action,
+      actor: { id: user.id, name: user.name },
+      at: this.clock.now(),
+      detail,
+    });
   }
 }
 

@@ -1,5 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ChecklistInput } from '../../../shared/checklists/checklist.schema';
+import type {
+  ChecklistInput,
+  ReopenChecklistInput,
+} from '../../../shared/checklists/checklist.schema';
 import type { ChecklistView } from '../../../shared/checklists/checklist-view';
 import { api } from '../../lib/api-client';
 
@@ -8,6 +11,7 @@ export const checklistKeys = {
   detail: (engineId: string) => [...checklistKeys.all, 'detail', engineId] as const,
   save: () => [...checklistKeys.all, 'save'] as const,
   complete: () => [...checklistKeys.all, 'complete'] as const,
+  reopen: () => [...checklistKeys.all, 'reopen'] as const,
 };
 
 export const checklistQueries = {
@@ -42,6 +46,12 @@ function useChecklistWrite(engineId: string, action: 'save' | 'complete', onChan
       queryClient.setQueryData(checklistKeys.detail(engineId), data);
       onChanged?.();
     },
+    // A refused completion still saved the entries as the draft: show it as stored.
+    onError: () => {
+      if (action !== 'complete') return;
+      void queryClient.invalidateQueries({ queryKey: checklistKeys.detail(engineId) });
+      onChanged?.();
+    },
   });
 }
 
@@ -49,3 +59,17 @@ export const useSaveChecklist = (engineId: string, onChanged?: () => void) =>
   useChecklistWrite(engineId, 'save', onChanged);
 export const useCompleteChecklist = (engineId: string, onChanged?: () => void) =>
   useChecklistWrite(engineId, 'complete', onChanged);
+
+/** Opens a completed checklist again; the reason goes into the engine's trail. */
+export function useReopenChecklist(engineId: string, onChanged?: () => void) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationKey: checklistKeys.reopen(),
+    mutationFn: (input: ReopenChecklistInput) =>
+      api.post<{ checklist: ChecklistView }>(`/api/engines/${engineId}/checklist/reopen`, input),
+    onSuccess: (data) => {
+      queryClient.setQueryData(checklistKeys.detail(engineId), data);
+      onChanged?.();
+    },
+  });
+}

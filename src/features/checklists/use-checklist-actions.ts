@@ -5,6 +5,7 @@ import type {
   ChecklistInput,
 } from '../../../shared/checklists/checklist.schema';
 import type { ChecklistView } from '../../../shared/checklists/checklist-view';
+import { isApiError } from '../../lib/api-client';
 import { serverErrorMessages } from '../../lib/form-errors';
 import { useCompleteChecklist, useSaveChecklist } from './api';
 
@@ -32,6 +33,16 @@ const FIELD_PATHS = [
 export type ChecklistFormApi = UseFormReturn<ChecklistFormInput, unknown, ChecklistInput>;
 
 /**
+ * What the alert says about a refusal. A refused completion names its items and says the entries
+ * were kept as the draft (the server's own words), so the technician knows nothing was lost.
+ */
+function refusalLines(completing: boolean, error: Error, form: ChecklistFormApi): string[] {
+  const lines = serverErrorMessages(error, form.setError, FIELD_PATHS);
+  const itemRefusal = completing && isApiError(error) && error.fieldErrors.length > 0;
+  return itemRefusal && !lines.includes(error.message) ? [error.message, ...lines] : lines;
+}
+
+/**
  * Saving for later and completing: each sends the form, then keeps what the server stored or
  * shows what it refused.
  */
@@ -53,7 +64,7 @@ export function useChecklistActions(
           form.reset(stored.entries);
           setNotice(done);
         },
-        onError: (error) => setRefusals(serverErrorMessages(error, form.setError, FIELD_PATHS)),
+        onError: (error) => setRefusals(refusalLines(action === complete, error, form)),
       });
     });
   return {

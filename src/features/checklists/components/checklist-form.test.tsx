@@ -7,6 +7,7 @@ import { evaluateChecklist } from '../../../../shared/checklists/evaluate-checkl
 import type { ChecklistEngine } from '../../../../shared/checklists/evaluation';
 import { problem, stubFetch } from '../../../test/fetch-stub';
 import { renderPage } from '../../../test/render';
+import { useChecklist } from '../api';
 import { ChecklistForm } from './checklist-form';
 
 afterEach(() => {
@@ -34,6 +35,7 @@ const unsaved: ChecklistView = {
   updatedBy: null,
   completedAt: null,
   completedBy: null,
+  reopened: null,
 };
 const verdictOf = (region: string) =>
   within(screen.getByRole('region', { name: region }))
@@ -72,7 +74,7 @@ describe('ChecklistForm', () => {
       [`POST /api/engines/${engineId}/checklist/complete`]: problem(
         400,
         'The request has invalid fields',
-        'The checklist cannot be completed yet: 2 items need attention.',
+        'The checklist cannot be completed yet: 2 items need attention. What you entered is saved as a draft.',
         completionProblems,
       ),
     });
@@ -91,6 +93,9 @@ describe('ChecklistForm', () => {
       'Charging voltage at cruising RPM: not finished. Choose the battery chemistry.',
     );
     expect(alert).toHaveTextContent('Kill switch and lanyard: not finished.');
+    expect(alert).toHaveTextContent('What you entered is saved as a draft.');
+    // Nothing typed is lost: the form still holds it.
+    expect(screen.getByLabelText('Voltage at the battery (V)')).toHaveValue('14,4');
     expect(calls[0].body).toMatchObject({
       charging: { measuredV: 14.4, chemistry: null },
       checks: { steering: { result: 'pass' }, leaks: { result: null } },
@@ -105,5 +110,60 @@ describe('ChecklistForm', () => {
     await user.click(screen.getByRole('button', { name: 'Save for later' }));
     expect(await screen.findByText('Full-throttle RPM must be a number.')).toBeInTheDocument();
     expect(fetchMock).not.toHaveBeenCalled();
+  });
+});
+
+/** The checklist as the page shows it: read from the query cache, so a reopen shows at once. */
+function ChecklistFromCache() {
+  const checklist = useChecklist(engineId);
+  return checklist.data ? <ChecklistForm checklist={checklist.data} engine={engine} /> : null;
+}
+
+describe('reopening a completed checklist', () => {
+  const completed: ChecklistView = {
+    ...unsaved,
+    id: 'a9b8c7d6-0000-4000-8000-000000000001',
+    updatedAt: '2026-11-20T14:30:00.000Z',
+    updatedBy: { id: 'u1', name: 'Maren Holt' },
+    completedAt: '2026-11-20T14:30:00.000Z',
+    completedBy: { id: 'u1', name: 'Maren Holt' },
+  };
+  const reason = 'Regulator replaced: the charging check is measured again.';
+
+  it('asks for the reason, then lets the checklist be edited and completed again', async () => {
+    const { calls } = stubFetch({
+      [`GET /api/engines/${engineId}/checklist`]: { status: 200, body: { checklist: completed } },
+      [`POST /api/engines/${engineId}/checklist/reopen`]: {
+        status: 200,
+        body: {
+          checklist: {
+            ...completed,
+            completedAt: null,
+            completedBy: null,
+            reopened: { at: '2026-11-22T09:00:00.000Z', byName: 'Ivo Brandt', reason },
+          },
+        },
+      },
+    });
+    const user = userEvent.setup();
+    renderPage(<ChecklistFromCache />);
+
+    await user.click(await screen.findByRole('button', { name: 'Reopen the checklist' }));
+    expect(screen.queryByRole('button', { name: 'Complete checklist' })).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Reopen checklist' }));
+    expect(
+      await screen.findByText('Give the reason (reason) for reopening the checklist.'),
+    ).toBeInTheDocument();
+    expect(calls.filter((c) => c.method === 'POST')).toHaveLength(0);
+
+    await user.type(screen.getByLabelText('Reason for reopening'), reason);
+    await user.click(screen.getByRole('button', { name: 'Reopen checklist' }));
+
+    expect(await screen.findByRole('button', { name: 'Complete checklist' })).toBeInTheDocument();
+    expect(
+      screen.getByText(`Reopened by Ivo Brandt on 22 Nov 2026: ${reason}`),
+    ).toBeInTheDocument();
+    expect(screen.getByLabelText('Voltage at the battery (V)')).toBeEnabled();
+    expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ reason });
   });
 });

@@ -17,6 +17,7 @@ import { useChecklistActions, type ChecklistActions } from '../use-checklist-act
 import { CheckItems } from './check-items';
 import { ChecklistSummaryBar } from './checklist-summary';
 import { MeasuredItems } from './measured-fields';
+import { ReopenChecklist, ReopenedNote } from './reopen-checklist';
 
 interface ChecklistFormProps {
   checklist: ChecklistView;
@@ -51,7 +52,7 @@ function CompletedNote({ checklist }: { checklist: ChecklistView }) {
   return (
     <p className="rounded-md border-4 border-ink p-3 font-bold">
       Completed by {checklist.completedBy?.name} on {formatDate(checklist.completedAt!)}. It is kept
-      as the record of the handover.
+      as the record of the handover; reopen it, giving the reason, to change it.
     </p>
   );
 }
@@ -94,34 +95,38 @@ export function ChecklistForm({ checklist, engine, onChanged }: ChecklistFormPro
   const fields = { register: form.register, errors: form.formState.errors, disabled: completed };
 
   return (
-    <form
-      noValidate
-      onSubmit={actions.onSave}
-      className="flex flex-col gap-5"
-      aria-label="Commissioning checklist"
-    >
-      <ChecklistSummaryBar summary={evaluation.summary} />
-      {completed && <CompletedNote checklist={checklist} />}
-      <h2 className="text-xl font-bold">Measured at handover</h2>
-      <MeasuredItems fields={fields} evaluation={evaluation} engine={engine} />
-      <h2 className="text-xl font-bold">Rigging and safety</h2>
-      <CheckItems {...fields} evaluations={evaluation.items} />
-      <label className="flex flex-col gap-1 font-semibold">
-        Notes for the record
-        <textarea
-          rows={3}
-          disabled={completed}
-          className="rounded-md border-2 border-line bg-surface p-3 font-normal text-ink"
-          {...form.register('notes')}
-        />
-      </label>
-      <Outcome actions={actions} />
-      {!completed && <ChecklistButtons actions={actions} />}
-      {checklist.updatedBy && !completed && (
-        <p className="text-sm text-muted">
-          Last saved by {checklist.updatedBy.name}, {formatDate(checklist.updatedAt!)}.
-        </p>
-      )}
-    </form>
+    <div className="flex flex-col gap-5">
+      <form
+        noValidate
+        onSubmit={actions.onSave}
+        className="flex flex-col gap-5"
+        aria-label="Commissioning checklist"
+      >
+        <ChecklistSummaryBar summary={evaluation.summary} />
+        {completed && <CompletedNote checklist={checklist} />}
+        <ReopenedNote checklist={checklist} />
+        <h2 className="text-xl font-bold">Measured at handover</h2>
+        <MeasuredItems fields={fields} evaluation={evaluation} engine={engine} />
+        <h2 className="text-xl font-bold">Rigging and safety</h2>
+        <CheckItems {...fields} evaluations={evaluation.items} />
+        <label className="flex flex-col gap-1 font-semibold">
+          Notes for the record
+          <textarea
+            rows={3}
+            disabled={completed}
+            className="rounded-md border-2 border-line bg-surface p-3 font-normal text-ink"
+            {...form.register('notes')}
+          />
+        </label>
+        <Outcome actions={actions} />
+        {!completed && <ChecklistButtons actions={actions} />}
+        {checklist.updatedBy && !completed && (
+          <p className="text-sm text-muted">
+            Last saved by {checklist.updatedBy.name}, {formatDate(checklist.updatedAt!)}.
+          </p>
+        )}
+      </form>
+      {completed && <ReopenChecklist checklist={checklist} onChanged={onChanged} />}
+    </div>
   );
 }
