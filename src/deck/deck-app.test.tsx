@@ -4,7 +4,7 @@ import userEvent from '@testing-library/user-event';
 import { db } from '../lib/db';
 import { problem, stubFetch } from '../test/fetch-stub';
 import { testUser } from '../test/render';
-import { clearDevice } from '../features/deck/components/deck-test-db';
+import { clearDevice, store } from '../features/deck/components/deck-test-db';
 import { testRun, testVessel, VESSEL_ID } from '../features/deck/test-fixtures';
 import { DeckApp } from './deck-app';
 import { deckPageFor } from './deck-pages';
@@ -40,6 +40,8 @@ describe('the deck app', () => {
     stubFetch({ 'GET /api/auth/me': { status: 200, body: { user: skipper } } });
     await db.runs.put(port);
     await db.vessels.put(testVessel([port]));
+    // Past the workshop's dock run, so the skipper has a phase to log and "On deck" is offered.
+    await store(port, [{ kind: 'phase-advance', at: Date.now(), phaseId: 'below-half' } as never]);
     const user = userEvent.setup();
     render(<DeckApp />);
     const link = await screen.findByRole('link', { name: /Go on deck with/ });

@@ -88,7 +88,7 @@ export function DeckApp() {
     <PageFrame header={<DeckHeader user={session.user} />}>
       <PageBoundary resetKey={pathname}>
         {page.page === 'home' ? (
-          <DeckHome />
+          <DeckHome user={session.user} />
         ) : (
           <DeckVesselPage vesselId={page.vesselId} user={session.user} />
         )}

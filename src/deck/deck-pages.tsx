@@ -1,9 +1,10 @@
 import { DeckScreen } from '../features/deck/components/deck-screen';
 import { VesselPicker } from '../features/deck/components/vessel-picker';
 import type { SessionUser } from '../../shared/auth/auth.schema';
+import { requestSync } from '../features/sync/api';
 
 /** /deck: pick the vessel to run. Reads only the device, so it opens at sea. */
-export function DeckHome() {
+export function DeckHome({ user }: { user: SessionUser }) {
   return (
     <div className="flex flex-col gap-4">
       <title>On deck · Ringseat</title>
@@ -12,14 +13,22 @@ export function DeckHome() {
         Choose the boat you are running. Everything here is stored on this device and works with no
         signal.
       </p>
-      <VesselPicker />
+      <VesselPicker role={user.role} />
     </div>
   );
 }
 
 /** /deck/:vesselId: the run screen for one vessel's engines. */
 export function DeckVesselPage({ vesselId, user }: { vesselId: string; user: SessionUser }) {
-  return <DeckScreen key={vesselId} vesselId={vesselId} role={user.role} />;
+  // A submit waits in the outbox like everything else; ask for a sync now rather than in a minute.
+  return (
+    <DeckScreen
+      key={vesselId}
+      vesselId={vesselId}
+      role={user.role}
+      onSubmitted={() => void requestSync()}
+    />
+  );
 }
 
 /** Which deck page a path shows; null for an address the deck does not have. */

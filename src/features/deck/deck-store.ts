@@ -1,9 +1,9 @@
 import Dexie from 'dexie';
-import { ReadingSchema, type Reading } from '../../../shared/runs/run-event.schema';
+import { ReadingSchema, VOIDABLE_KINDS, type Reading } from '../../../shared/runs/run-event.schema';
 import type { EventRecord, PhotoRecord, RingseatDb } from '../../lib/db';
 import { addEvents, DeckInputError, type RunRef } from './device-events';
 
-/* What the deck logs on a run: readings (with a photo), phase advances and rule alerts. */
+/* What the deck logs on a run: readings (with a photo), phase advances, rule alerts and voids. */
 
 export interface ReadingEntry extends RunRef {
   reading: Omit<Reading, 'id' | 'at' | 'kind' | 'engineId'>;
@@ -123,5 +123,39 @@ export async function logAlert(
       nowMs,
     );
     return true;
+  });
+}
+
+/**
+ * Takes back one of this run's readings or notes with a reason (the void rule in
+ * shared/runs/voids.ts): a new entry naming the old one, which stays stored and shown.
+ */
+export async function voidEntry(
+  database: RingseatDb,
+  run: RunRef,
+  entry: { targetId: string; reason: string },
+  nowMs: number,
+): Promise<EventRecord> {
+  return database.transaction('rw', database.events, async () => {
+    const target = await database.events.get(entry.targetId);
+    if (!target || target.runId !== run.runId)
+      throw new DeckInputError('targetId', 'The entry to void is not an entry of this run.');
+    if (!(VOIDABLE_KINDS as readonly string[]).includes(target.kind))
+      throw new DeckInputError('targetId', 'Only a reading or a note can be voided.');
+    const voided = await database.events
+      .where('runId')
+      .equals(run.runId)
+      .filter(
+        (e) =>
+          e.event.kind === 'void' && e.event.targetId === entry.targetId && e.sync !== 'rejected',
+      )
+      .count();
+    if (voided > 0) throw new DeckInputError('targetId', 'This entry is already voided.');
+    const [record] = await addEvents(
+      database,
+      [{ runId: run.runId, event: { kind: 'void', engineId: run.engineId, ...entry } }],
+      nowMs,
+    );
+    return record;
   });
 }

@@ -2,11 +2,12 @@ import type { Role } from '../../../shared/auth/auth.schema';
 import type { ResolvedPhase } from '../../../shared/programs/resolve-band';
 import { orderEvents } from '../../../shared/runs/event-order';
 import { liveTimerState, type LiveTimerState } from '../../../shared/runs/live-timer';
-import { accountOrdered } from '../../../shared/runs/run-accounting';
+import { accountOrdered, type RunAccount } from '../../../shared/runs/run-accounting';
 import type { Reading, RunEvent } from '../../../shared/runs/run-event.schema';
+import { withoutVoided } from '../../../shared/runs/voids';
 import type { RunRecord } from '../../lib/db';
 import { activeAlerts, upcomingReminders, type DeckAlert, type DeckReminder } from './deck-alerts';
-import { runPhases } from './run-phases';
+import { isLoggable, runPhases, sentBackIds } from './run-phases';
 
 export type PhaseStatus = 'done' | 'current' | 'waiting-for-workshop' | 'to-come';
 
@@ -14,6 +15,8 @@ export interface PhaseRow {
   phase: ResolvedPhase;
   status: PhaseStatus;
   progress: number;
+  /** After a return: 'again' for a phase sent back to be run again, 'stands' for the others. */
+  rerun: 'again' | 'stands' | null;
 }
 
 /** Everything one engine's panel shows, derived from stored events and `now` only. */
@@ -22,7 +25,10 @@ export interface EngineSnapshot {
   engineId: string;
   phases: ResolvedPhase[];
   live: LiveTimerState;
+  /** Every phase's account so far (voided entries left out), as the review will count it. */
+  account: RunAccount;
   phase: ResolvedPhase | null;
+  /** The phase to move on to; after a return, only a later phase that was sent back. */
   nextPhase: ResolvedPhase | null;
   /** The current phase has its time in band: the app proposes the next one. */
   phaseComplete: boolean;
@@ -36,14 +42,20 @@ export interface EngineSnapshot {
   loggedAlerts: Array<{ code: string; at: number }>;
 }
 
-function phaseRows(phases: ResolvedPhase[], progress: number[], currentIndex: number): PhaseRow[] {
+function phaseRows(
+  phases: ResolvedPhase[],
+  progress: number[],
+  currentIndex: number,
+  sentBack: Set<string>,
+): PhaseRow[] {
   return phases.map((phase, i) => {
     const done = progress[i] >= 1;
     let status: PhaseStatus = 'to-come';
     if (done) status = 'done';
     else if (i === currentIndex) status = 'current';
     else if (phase.performedBy === 'workshop') status = 'waiting-for-workshop';
-    return { phase, status, progress: progress[i] };
+    const rerun = sentBack.size === 0 ? null : sentBack.has(phase.id) ? 'again' : 'stands';
+    return { phase, status, progress: progress[i], rerun };
   });
 }
 
@@ -51,6 +63,15 @@ function lastOf<K extends RunEvent['kind']>(ordered: readonly RunEvent[], kind: 
   for (let i = ordered.length - 1; i >= 0; i--)
     if (ordered[i].kind === kind) return ordered[i] as Extract<RunEvent, { kind: K }>;
   return null;
+}
+
+/** The phase after `index`; after a return only the phases sent back are run, in program order. */
+function phaseAfter(phases: ResolvedPhase[], index: number): ResolvedPhase | null {
+  if (index < 0) return null;
+  const sentBack = sentBackIds(phases);
+  const later = phases.slice(index + 1);
+  if (sentBack.size === 0) return later[0] ?? null;
+  return later.find((p) => sentBack.has(p.id)) ?? null;
 }
 
 export function engineSnapshot(
@@ -61,7 +82,8 @@ export function engineSnapshot(
 ): EngineSnapshot {
   const engineId = run.engine.id;
   const phases = runPhases(run);
-  const ordered = orderEvents(events, engineId);
+  // What was voided is left out everywhere: the timer, the last reading, the reminders.
+  const ordered = withoutVoided(orderEvents(events, engineId));
   const live = liveTimerState(ordered, phases, nowMs);
   const index = live.currentPhaseIndex;
   const phase = index >= 0 ? phases[index] : null;
@@ -72,14 +94,16 @@ export function engineSnapshot(
     engineId,
     phases,
     live,
+    account,
     phase,
-    nextPhase: index >= 0 && index + 1 < phases.length ? phases[index + 1] : null,
+    nextPhase: phaseAfter(phases, index),
     phaseComplete,
     waitingForWorkshop: phase?.performedBy === 'workshop' && role === 'skipper' && !phaseComplete,
     rows: phaseRows(
       phases,
       account.phases.map((p) => p.progressShare),
       index,
+      sentBackIds(phases),
     ),
     alerts: index >= 0 ? activeAlerts(account.phases[index].reasons, live.nowMs) : [],
     reminders: upcomingReminders(ordered, phase, live.nowMs),
@@ -96,3 +120,15 @@ export const alertsToLog = (snapshot: EngineSnapshot): DeckAlert[] =>
         (logged) => logged.code === alert.code && logged.at >= alert.sinceMs,
       ),
   );
+
+/**
+ * Whether this user has something to do on deck with this engine: log the current phase, move
+ * on to a next phase they run, or (every phase done) finish and submit.
+ */
+export function canWorkOn(snapshot: EngineSnapshot, role: Role): boolean {
+  if (!isLoggable(snapshot.run) || snapshot.phase === null) return false;
+  if (role !== 'skipper') return true;
+  if (snapshot.waitingForWorkshop) return false;
+  if (!snapshot.phaseComplete) return true;
+  return snapshot.nextPhase === null || snapshot.nextPhase.performedBy !== 'workshop';
+}

@@ -61,3 +61,14 @@ export const rpmRangeText = (band: { rpmMin: number; rpmMax: number }) =>
   `${Math.round(band.rpmMin)}–${Math.round(band.rpmMax)} rpm`;
 
 export const capitalise = (text: string) => (text ? text[0].toUpperCase() + text.slice(1) : text);
+
+/** "14:05": a moment of today's outing, in the phone's own zone. */
+export const timeText = (ms: number) =>
+  new Date(ms).toLocaleTimeString('en-GB', { hour: '2-digit', minute: '2-digit' });
+
+/** "12 May 2026" from an ISO time; the raw text when it is not one. */
+export function dateText(iso: string): string {
+  const date = new Date(iso);
+  if (Number.isNaN(date.getTime())) return iso;
+  return date.toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
+}

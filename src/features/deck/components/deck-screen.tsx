@@ -8,25 +8,42 @@ import {
   useVesselDeck,
   type VesselDeck,
 } from '../device-records';
+import { deckEntries } from '../deck-entries';
 import type { EngineSnapshot } from '../engine-snapshot';
 import { isLoggable } from '../run-phases';
 import { engineLabel, refOf, startChoice, useDeckState } from '../use-deck-state';
 import { EnginePanel } from './engine-panel';
+import { FinishSection, SubmissionNotices, submittable } from './finish-section';
 import { OutingBar } from './outing-bar';
 import { OutingStart } from './outing-start';
 import { ReadingPad } from './reading-pad';
 import '../deck.css';
 
+interface DeckScreenProps {
+  vesselId: string;
+  role: Role;
+  /** Something went into the outbox that the workshop waits for (a submit): send it soon. */
+  onSubmitted?: () => void;
+}
+
 /** The run screen of one vessel, read from the device only. */
-export function DeckScreen({ vesselId, role }: { vesselId: string; role: Role }) {
+export function DeckScreen({ vesselId, role, onSubmitted }: DeckScreenProps) {
   const deck = useVesselDeck(vesselId);
   if (deck === undefined) return <p role="status">Opening the deck…</p>;
   if (deck === null) return <NotOnDevice />;
-  return <VesselDeckView deck={deck} role={role} />;
+  return <VesselDeckView deck={deck} role={role} onSubmitted={onSubmitted} />;
 }
 
 /** One panel per engine side by side, the reading pad, and the outing controls. */
-function VesselDeckView({ deck, role }: { deck: VesselDeck; role: Role }) {
+function VesselDeckView({
+  deck,
+  role,
+  onSubmitted,
+}: {
+  deck: VesselDeck;
+  role: Role;
+  onSubmitted?: () => void;
+}) {
   const { now, snapshots, outing, inOuting, running, wakeLock, padEngines, last } = useDeckState(
     deck,
     role,
@@ -40,13 +57,14 @@ function VesselDeckView({ deck, role }: { deck: VesselDeck; role: Role }) {
       <h1 className="text-2xl font-bold">
         {deck.name} <span className="font-normal text-muted">on deck</span>
       </h1>
+      <SubmissionNotices deck={deck} />
       {!outing && snapshots.length > 0 && <StartSection deck={deck} snapshots={snapshots} />}
       {snapshots.length === 0 && (
         <p>
           No break-in run is assigned to this vessel&rsquo;s engines yet. The workshop assigns one.
         </p>
       )}
-      <EngineGrid shown={shown} role={role} />
+      <EngineGrid deck={deck} shown={shown} role={role} />
       {padEngines.length > 0 && (
         <ReadingPad
           key={padEngines.map((e) => `${e.engineId}:${e.phaseId}`).join()}
@@ -68,6 +86,13 @@ function VesselDeckView({ deck, role }: { deck: VesselDeck; role: Role }) {
           onChange={(c) =>
             change.mutate({ outingId: outing.id, runs: inOuting.map(refOf), change: c })
           }
+        />
+      )}
+      {!outing && (
+        <FinishSection
+          deck={deck}
+          engines={submittable(deck, snapshots)}
+          onSubmitted={onSubmitted}
         />
       )}
     </div>
@@ -93,7 +118,15 @@ function StartSection({ deck, snapshots }: { deck: VesselDeck; snapshots: Engine
 }
 
 /** The engines side by side (two columns for a twin), each able to move to its next phase. */
-function EngineGrid({ shown, role }: { shown: EngineSnapshot[]; role: Role }) {
+function EngineGrid({
+  deck,
+  shown,
+  role,
+}: {
+  deck: VesselDeck;
+  shown: EngineSnapshot[];
+  role: Role;
+}) {
   const advance = useAdvancePhase();
   return (
     <div className={shown.length > 1 ? 'grid grid-cols-2 gap-2 sm:gap-4' : 'grid gap-3'}>
@@ -104,6 +137,12 @@ function EngineGrid({ shown, role }: { shown: EngineSnapshot[]; role: Role }) {
           label={engineLabel(s.run)}
           role={role}
           advancing={advance.isPending}
+          entries={deckEntries(
+            deck.events[s.run.id] ?? [],
+            s.engineId,
+            deck.own,
+            deck.refusedVoids,
+          )}
           wide={shown.length === 1}
           onAdvance={(phaseId) => advance.mutate({ run: refOf(s), phaseId })}
         />

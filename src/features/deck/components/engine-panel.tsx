@@ -1,5 +1,6 @@
 import { Button } from '../../../components/ui/button';
 import { cx } from '../../../components/ui/cx';
+import type { DeckEntry } from '../deck-entries';
 import type { EngineSnapshot } from '../engine-snapshot';
 import {
   ceilingText,
@@ -13,6 +14,9 @@ import { AlertList } from './alert-list';
 import { BandState, type DeckState } from './band-state';
 import { PhaseList } from './phase-list';
 import { ProgressBar } from './progress-bar';
+import { RecentEntries } from './recent-entries';
+import { ReturnedNotice } from './returned-notice';
+import { RunPageLink } from './run-page-link';
 
 export function deckState(snapshot: EngineSnapshot): DeckState {
   if (snapshot.waitingForWorkshop) return 'waiting';
@@ -27,6 +31,8 @@ interface EnginePanelProps {
   role: 'skipper' | 'technician' | 'manager';
   onAdvance: (phaseId: string) => void;
   advancing: boolean;
+  /** The engine's readings and notes, newest first, to void a slip. */
+  entries: DeckEntry[];
   /** The only engine on screen: figures get the full width. */
   wide?: boolean;
 }
@@ -38,9 +44,11 @@ export function EnginePanel({
   role,
   onAdvance,
   advancing,
+  entries,
   wide = false,
 }: EnginePanelProps) {
-  const { live } = snapshot;
+  const { live, run, phases } = snapshot;
+  const phaseName = (id: string) => phases.find((p) => p.id === id)?.name ?? id;
   const headingId = `engine-${snapshot.engineId}`;
   return (
     <section
@@ -50,6 +58,7 @@ export function EnginePanel({
       <h2 id={headingId} className="truncate text-lg font-extrabold uppercase tracking-wide">
         {label}
       </h2>
+      <ReturnedNotice run={run} phases={phases} label={label} />
       <PhaseHeading snapshot={snapshot} />
       <BandState state={deckState(snapshot)} engineLabel={label} wide={wide} />
       <AlertList alerts={snapshot.alerts} reminders={snapshot.reminders} />
@@ -62,6 +71,14 @@ export function EnginePanel({
       <LastReading snapshot={snapshot} />
       <NextPhase snapshot={snapshot} role={role} onAdvance={onAdvance} advancing={advancing} />
       <PhaseList rows={snapshot.rows} label={label} />
+      <RecentEntries
+        entries={entries}
+        run={{ runId: run.id, engineId: snapshot.engineId }}
+        role={role}
+        label={label}
+        phaseName={phaseName}
+      />
+      <RunPageLink run={run} />
     </section>
   );
 }
@@ -140,13 +157,15 @@ function NextPhase({
   role,
   onAdvance,
   advancing,
-}: Omit<EnginePanelProps, 'label' | 'wide'>) {
+}: Omit<EnginePanelProps, 'label' | 'wide' | 'entries'>) {
   const { phaseComplete, nextPhase } = snapshot;
   if (!phaseComplete) return null;
   if (!nextPhase)
     return (
       <p className="rounded-md border-2 border-ink p-2 font-semibold">
-        Every phase has its time in band. The workshop can now review the run.
+        {snapshot.account.verdict === 'complete'
+          ? 'Every phase has its time in band. End the outing, then finish and submit the run.'
+          : 'No phase left to move on to. End the outing, then finish and submit the run.'}
       </p>
     );
   if (nextPhase.performedBy === 'workshop' && role === 'skipper') {

@@ -8,6 +8,9 @@ const STATUS: Record<PhaseStatus, { mark: string; word: string }> = {
   'to-come': { mark: '○', word: 'to come' },
 };
 
+/** After a return: which phases the workshop sent back, and which keep what they had. */
+const RERUN_WORDS = { again: 'to run again', stands: 'stands' } as const;
+
 /** Every phase of the run with its state in words and a mark: one tap away from the panel. */
 export function PhaseList({ rows, label }: { rows: PhaseRow[]; label: string }) {
   return (
@@ -16,7 +19,7 @@ export function PhaseList({ rows, label }: { rows: PhaseRow[]; label: string }) 
         All phases ({rows.length})
       </summary>
       <ol aria-label={`${label}: phases`} className="flex flex-col gap-1">
-        {rows.map(({ phase, status, progress }) => (
+        {rows.map(({ phase, status, progress, rerun }) => (
           <li key={phase.id} className="flex gap-2">
             <span aria-hidden="true" className="w-4 shrink-0 text-center">
               {STATUS[status].mark}
@@ -28,6 +31,7 @@ export function PhaseList({ rows, label }: { rows: PhaseRow[]; label: string }) 
               {' · '}
               <span className="font-semibold">{STATUS[status].word}</span>
               {status === 'current' && <span className="figures"> {percent(progress)}</span>}
+              {rerun && <span className="font-semibold"> · {RERUN_WORDS[rerun]}</span>}
             </span>
           </li>
         ))}

@@ -1,21 +1,27 @@
 import { Card } from '../../../components/ui/card';
 import { DeckButtonLink } from './deck-link';
 import { Pill } from '../../../components/ui/pill';
+import type { Role } from '../../../../shared/auth/auth.schema';
 import { useDeckVessels, type DeckVessel } from '../device-records';
+import { ENGINE_STATE_WORDS, pickerEngines, type EngineRunState } from '../picker-state';
+import { useNow } from '../device';
+import { RunPageLink } from './run-page-link';
 import { capitalise } from '../format';
 
-const STATE_WORDS = {
-  planned: 'Planned',
-  'under-way': 'Under way',
-  submitted: 'Submitted',
-  'signed-off': 'Signed off',
-  returned: 'Returned',
-  cancelled: 'Cancelled',
-} as const;
+const STATE_TONE: Record<EngineRunState, 'solid' | 'outline' | 'quiet'> = {
+  'workshop-waiting': 'quiet',
+  'workshop-yours': 'solid',
+  'with-skipper': 'outline',
+  submitted: 'quiet',
+  returned: 'solid',
+  'signed-off': 'quiet',
+};
 
 /** The vessels stored on this device, each with its engines' runs, to pick one for the deck. */
-export function VesselPicker() {
+export function VesselPicker({ role }: { role: Role }) {
   const vessels = useDeckVessels();
+  // States follow the clock only loosely (a phase running out): once a minute is plenty.
+  const now = useNow(60_000);
   if (vessels === undefined) return <p role="status">Opening the logbook on this device…</p>;
   if (vessels.length === 0) {
     return (
@@ -29,15 +35,19 @@ export function VesselPicker() {
     <ul className="flex flex-col gap-4" aria-label="Vessels on this device">
       {vessels.map((vessel) => (
         <li key={vessel.id}>
-          <VesselEntry vessel={vessel} />
+          <VesselEntry vessel={vessel} role={role} now={now} />
         </li>
       ))}
     </ul>
   );
 }
 
-function VesselEntry({ vessel }: { vessel: DeckVessel }) {
+function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; now: number }) {
   const engines = vessel.vessel?.engines ?? [];
+  const states = pickerEngines(vessel, role, now);
+  const stateOf = (runId: string) => states.find((s) => s.run.id === runId)!.state;
+  // An outing under way needs the deck to end it, whatever else there is to do.
+  const onDeck = vessel.outing !== null || states.some((s) => s.workable);
   const withoutRun = engines.filter((e) => !vessel.runs.some((r) => r.engine.id === e.id));
   return (
     <Card title={vessel.name}>
@@ -55,24 +65,30 @@ function VesselEntry({ vessel }: { vessel: DeckVessel }) {
             <p className="text-sm">
               {run.programName} · {run.phaseCount} phases
             </p>
-            <Pill tone={run.state === 'under-way' ? 'outline' : 'quiet'} className="mt-1">
-              {STATE_WORDS[run.state]}
+            <Pill tone={STATE_TONE[stateOf(run.id)]} className="mt-1">
+              {ENGINE_STATE_WORDS[stateOf(run.id)]}
             </Pill>
+            <RunPageLink run={run} />
           </li>
         ))}
         {withoutRun.map((engine) => (
           <li key={engine.id} className="text-muted">
-            {capitalise(engine.position)} · {engine.maker} {engine.model}: no break-in run yet
+            {capitalise(engine.position)} · {engine.maker} {engine.model}:{' '}
+            {ENGINE_STATE_WORDS['no-run']}
           </li>
         ))}
       </ul>
-      <DeckButtonLink
-        to={`/deck/${vessel.id}`}
-        className="mt-3 w-full"
-        aria-label={`Go on deck with ${vessel.name}`}
-      >
-        On deck
-      </DeckButtonLink>
+      {onDeck ? (
+        <DeckButtonLink
+          to={`/deck/${vessel.id}`}
+          className="mt-3 w-full"
+          aria-label={`Go on deck with ${vessel.name}`}
+        >
+          On deck
+        </DeckButtonLink>
+      ) : (
+        <p className="mt-3 text-sm">Nothing on this vessel for you to log right now.</p>
+      )}
     </Card>
   );
 }
