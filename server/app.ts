@@ -21,6 +21,7 @@ import type { MailCatcher } from './features/mail/mail-catcher.js';
 import { Outbox } from './features/mail/outbox.js';
 import { programsRouter } from './features/programs/programs.router.js';
 import { ProgramsService } from './features/programs/programs.service.js';
+import { engineRecordRouter } from './features/reminders/engine-record.router.js';
 import { serviceDueRouter } from './features/reminders/service-due.router.js';
 import { ServiceDueService } from './features/reminders/service-due.service.js';
 import { boardRouter } from './features/review/board.router.js';
@@ -124,6 +125,7 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   const store = new CertificateStore(dataDir);
   api.use(signOffRouter(new SignOffService(db, clock, outbox, store)));
   api.use(serviceDueRouter(new ServiceDueService(db, summaries, clock)));
+  api.use(engineRecordRouter(db, summaries, clock));
   api.use(apiNotFound);
   return api;
 }

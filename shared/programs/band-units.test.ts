@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { percentToRpm, percentToShare, shareToPercent } from './band-units';
+import { percentToShare, shareToPercent } from './band-units';
 import { bandWords } from './program-words';
 
 describe('band units', () => {
@@ -27,12 +27,6 @@ describe('band units', () => {
         expect(shareToPercent(percentToShare(percent))).toBe(percent);
       }),
     );
-  });
-
-  it('reaches whole rpm on an engine: 50 % of 6000 rpm is 3000 rpm', () => {
-    // A rated maximum of 6000 rpm, typical of four-stroke outboards (common practice).
-    expect(percentToRpm(50, 6000)).toBe(3000);
-    expect(percentToRpm(33.3, 6000)).toBe(1998);
   });
 
   it('writes a share band in percent, never as a 0–1 share', () => {

@@ -9,7 +9,3 @@ export const shareToPercent = (share: number): number => Math.round(share * 1000
 
 /** 50 → 0.5; 33.33 → 0.333. */
 export const percentToShare = (percent: number): number => Math.round(percent * 10) / 1000;
-
-/** The rpm a percent band reaches on an engine, rounded to whole rpm as a tachometer shows it. */
-export const percentToRpm = (percent: number, ratedRpmMax: number): number =>
-  Math.round(percentToShare(percent) * ratedRpmMax);

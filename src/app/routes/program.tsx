@@ -1,10 +1,6 @@
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import {
-  engineKindLabel,
-  useCopyProgram,
-  useProgram,
-  type ProgramDetail,
-} from '../../features/programs/api';
+import { ENGINE_KIND_WORDS } from '../../../shared/programs/program-words';
+import { useCopyProgram, useProgram, type ProgramDetail } from '../../features/programs/api';
 import { ProgramForm } from '../../features/programs/components/program-form';
 import { ProgramView } from '../../features/programs/components/program-view';
 import { ProgramMarks } from '../../features/programs/components/programs-table';
@@ -67,7 +63,7 @@ function ProgramPage({ id }: { id: string }) {
         <ProgramMarks program={p} />
       </div>
       <p>
-        For: {engineKindLabel[p.suits.engineKind]}
+        For: {ENGINE_KIND_WORDS[p.suits.engineKind]}
         {p.suits.label ? ` · ${p.suits.label}` : ''}
       </p>
       <p className="max-w-prose text-sm">

@@ -1,6 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { EngineKind, Program } from '../../../shared/programs/program.schema';
-import type { AssignProgramInput } from '../../../shared/runs/run.schema';
 import type { ServiceInterval } from '../../../shared/service/service.schema';
 import { api } from '../../lib/api-client';
 
@@ -86,28 +85,6 @@ export const useReinstateProgram = () =>
   useProgramWrite(programKeys.retire(), (id: string) =>
     api.post<{ program: ProgramDetail }>(`${path(id)}/reinstate`),
   );
-
-export interface AssignedRun {
-  id: string;
-}
-
-export function useAssignProgram() {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationKey: programKeys.assign(),
-    mutationFn: (input: AssignProgramInput) => api.post<{ run: AssignedRun }>('/api/runs', input),
-    // Runs show on several pages (board, engine, deck); refresh whatever is on screen.
-    onSuccess: () => queryClient.invalidateQueries({ refetchType: 'active' }),
-  });
-}
-
-export const engineKindLabel: Record<EngineKind, string> = {
-  'outboard-4-stroke': 'Four-stroke outboard',
-  'outboard-2-stroke': 'Two-stroke outboard',
-  'inboard-diesel': 'Inboard diesel',
-  'sterndrive-petrol': 'Petrol sterndrive',
-  any: 'Any engine',
-};
 
 export const formatHours = (minutes: number) => `${Number((minutes / 60).toFixed(1))} h`;
 

@@ -1,77 +1,71 @@
 import { useState } from 'react';
-import { Link } from 'react-router-dom';
+import type { RunView } from '../../../../shared/runs/run-view';
+import { OPEN_RUN_STATES } from '../../../../shared/runs/run.schema';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
-import { SelectField } from '../../../components/ui/field';
-import { errorMessage, isApiError } from '../../../lib/api-client';
-import { useAssignProgram, usePrograms } from '../api';
+import { Loading } from '../../../components/ui/status-message';
+import { errorMessage } from '../../../lib/api-client';
+import { useAssignEngine, useEngineRuns } from '../assign-api';
+import { OpenRunNote, PlannedRun, RunLink } from './engine-run-note';
+import { ProgramChooser } from './program-chooser';
 
-/** The refusal's own words first, then any field's words it does not already say. */
-function problemLines(error: Error): string[] {
-  const message = errorMessage(error);
-  const fieldErrors = isApiError(error) ? error.fieldErrors.map((e) => e.message) : [];
-  return [message, ...fieldErrors.filter((m) => m !== message)];
-}
-
-function RunCreated({ runId }: { runId: string }) {
+/** What just happened on this card, said until the engine's runs show it. */
+function Outcome({ createdId, cancelled }: { createdId: string | null; cancelled: boolean }) {
+  if (createdId)
+    return (
+      <p role="status" className="font-semibold">
+        Run created. <RunLink runId={createdId} />
+      </p>
+    );
+  if (!cancelled) return null;
   return (
     <p role="status" className="font-semibold">
-      Run created.{' '}
-      <Link to={`/runs/${runId}`} className="underline underline-offset-4">
-        Open the run
-      </Link>
+      Run cancelled. Choose the program to assign instead.
     </p>
   );
 }
 
-/** Starts a break-in run for one engine from one of the workshop's active programs. */
+/**
+ * The engine page's assign card: the engine's planned run (which can be cancelled), its break-in
+ * under way, or the list of programs to start one, those that suit the engine first.
+ */
 export function AssignProgram({ engineId }: { engineId: string }) {
-  const programs = usePrograms();
-  const assign = useAssignProgram();
-  const [programId, setProgramId] = useState('');
-  const active = (programs.data ?? []).filter((program) => !program.retiredAt);
-  const chosen = programId || active[0]?.id || '';
-  const problemText = assign.error ? problemLines(assign.error) : [];
-
+  const engine = useAssignEngine(engineId);
+  const runs = useEngineRuns(engineId);
+  const [createdId, setCreatedId] = useState<string | null>(null);
+  const [cancelled, setCancelled] = useState(false);
+  const open: RunView | undefined = runs.data?.find((run) => OPEN_RUN_STATES.includes(run.state));
+  // Waits for the engine too, so programs are never listed before it is known which suit.
+  const loading = runs.isPending || engine.isPending;
   return (
     <div className="flex flex-col gap-3">
       <p className="text-sm">
         The program sets the phases the skipper runs. Check it against the engine maker&rsquo;s
         manual first: the manual comes first.
       </p>
-      <SelectField
-        label="Break-in program"
-        value={chosen}
-        disabled={programs.isPending}
-        onChange={(event) => setProgramId(event.target.value)}
-      >
-        {programs.isPending && <option value="">Loading programs…</option>}
-        {active.map((program) => (
-          <option key={program.id} value={program.id}>
-            {program.name}
-          </option>
-        ))}
-      </SelectField>
-      {programs.isError && (
-        <Alert title="Could not load the programs">{errorMessage(programs.error)}</Alert>
+      {loading && <Loading label="Loading the engine's runs…" />}
+      {runs.isError && <Alert title="Could not load the runs">{errorMessage(runs.error)}</Alert>}
+      {!open && <Outcome createdId={createdId} cancelled={cancelled} />}
+      {open?.state === 'planned' && (
+        <PlannedRun
+          run={open}
+          justCreated={open.id === createdId}
+          onCancelled={() => {
+            setCreatedId(null);
+            setCancelled(true);
+          }}
+        />
       )}
-      <Button
-        className="self-start"
-        disabled={!chosen}
-        pending={assign.isPending}
-        pendingLabel="Assigning…"
-        onClick={() => assign.mutate({ engineId, programId: chosen })}
-      >
-        Assign program
-      </Button>
-      {problemText.length > 0 && (
-        <Alert title="The program was not assigned">
-          {problemText.map((m) => (
-            <p key={m}>{m}</p>
-          ))}
-        </Alert>
+      {open && open.state !== 'planned' && <OpenRunNote run={open} />}
+      {!open && !loading && (
+        <ProgramChooser
+          engineId={engineId}
+          engine={engine.data}
+          onAssigned={(run) => {
+            setCreatedId(run.id);
+            setCancelled(false);
+          }}
+        />
       )}
-      {assign.data && <RunCreated runId={assign.data.run.id} />}
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import { useFormContext } from 'react-hook-form';
+import { CEILING_WORDS, PERFORMED_BY_WORDS } from '../../../../shared/programs/program-words';
 import { THROTTLE_CEILINGS } from '../../../../shared/programs/throttle';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
@@ -14,13 +15,7 @@ interface PhaseFieldsProps {
   onRemove: (index: number) => void;
 }
 
-export const ceilingLabel: Record<(typeof THROTTLE_CEILINGS)[number], string> = {
-  idle: 'Idle',
-  half: 'Half throttle',
-  'three-quarter': 'Three-quarter throttle',
-  full: 'Full throttle',
-  varied: 'Varied (limits set by the rules)',
-};
+const PERFORMERS = ['workshop', 'skipper'] as const;
 
 /** Who runs the phase, how long it must run in band, and its throttle ceiling. */
 function PhaseBasics({ index }: { index: number }) {
@@ -34,8 +29,11 @@ function PhaseBasics({ index }: { index: number }) {
         error={error('performedBy')}
         {...register(`${base}.performedBy`)}
       >
-        <option value="workshop">The workshop</option>
-        <option value="skipper">The skipper</option>
+        {PERFORMERS.map((who) => (
+          <option key={who} value={who}>
+            {PERFORMED_BY_WORDS[who]}
+          </option>
+        ))}
       </SelectField>
       <TextField
         label="Required minutes in band"
@@ -50,7 +48,7 @@ function PhaseBasics({ index }: { index: number }) {
       >
         {THROTTLE_CEILINGS.map((ceiling) => (
           <option key={ceiling} value={ceiling}>
-            {ceilingLabel[ceiling]}
+            {CEILING_WORDS[ceiling]}
           </option>
         ))}
       </SelectField>

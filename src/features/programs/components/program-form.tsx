@@ -1,24 +1,28 @@
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useFormContext, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
+import { ENGINE_KIND_WORDS } from '../../../../shared/programs/program-words';
 import {
+  EngineKindSchema,
   MAX_PHASES,
-  ProgramSchema,
   type Program,
 } from '../../../../shared/programs/program.schema';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
-import { controlClass, Field, TextField } from '../../../components/ui/field';
+import { controlClass, Field, SelectField, TextField } from '../../../components/ui/field';
+import { ApiError, isApiError } from '../../../lib/api-client';
 import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSaveProgram, type ProgramDetail } from '../api';
 import {
+  formFieldOf,
   formFieldPaths,
   newPhase,
   errorAt,
   numberOptions,
   type ProgramFormValues,
 } from '../form-values';
+import { formValuesOf, ProgramFormSchema } from '../program-form-schema';
 import { PhaseFields } from './phase-fields';
 
 /** The program's name, notes and first service. */
@@ -29,6 +33,25 @@ function ProgramDetailsCard() {
     <Card title="Program">
       <div className="flex flex-col gap-4">
         <TextField label="Program name" error={error('name')} {...register('name')} />
+        <div className="grid gap-3 sm:grid-cols-2">
+          <SelectField
+            label="Written for"
+            error={error('suits.engineKind')}
+            {...register('suits.engineKind')}
+          >
+            {EngineKindSchema.options.map((kind) => (
+              <option key={kind} value={kind}>
+                {ENGINE_KIND_WORDS[kind]}
+              </option>
+            ))}
+          </SelectField>
+          <TextField
+            label="Engines it suits, in your words"
+            hint="Optional, e.g. 40–60 hp four-stroke outboards"
+            error={error('suits.label')}
+            {...register('suits.label')}
+          />
+        </div>
         <Field label="Notes" error={error('notes')}>
           {(c) => (
             <textarea {...c} rows={3} className={`${controlClass} py-2`} {...register('notes')} />
@@ -103,11 +126,20 @@ function SaveOutcome({ problems, saved }: { problems: string[]; saved: boolean }
   );
 }
 
+/** The server's refusal with its field names as the form names them (percent, not share). */
+const onFormFields = (error: Error): Error =>
+  isApiError(error)
+    ? new ApiError({
+        ...error.problem,
+        errors: error.fieldErrors.map((e) => ({ ...e, field: formFieldOf(e.field) })),
+      })
+    : error;
+
 /** Edits a workshop's own program. The server checks it again and names any field it refuses. */
 export function ProgramForm({ program }: { program: ProgramDetail }) {
   const form = useForm<ProgramFormValues, unknown, Program>({
-    resolver: zodResolver(ProgramSchema),
-    defaultValues: program.definition,
+    resolver: zodResolver(ProgramFormSchema),
+    defaultValues: formValuesOf(program.definition),
   });
   const { handleSubmit, setError, reset } = form;
   const save = useSaveProgram(program.id);
@@ -119,12 +151,14 @@ export function ProgramForm({ program }: { program: ProgramDetail }) {
     setSaved(false);
     save.mutate(definition, {
       onSuccess: (data) => {
-        reset(data.program.definition);
+        reset(formValuesOf(data.program.definition));
         setSaved(true);
       },
       onError: (failure) => {
         const fields = formFieldPaths(definition.phases.length) as Path<ProgramFormValues>[];
-        setProblems(serverErrorMessages(failure, setError, fields, { pointToFields: true }));
+        setProblems(
+          serverErrorMessages(onFormFields(failure), setError, fields, { pointToFields: true }),
+        );
       },
     });
   });

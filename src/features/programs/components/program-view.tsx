@@ -1,12 +1,11 @@
 import type { Phase, Program } from '../../../../shared/programs/program.schema';
+import {
+  bandWords,
+  CEILING_WORDS,
+  PERFORMED_BY_WORDS,
+} from '../../../../shared/programs/program-words';
 import { Card } from '../../../components/ui/card';
 import { formatInterval } from '../api';
-import { ceilingLabel } from './phase-fields';
-
-const bandText = (band: Phase['band']) =>
-  band.kind === 'absolute'
-    ? `${band.rpmMin}–${band.rpmMax} rpm`
-    : `${Math.round(band.shareMin * 100)}–${Math.round(band.shareMax * 100)} % of rated full-throttle rpm`;
 
 function rulesText({ rules }: Phase): string[] {
   return [
@@ -37,13 +36,13 @@ export function ProgramView({ definition }: { definition: Program }) {
             <Card title={`${index + 1}. ${phase.name}`} level={3}>
               <dl className="grid gap-x-4 gap-y-1 sm:grid-cols-[auto_1fr]">
                 <dt className="font-semibold">Performed by</dt>
-                <dd>{phase.performedBy === 'workshop' ? 'The workshop' : 'The skipper'}</dd>
+                <dd>{PERFORMED_BY_WORDS[phase.performedBy]}</dd>
                 <dt className="font-semibold">Required time in band</dt>
                 <dd className="figures">{phase.requiredMinutes} min</dd>
                 <dt className="font-semibold">Throttle ceiling</dt>
-                <dd>{ceilingLabel[phase.throttleCeiling]}</dd>
+                <dd>{CEILING_WORDS[phase.throttleCeiling]}</dd>
                 <dt className="font-semibold">Band</dt>
-                <dd className="figures">{bandText(phase.band)}</dd>
+                <dd className="figures">{bandWords(phase.band)}</dd>
               </dl>
               {rulesText(phase).length > 0 && (
                 <ul className="mt-2 list-disc pl-5">

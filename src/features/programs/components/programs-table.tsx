@@ -1,8 +1,9 @@
 import { Link } from 'react-router-dom';
+import { ENGINE_KIND_WORDS } from '../../../../shared/programs/program-words';
 import { Button } from '../../../components/ui/button';
 import { Pill } from '../../../components/ui/pill';
 import { Table, Td, Th } from '../../../components/ui/table';
-import { engineKindLabel, formatHours, formatInterval, type ProgramSummary } from '../api';
+import { formatHours, formatInterval, type ProgramSummary } from '../api';
 
 interface ProgramsTableProps {
   programs: ProgramSummary[];
@@ -72,7 +73,7 @@ export function ProgramsTable(props: ProgramsTableProps) {
           <li key={program.id} className="rounded-lg border-2 border-line bg-surface p-4">
             {nameLink(program)}
             <ProgramMarks program={program} />
-            <p className="mt-1">{engineKindLabel[program.suits.engineKind]}</p>
+            <p className="mt-1">{ENGINE_KIND_WORDS[program.suits.engineKind]}</p>
             <p className="figures">
               {program.phaseCount} phases · {formatHours(program.totalMinutes)}
             </p>
@@ -112,7 +113,7 @@ function WideTable({ programs, canManage, ...actions }: ProgramsTableProps) {
               {nameLink(program)}
               <ProgramMarks program={program} />
             </Td>
-            <Td>{engineKindLabel[program.suits.engineKind]}</Td>
+            <Td>{ENGINE_KIND_WORDS[program.suits.engineKind]}</Td>
             <Td className="figures">{program.phaseCount}</Td>
             <Td className="figures">{formatHours(program.totalMinutes)}</Td>
             <Td>{formatInterval(program.firstService)}</Td>
