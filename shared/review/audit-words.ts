@@ -9,6 +9,7 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   'mail-sent': 'E-mail sent',
   'mail-failed': 'E-mail not sent',
   'service-reminder-sent': 'Service reminder sent',
+  'first-service-recorded': 'First service recorded',
   'run-cancelled': 'Run cancelled',
   'checklist-completed': 'Checklist completed',
   'checklist-reopened': 'Checklist reopened',

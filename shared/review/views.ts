@@ -35,7 +35,10 @@ export interface BoardRow {
 export type BoardService = Pick<
   FirstServiceView,
   'state' | 'dueAtHours' | 'dueOn' | 'hoursNow' | 'hoursSource'
->;
+> & {
+  /** The day the first service was recorded as done; null while it is still to do. */
+  doneOn?: string | null;
+};
 
 export interface BoardView {
   /** The workshop's calendar day the service states were worked out for. */

@@ -12,6 +12,7 @@ export type AuditAction =
   | 'mail-sent'
   | 'mail-failed'
   | 'service-reminder-sent'
+  | 'first-service-recorded'
   | 'run-cancelled'
   | 'checklist-completed'
   | 'checklist-reopened';

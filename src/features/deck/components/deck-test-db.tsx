@@ -57,3 +57,55 @@ export const clearDevice = () =>
 
 export const showDeck = (role: 'skipper' | 'technician' = 'skipper') =>
   renderPage(<DeckScreen vesselId={VESSEL_ID} role={role} />);
+
+type Logged = Omit<RunEvent, 'id' | 'engineId'>;
+const event = (kind: string, at: number, rest: object = {}) => ({ kind, at, ...rest }) as Logged;
+
+/**
+ * A finished outing (no outing under way): on the below-half phase from `startedAt`, readings
+ * every 5 minutes varying between 2000 and 2600 rpm at half throttle for `minutes`.
+ */
+export function outingDone(startedAt: number, minutes: number, phaseId = 'below-half'): Logged[] {
+  const events = [
+    event('session-start', startedAt),
+    event('phase-advance', startedAt, { phaseId }),
+  ];
+  for (let m = 0; m < minutes; m += 5)
+    events.push(
+      event('reading', startedAt + m * MIN, {
+        phaseId,
+        rpm: m % 10 === 0 ? 2000 : 2600,
+        throttle: 'half',
+      }),
+    );
+  return [...events, event('session-stop', startedAt + minutes * MIN)];
+}
+
+/**
+ * Every phase of the built-in four-stroke program in band for its time (10, 110, 480 min),
+ * speed changed every 5 minutes: a run the workshop would judge complete.
+ */
+export function wholeProgram(startedAt: number): Logged[] {
+  const events = [event('session-start', startedAt)];
+  const phase = (
+    phaseId: string,
+    from: number,
+    to: number,
+    rpms: [number, number],
+    throttle: string,
+  ) => {
+    events.push(event('phase-advance', startedAt + from * MIN, { phaseId }));
+    for (let m = from; m < to; m += 5)
+      events.push(
+        event('reading', startedAt + m * MIN, {
+          phaseId,
+          rpm: (m / 5) % 2 === 0 ? rpms[0] : rpms[1],
+          throttle,
+        }),
+      );
+  };
+  phase('dock-run', 0, 10, [800, 900], 'idle');
+  phase('below-half', 10, 120, [2000, 2600], 'half');
+  phase('below-three-quarter', 120, 600, [3000, 3800], 'three-quarter');
+  return [...events, event('session-stop', startedAt + 600 * MIN)];
+}
