@@ -24,6 +24,7 @@ const kindWords: Record<string, string> = {
   'phase-advance': 'Next phase',
   alert: 'Alert',
   note: 'Note',
+  void: 'Entry voided',
 };
 
 /** Everything not yet confirmed by the server (waiting or refused), newest first. */
