@@ -2,6 +2,7 @@ import { Attachment } from './features/attachments/attachment.entity.js';
 import { AuditEntry } from './features/audit/audit-entry.entity.js';
 import { CommissioningChecklist } from './features/checklists/checklist.entity.js';
 import { Program } from './features/programs/program.entity.js';
+import { ServiceRecord } from './features/reminders/service-record.entity.js';
 import { ServiceReminder } from './features/reminders/service-reminder.entity.js';
 import { RunSummary, RunSummaryMark } from './features/review/run-summary.entity.js';
 import { RunEventRow } from './features/runs/run-event.entity.js';
@@ -40,4 +41,5 @@ export const ENTITIES = [
   RunSummary,
   RunSummaryMark,
   ServiceReminder,
+  ServiceRecord,
 ];

@@ -1,8 +1,8 @@
 import { z } from 'zod';
 
-export const ATTACHMENT_RECORD_TYPES = ['engine', 'checklist', 'run'] as const;
+export const ATTACHMENT_RECORD_TYPES = ['engine', 'checklist', 'run', 'service'] as const;
 export const AttachmentRecordTypeSchema = z.enum(ATTACHMENT_RECORD_TYPES, {
-  error: 'The record type (recordType) must be engine, checklist or run.',
+  error: 'The record type (recordType) must be engine, checklist, run or service.',
 });
 export type AttachmentRecordType = z.infer<typeof AttachmentRecordTypeSchema>;
 
@@ -28,7 +28,7 @@ export const MAX_ATTACHMENTS_PER_RECORD = 30;
 const RecordFields = {
   recordType: AttachmentRecordTypeSchema,
   recordId: z.uuid({
-    error: 'The record (recordId) must be the id of an engine, checklist or run.',
+    error: 'The record (recordId) must be the id of an engine, checklist, run or service.',
   }),
 };
 

@@ -3,6 +3,7 @@ import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { AttachmentRecordType } from '../../../shared/attachments/attachment.schema.js';
 import { ConflictError, ForbiddenError, NotFoundError } from '../../lib/errors.js';
 import { CommissioningChecklist } from '../checklists/checklist.entity.js';
+import { findVisibleServiceRecord } from '../reminders/service-records.service.js';
 import { Run } from '../runs/run.entity.js';
 import { findVisibleEngine, mayViewVessel } from '../vessels/vessel-access.js';
 
@@ -58,6 +59,11 @@ export async function findVisibleRecord(
     const engine = await findVisibleEngine(manager, user, id);
     return { workshopId: engine.workshopId, skipperMayAdd: false, frozen: null };
   }
+  if (type === 'service') {
+    // A service's papers (invoice, photos) are the workshop's, like the engine's.
+    const record = await findVisibleServiceRecord(manager, user, id);
+    return { workshopId: record.workshopId, skipperMayAdd: false, frozen: null };
+  }
   return type === 'checklist' ? checklistRecord(manager, user, id) : runRecord(manager, user, id);
 }
 
@@ -71,7 +77,7 @@ export async function findAttachableRecord(
   const record = await findVisibleRecord(manager, user, type, id);
   if (user.role === 'skipper' && !record.skipperMayAdd)
     throw new ForbiddenError(
-      `Only the workshop adds files to ${type === 'engine' ? 'an engine' : 'a checklist'}.`,
+      `Only the workshop adds files to ${type === 'engine' ? 'an engine' : type === 'service' ? 'a service record' : 'a checklist'}.`,
     );
   if (record.frozen) throw new ConflictError(record.frozen);
   return record;

@@ -4,7 +4,7 @@ import { firstServiceWords } from '../../../shared/review/certificate-words.js';
 import type { Clock } from '../../lib/clock.js';
 import type { Logger } from '../../lib/logger.js';
 import { recordAudit } from '../audit/audit.service.js';
-import { serviceReminderMail } from '../mail/mail-templates.js';
+import { appLink, serviceReminderMail } from '../mail/mail-templates.js';
 import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
 import { skippersOf } from '../runs/run-context.js';
 import { Workshop } from '../workshops/workshop.entity.js';
@@ -21,11 +21,14 @@ export interface ReminderJobDeps {
   clock: Clock;
   logger: Logger;
   intervalMs?: number;
+  /** The app's public origin for the link to the engine; RINGSEAT_ORIGIN or the local address when absent. */
+  origin?: string;
 }
 
 /**
  * Inside the server process: every interval, e-mails the skippers and the workshop about each
- * engine whose first service is near (due soon or overdue). A reminder is recorded only once it
+ * engine whose first service is near (due soon or overdue) and not recorded as done (a recorded
+ * first service ends its reminders). A reminder is recorded only once it
  * was sent, so a mail server that is down is simply tried again next time; a recorded one is
  * never sent twice.
  */
@@ -76,7 +79,8 @@ export class ReminderJob {
       );
       for (const due of await this.deps.serviceDue.forWorkshop(workshop.id)) {
         const state = due.firstService?.state;
-        if (reminded.has(due.engine.id) || (state !== 'due-soon' && state !== 'overdue')) continue;
+        if (reminded.has(due.engine.id) || due.firstServiceDone) continue;
+        if (state !== 'due-soon' && state !== 'overdue') continue;
         if (await this.remind(workshop, due)) sent.push({ engineId: due.engine.id, state });
       }
     }
@@ -86,7 +90,8 @@ export class ReminderJob {
   private async remind(workshop: Workshop, due: EngineServiceDue): Promise<boolean> {
     const skippers = await skippersOf(this.deps.dataSource, due.engine.vesselId);
     const to = [...new Set([...skippers.map((s) => s.email), workshop.email].filter(Boolean))];
-    const outcome = await this.deps.outbox.send(reminderMail(workshop, due, to));
+    const link = appLink(`/engines/${due.engine.id}`, this.deps.origin);
+    const outcome = await this.deps.outbox.send(reminderMail(workshop, due, to, link));
     if (!outcome.sent) {
       this.deps.logger.warn(
         { engineId: due.engine.id, problem: outcome.problem },
@@ -127,17 +132,17 @@ export class ReminderJob {
   }
 }
 
-function reminderMail(workshop: Workshop, due: EngineServiceDue, to: string[]) {
+function reminderMail(workshop: Workshop, due: EngineServiceDue, to: string[], link: string) {
   const status = due.firstService!;
   return serviceReminderMail({
     to,
     replyTo: workshop.email || undefined,
     workshopName: workshop.name,
     vesselName: due.engine.vesselName,
-    engineTitle: `${due.engine.position} engine (${due.engine.maker} ${due.engine.model})`,
-    serialNumber: due.engine.serialNumber,
+    engine: due.engine,
     overdue: status.state === 'overdue',
     dueWords: firstServiceWords(status),
     hoursWords: `${status.hoursNow.toFixed(1)} h (${status.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
+    link,
   });
 }

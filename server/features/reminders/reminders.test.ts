@@ -144,6 +144,10 @@ describe('service reminders', () => {
     expect(mail.text).toContain(
       'Due: at 22.0 h on the hour meter or on 27 Dec 2026, whichever comes first.',
     );
+    expect(mail.text).toContain(
+      'Vessel: Halcyon Drift\nEngine: inboard, Brennholt B3-21 Marine, serial B321-D-77841',
+    );
+    expect(mail.text).toMatch(new RegExp(`The engine in Ringseat: http\\S+/engines/${halcyon}\\n`));
     expect(await job().runOnce()).toEqual([]);
     const audit = await server.dataSource
       .getRepository(AuditEntry)

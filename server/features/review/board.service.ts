@@ -50,6 +50,7 @@ type BoardSqlRow = {
   openPhaseName: string | null;
   sessionMs: number | null;
   hourMeter: number | null;
+  firstServiceDoneOn: string | null;
 };
 
 // One query for the whole board; the program's name and first-service interval come from the
@@ -57,7 +58,8 @@ type BoardSqlRow = {
 const BOARD_SQL = `
 SELECT r."id", r."state", r."vesselId", v."name" AS "vesselName", r."engineId", e."position", e."maker", e."model", e."serialNumber",
        e."hourMeterAtCommissioning", e."commissionedOn", r."clockSkewMs", r."lastEventAt", r."submittedAt", r."signedOffAt", r."createdAt",
-       s."programName", s."serviceHours", s."serviceMonths", s."verdict", s."progress", s."breachCount", s."openPhaseName", s."sessionMs", s."hourMeter"
+       s."programName", s."serviceHours", s."serviceMonths", s."verdict", s."progress", s."breachCount", s."openPhaseName", s."sessionMs", s."hourMeter",
+       (SELECT sr."doneOn" FROM "service_record" sr WHERE sr."engineId" = r."engineId" AND sr."kind" = 'first') AS "firstServiceDoneOn"
   FROM "run" r JOIN "engine" e ON e."id" = r."engineId" JOIN "vessel" v ON v."id" = r."vesselId" LEFT JOIN "run_summary" s ON s."runId" = r."id"
  WHERE r."workshopId" = ?`;
 
@@ -131,6 +133,8 @@ function flagsOf(row: BoardSqlRow, firstService: FirstServiceView | null): Board
   if ((row.breachCount ?? 0) > 0) flags.push('breach');
   if (row.clockSkewMs !== null && Math.abs(row.clockSkewMs) > CLOCK_SKEW_FLAG_MS)
     flags.push('clock-skew');
+  // A first service recorded as done ends its flags (and its reminders).
+  if (row.firstServiceDoneOn !== null) return flags;
   if (firstService?.state === 'overdue') flags.push('service-overdue');
   if (firstService?.state === 'due-soon') flags.push('service-due-soon');
   return flags;
@@ -168,6 +172,7 @@ function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: Rank
       dueOn: firstService.dueOn,
       hoursNow: firstService.hoursNow,
       hoursSource: firstService.hoursSource,
+      doneOn: row.firstServiceDoneOn,
     },
   };
   return {

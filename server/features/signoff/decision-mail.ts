@@ -1,28 +1,61 @@
 import { firstServiceWords } from '../../../shared/review/certificate-words.js';
-import { certificateMail, returnedMail } from '../mail/mail-templates.js';
+import { appLink, certificateMail, engineTitle, returnedMail } from '../mail/mail-templates.js';
 import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
+import { firstServiceCalendar } from '../mail/service-calendar.js';
 import type { RunContext } from '../runs/run-context.js';
 
-const engineTitle = (ctx: RunContext) =>
-  `${ctx.engine.position} engine (${ctx.engine.maker} ${ctx.engine.model}, serial ${ctx.engine.serialNumber})`;
+export interface DecisionMailOptions {
+  /** The app's public origin for the link to the run; RINGSEAT_ORIGIN or the local address when absent. */
+  origin?: string;
+  /** Names of the phases sent back to be run again (a return only). */
+  rerunPhaseNames?: string[];
+  /** When the calendar file is made; now when absent. */
+  now?: Date;
+}
 
-/** Tells the vessel's skippers what the workshop decided: the certificate attached, or the reasons to carry on. */
+/** The first service as a calendar event, when it falls due on a date. */
+function calendarOf(ctx: RunContext, link: string, now: Date | undefined) {
+  const due = ctx.firstService;
+  if (!due?.dueOn) return null;
+  return firstServiceCalendar({
+    engineId: ctx.engine.id,
+    vesselName: ctx.vessel.name,
+    engineTitle: engineTitle(ctx.engine),
+    serialNumber: ctx.engine.serialNumber,
+    workshopName: ctx.workshop.name,
+    dueOn: due.dueOn,
+    dueWords: firstServiceWords(due),
+    hoursWords: `${due.hoursNow.toFixed(1)} h (${due.hoursSource === 'logged' ? 'last logged hour meter' : 'estimated from logged running time'})`,
+    link,
+    stamp: now,
+  });
+}
+
+/** What both decisions' e-mails say alike: to whom, from which workshop, about which engine. */
+const commonParts = (ctx: RunContext, reviewer: { name: string }, link: string) => ({
+  to: ctx.skippers.map((s) => s.email),
+  replyTo: ctx.workshop.email || undefined,
+  workshopName: ctx.workshop.name,
+  vesselName: ctx.vessel.name,
+  engine: ctx.engine,
+  technicianName: reviewer.name,
+  link,
+});
+
+/**
+ * Tells the vessel's skippers what the workshop decided: the certificate (and the first service as
+ * a calendar file) attached, or the reasons to carry on; either way with a link to the run.
+ */
 export async function mailDecision(
   outbox: Outbox,
   ctx: RunContext,
   reviewer: { name: string },
   comments: string,
   certificate: { number: string; pdf: Buffer } | null,
+  options: DecisionMailOptions = {},
 ): Promise<{ outcome: MailOutcome; sent: boolean; words: string }> {
-  const to = ctx.skippers.map((s) => s.email);
-  const common = {
-    to,
-    replyTo: ctx.workshop.email || undefined,
-    workshopName: ctx.workshop.name,
-    vesselName: ctx.vessel.name,
-    engineTitle: engineTitle(ctx),
-    technicianName: reviewer.name,
-  };
+  const link = appLink(`/runs/${ctx.run.id}`, options.origin);
+  const common = commonParts(ctx, reviewer, link);
   const outcome = certificate
     ? await outbox.send(
         certificateMail({
@@ -32,6 +65,7 @@ export async function mailDecision(
           firstServiceWords: ctx.firstService
             ? firstServiceWords(ctx.firstService)
             : 'ask the workshop',
+          calendar: calendarOf(ctx, link, options.now),
         }),
       )
     : await outbox.send(
@@ -39,6 +73,7 @@ export async function mailDecision(
           ...common,
           comments,
           reasons: ctx.account.phases.flatMap((p) => p.reasons.map((r) => r.message)),
+          rerunPhaseNames: options.rerunPhaseNames,
         }),
       );
   const words = outcomeWords(

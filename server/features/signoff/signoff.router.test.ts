@@ -118,6 +118,11 @@ describe('signing off a submitted run', () => {
         filename: 'break-in-certificate-TMW-2026-0002-9.pdf',
         contentType: 'application/pdf',
       }),
+      // The first service as a calendar event (checked in reminders/first-service-calendar.test.ts).
+      expect.objectContaining({
+        filename: 'first-service-skua-nv40-26-00233.ics',
+        contentType: 'text/calendar',
+      }),
     ]);
 
     const again = await tech

@@ -50,6 +50,7 @@ async function invite(
       role: invite.role,
       link,
       expiresOn: invite.expiresAt.toISOString().slice(0, 10),
+      vessels: await service.invitedVessels(invite),
     }),
   );
   return {

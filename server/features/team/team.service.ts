@@ -84,6 +84,20 @@ export class TeamService {
     return { invite, token };
   }
 
+  /** The invited skipper's vessels with their engines in use, for the invite e-mail to name. */
+  async invitedVessels(invite: Invite) {
+    if (invite.vesselIds.length === 0) return [];
+    const vessels = await this.dataSource.getRepository(Vessel).find({
+      where: { id: In(invite.vesselIds), workshopId: invite.workshopId },
+      relations: { engines: true },
+      order: { name: 'ASC' },
+    });
+    return vessels.map((v) => ({
+      name: v.name,
+      engines: (v.engines ?? []).filter((e) => !e.archivedAt),
+    }));
+  }
+
   /** Finds a usable invite or says plainly why the link does not work. */
   async findOpenInvite(token: string): Promise<Invite> {
     const invite = await this.dataSource
