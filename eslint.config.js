@@ -22,6 +22,7 @@ const CLIENT_FEATURES = [
   'deck',
   'programs',
   'review',
+  'service',
   'sync',
   'team',
   'vessels',

@@ -1,8 +1,12 @@
 import { useState } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { Link, useParams } from 'react-router-dom';
 import type { EngineRow } from '../../../shared/vessels/vessel-view';
 import { AssignProgram } from '../../features/programs/components/assign-program';
 import { AttachmentPanel } from '../../features/attachments/components/attachment-panel';
+import { boardKeys } from '../../features/board/api';
+import { EngineRuns } from '../../features/service/components/engine-runs';
+import { FirstServiceCard } from '../../features/service/components/first-service-card';
 import { useVesselList } from '../../features/vessels/api';
 import { useArchiveEngine, useEngine } from '../../features/vessels/engine-api';
 import { ArchiveControl } from '../../features/vessels/components/archive-control';
@@ -15,6 +19,7 @@ import { ButtonLink } from '../../components/ui/button-link';
 import { Card } from '../../components/ui/card';
 import { LoadError, Loading } from '../../components/ui/status-message';
 import { formatDate } from '../../lib/format';
+import { useSessionUser } from '../shell/session';
 import { StaffOnly } from './staff-only';
 
 function DetailsCard({ engine }: { engine: EngineRow }) {
@@ -63,6 +68,29 @@ function ChecklistCard({ engine: e }: { engine: EngineRow }) {
   );
 }
 
+/** The engine's record: its runs, then the first service due or done (recording it also clears the board's flag). */
+function EngineRecordCards({ engine: e }: { engine: EngineRow }) {
+  const user = useSessionUser();
+  const queryClient = useQueryClient();
+  return (
+    <>
+      <Card title="Break-in runs">
+        <EngineRuns engineId={e.id} />
+      </Card>
+      <Card title="First service">
+        <FirstServiceCard
+          engineId={e.id}
+          userName={user.name}
+          onRecorded={() => queryClient.invalidateQueries({ queryKey: boardKeys.all })}
+          attachments={(serviceId) => (
+            <AttachmentPanel recordType="service" recordId={serviceId} canAdd />
+          )}
+        />
+      </Card>
+    </>
+  );
+}
+
 function EnginePage({ id }: { id: string }) {
   const engine = useEngine(id);
   const archive = useArchiveEngine();
@@ -84,6 +112,7 @@ function EnginePage({ id }: { id: string }) {
         <ArchivedPill archivedAt={e.archivedAt} />
       </div>
       <p className="figures text-lg">{e.serialNumber}</p>
+      <EngineRecordCards engine={e} />
       <ChecklistCard engine={e} />
       <DetailsCard engine={e} />
       {!e.archivedAt && (

@@ -126,6 +126,7 @@ export function ProgressBar({ share, label }: { share: number; label: string }) 
 /** "at 20.4 h or on 20 Dec 2026"; the state in words when it is near. */
 export function FirstServiceText({ service }: { service: BoardService | null }) {
   if (!service) return <span className="text-muted">not recorded</span>;
+  if (service.doneOn) return <span>Done on {formatDate(service.doneOn)}</span>;
   const hours =
     service.dueAtHours !== null ? (
       <span className="figures">{service.dueAtHours.toFixed(1)} h</span>
