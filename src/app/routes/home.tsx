@@ -1,3 +1,5 @@
+import { Link } from 'react-router-dom';
+import { runPerEngine, useRuns } from '../../features/run-page/api';
 import { useVessels } from '../../features/vessels/api';
 import { FleetTable } from '../../features/vessels/components/fleet-table';
 import { VesselCard } from '../../features/vessels/components/vessel-card';
@@ -10,8 +12,28 @@ export function HomeRoute() {
   return user.role === 'skipper' ? <SkipperHome /> : <WorkshopHome />;
 }
 
+/** Under each engine of the skipper's vessels: its break-in run's page, or that there is none. */
+function useEngineRunLink() {
+  const runs = useRuns();
+  const byEngine = runPerEngine(runs.data ?? []);
+  return (engine: { id: string }) => {
+    if (!runs.data) return null;
+    const run = byEngine.get(engine.id);
+    if (!run) return <p className="mt-2 text-muted">No break-in run assigned</p>;
+    return (
+      <Link
+        to={`/runs/${encodeURIComponent(run.id)}`}
+        className="mt-2 inline-flex min-h-touch items-center font-semibold underline underline-offset-4"
+      >
+        Run page
+      </Link>
+    );
+  };
+}
+
 function SkipperHome() {
   const vessels = useVessels();
+  const runLink = useEngineRunLink();
   return (
     <div className="flex flex-col gap-5">
       <title>Your vessels · Ringseat</title>
@@ -26,7 +48,7 @@ function SkipperHome() {
         </p>
       )}
       {vessels.data?.map((vessel) => (
-        <VesselCard key={vessel.id} vessel={vessel} />
+        <VesselCard key={vessel.id} vessel={vessel} engineExtra={runLink} />
       ))}
       <CautionCard />
     </div>

@@ -1,6 +1,7 @@
+import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card';
-import type { VesselView } from '../../../../shared/vessels/vessel-view';
+import type { EngineView, VesselView } from '../../../../shared/vessels/vessel-view';
 import { EngineDetails } from './engine-details';
 
 export function vesselFacts(vessel: VesselView): string {
@@ -15,9 +16,12 @@ export function vesselFacts(vessel: VesselView): string {
 export function VesselCard({
   vessel,
   showSkippers = false,
+  engineExtra,
 }: {
   vessel: VesselView;
   showSkippers?: boolean;
+  /** Shown under each engine (the skipper's home puts the engine's run there). */
+  engineExtra?: (engine: EngineView) => ReactNode;
 }) {
   const title = showSkippers ? (
     <Link to={`/vessels/${vessel.id}`} className="underline underline-offset-4">
@@ -48,6 +52,7 @@ export function VesselCard({
           {vessel.engines.map((engine) => (
             <li key={engine.id}>
               <EngineDetails engine={engine} />
+              {engineExtra?.(engine)}
             </li>
           ))}
         </ul>
