@@ -1,12 +1,12 @@
 import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
-import { vesselTypeLabel } from '../../../shared/vessels/vessel.schema';
-import type { VesselView } from '../../../shared/vessels/vessel-view';
+import { VESSEL_TYPE_WORDS } from '../../../shared/vessels/vessel-words';
+import type { EngineRow, VesselView } from '../../../shared/vessels/vessel-view';
 import { useArchiveVessel, useVessel } from '../../features/vessels/api';
 import { useEngineList } from '../../features/vessels/engine-api';
 import { ArchiveControl } from '../../features/vessels/components/archive-control';
 import { EngineForm } from '../../features/vessels/components/engine-form';
-import { EnginesList } from '../../features/vessels/components/engines-list';
+import { engineName, EnginesList } from '../../features/vessels/components/engines-list';
 import { SkipperLinks } from '../../features/vessels/components/skipper-links';
 import { ArchivedPill } from '../../features/vessels/components/status-pills';
 import { VesselForm } from '../../features/vessels/components/vessel-form';
@@ -17,7 +17,7 @@ import { StaffOnly } from './staff-only';
 
 function VesselFacts({ vessel }: { vessel: VesselView }) {
   const facts: Array<[string, string]> = [
-    ['Type', vesselTypeLabel[vessel.type]],
+    ['Type', VESSEL_TYPE_WORDS[vessel.type]],
     ['Length', vessel.lengthM !== null ? `${vessel.lengthM} m` : '—'],
     ['Home port', vessel.homePort || '—'],
     ['HIN', vessel.hin || '—'],
@@ -34,32 +34,64 @@ function VesselFacts({ vessel }: { vessel: VesselView }) {
   );
 }
 
-function EnginesCard({ vessel }: { vessel: VesselView }) {
+/** "New engine", or a twin copied from one already on the vessel. */
+type Adding = { copyFrom?: EngineRow } | null;
+
+function NewEngine({
+  vessel,
+  adding,
+  onClose,
+}: {
+  vessel: VesselView;
+  adding: Adding;
+  onClose: () => void;
+}) {
   const navigate = useNavigate();
-  const [adding, setAdding] = useState(false);
+  const source = adding?.copyFrom;
+  return (
+    <div className="mt-4 flex flex-col gap-3 border-t-2 border-line pt-4">
+      <h3 className="text-lg font-bold">
+        {source
+          ? `Second engine on ${vessel.name}, copied from ${engineName(source)}`
+          : `New engine on ${vessel.name}`}
+      </h3>
+      {source && <p>Everything is copied but the position and the serial number: enter those.</p>}
+      <EngineForm
+        key={source?.id ?? 'new'}
+        vesselId={vessel.id}
+        copyFrom={source}
+        onSaved={(e) => navigate(`/engines/${e.id}`)}
+        onCancel={onClose}
+      />
+    </div>
+  );
+}
+
+function EnginesCard({ vessel }: { vessel: VesselView }) {
+  const [adding, setAdding] = useState<Adding>(null);
   const engines = useEngineList({ q: '', status: 'all', vesselId: vessel.id });
+  const open = !vessel.archivedAt;
   return (
     <Card title="Engines">
       {engines.isPending && <Loading label="Loading engines…" />}
       {engines.isError && (
         <LoadError error={engines.error} what="the engines" onRetry={() => engines.refetch()} />
       )}
-      {engines.data && <EnginesList engines={engines.data} showVessel={false} />}
-      {!vessel.archivedAt &&
-        (adding ? (
-          <div className="mt-4 flex flex-col gap-3 border-t-2 border-line pt-4">
-            <h3 className="text-lg font-bold">New engine on {vessel.name}</h3>
-            <EngineForm
-              vesselId={vessel.id}
-              onSaved={(e) => navigate(`/engines/${e.id}`)}
-              onCancel={() => setAdding(false)}
-            />
-          </div>
-        ) : (
-          <Button className="mt-4" onClick={() => setAdding(true)}>
-            Add an engine
-          </Button>
-        ))}
+      {engines.data && (
+        <EnginesList
+          engines={engines.data}
+          showVessel={false}
+          onCopy={open && !adding ? (copyFrom) => setAdding({ copyFrom }) : undefined}
+        />
+      )}
+      {open && adding && (
+        <NewEngine vessel={vessel} adding={adding} onClose={() => setAdding(null)} />
+      )}
+      {open && !adding && (
+        <Button className="mt-4" onClick={() => setAdding({})}>
+          Add an engine
+        </Button>
+      )}
     </Card>
   );
 }

@@ -51,6 +51,7 @@ export function ChoiceField<V extends string>({
   label,
   values,
   labels,
+  placeholder,
   register,
   errors,
 }: SectionProps & {
@@ -58,9 +59,12 @@ export function ChoiceField<V extends string>({
   label: string;
   values: readonly V[];
   labels: Record<V, string>;
+  /** An empty first choice, so the value has to be picked (the schema names it if not). */
+  placeholder?: string;
 }) {
   return (
     <SelectField label={label} error={errors[name]?.message} {...register(name)}>
+      {placeholder && <option value="">{placeholder}</option>}
       {values.map((value) => (
         <option key={value} value={value}>
           {labels[value]}

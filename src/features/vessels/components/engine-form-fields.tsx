@@ -1,22 +1,27 @@
 import {
   ENGINE_POSITIONS,
   INSTALLATIONS,
-  installationLabel,
-  positionLabel,
   TACH_SOURCES,
-  tachSourceLabel,
 } from '../../../../shared/engines/engine.schema';
+import {
+  CYCLE_WORDS,
+  FUEL_WORDS,
+  INSTALLATION_WORDS,
+  POSITION_WORDS,
+  TACH_SOURCE_WORDS,
+} from '../../../../shared/engines/engine-words';
 import { TextField } from '../../../components/ui/field';
 import { toTextOrNull } from '../form-values';
 import { ChoiceField, Fieldset, NumberField, type SectionProps } from './engine-field-inputs';
 
 // Shown in this order, the usual choice first.
 const FUELS = ['petrol', 'diesel'] as const;
-const fuelLabel = { petrol: 'Petrol', diesel: 'Diesel' };
 const CYCLES = ['four-stroke', 'two-stroke'] as const;
-const cycleLabel = { 'four-stroke': 'Four-stroke', 'two-stroke': 'Two-stroke' };
 
-export function IdentityFields(form: SectionProps) {
+export function IdentityFields({
+  choosePosition = false,
+  ...form
+}: SectionProps & { choosePosition?: boolean }) {
   const { register, errors } = form;
   return (
     <Fieldset legend="Engine">
@@ -24,14 +29,15 @@ export function IdentityFields(form: SectionProps) {
         name="position"
         label="Position"
         values={ENGINE_POSITIONS}
-        labels={positionLabel}
+        labels={POSITION_WORDS}
+        placeholder={choosePosition ? 'Choose the position' : undefined}
         {...form}
       />
       <ChoiceField
         name="installation"
         label="Installation"
         values={INSTALLATIONS}
-        labels={installationLabel}
+        labels={INSTALLATION_WORDS}
         {...form}
       />
       <TextField
@@ -62,8 +68,8 @@ export function IdentityFields(form: SectionProps) {
         register={register}
         errors={errors}
       />
-      <ChoiceField name="fuel" label="Fuel" values={FUELS} labels={fuelLabel} {...form} />
-      <ChoiceField name="cycle" label="Cycle" values={CYCLES} labels={cycleLabel} {...form} />
+      <ChoiceField name="fuel" label="Fuel" values={FUELS} labels={FUEL_WORDS} {...form} />
+      <ChoiceField name="cycle" label="Cycle" values={CYCLES} labels={CYCLE_WORDS} {...form} />
     </Fieldset>
   );
 }
@@ -127,7 +133,7 @@ export function TachFields({
         name="tachSource"
         label="Signal source"
         values={TACH_SOURCES}
-        labels={tachSourceLabel}
+        labels={TACH_SOURCE_WORDS}
         register={register}
         errors={errors}
       />

@@ -25,6 +25,8 @@ import { FormActions } from './form-actions';
 interface EngineFormProps {
   /** The engine being edited; a new engine when absent. */
   engine?: EngineView;
+  /** A new engine starts as a copy of this one (a twin), all but its position and serial number. */
+  copyFrom?: EngineView;
   vesselId: string;
   /** When given, the engine can be moved to another of these vessels. */
   vessels?: Array<{ id: string; name: string }>;
@@ -45,6 +47,12 @@ function valuesOf(engine: EngineView | undefined, vesselId: string): Partial<Eng
   const values: Record<string, unknown> = {};
   for (const field of ENGINE_FIELDS) values[field] = engine[field as keyof EngineView];
   return values as Partial<EngineFormInput>;
+}
+
+/** A twin's values: the engine copied, with position and serial number left to fill in. */
+function copiedValues(source: EngineView, vesselId: string): Partial<EngineFormInput> {
+  const { position: _position, serialNumber: _serial, ...rest } = valuesOf(source, vesselId);
+  return { ...rest, vesselId, serialNumber: '' };
 }
 
 /** The number to dial into the helm tachometer, once the signal source is complete. */
@@ -73,7 +81,14 @@ function AttentionNote({ count }: { count: number }) {
 }
 
 /** Every field of an engine, checked with the shared schema here and again on the server. */
-export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: EngineFormProps) {
+export function EngineForm({
+  engine,
+  copyFrom,
+  vesselId,
+  vessels,
+  onSaved,
+  onCancel,
+}: EngineFormProps) {
   const save = useSaveEngine();
   const [refusal, setRefusal] = useState<string | null>(null);
   const { register, control, handleSubmit, setError, formState } = useForm<
@@ -82,7 +97,8 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
     EngineInput
   >({
     resolver: zodResolver(EngineInputSchema),
-    defaultValues: valuesOf(engine, vesselId),
+    defaultValues:
+      copyFrom && !engine ? copiedValues(copyFrom, vesselId) : valuesOf(engine, vesselId),
   });
   const dialHint = useDialHint(control);
   const errors = formState.errors;
@@ -119,7 +135,7 @@ export function EngineForm({ engine, vesselId, vessels, onSaved, onCancel }: Eng
           ))}
         </SelectField>
       )}
-      <IdentityFields register={register} errors={errors} />
+      <IdentityFields register={register} errors={errors} choosePosition={Boolean(copyFrom)} />
       <RatingFields register={register} errors={errors} />
       <TachFields register={register} errors={errors} dialHint={dialHint} />
       <CommissioningFields register={register} errors={errors} />

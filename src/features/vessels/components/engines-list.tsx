@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
-import { positionLabel } from '../../../../shared/engines/engine.schema';
+import { engineNameWords } from '../../../../shared/engines/engine-words';
 import type { EngineRow } from '../../../../shared/vessels/vessel-view';
+import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { Td } from '../../../components/ui/table';
 import { formatDate, formatRpmRange } from '../../../lib/format';
@@ -28,17 +29,36 @@ const labels: Record<Column, string> = {
 };
 
 export const engineName = (e: Pick<EngineRow, 'position' | 'maker' | 'model'>) =>
-  `${positionLabel[e.position]} · ${e.maker} ${e.model}`;
+  engineNameWords(e);
+
+/** Starts a new engine from this one: twin installations share everything but position and serial. */
+function CopyButton({ engine, onCopy }: { engine: EngineRow; onCopy?: (e: EngineRow) => void }) {
+  if (!onCopy || engine.archivedAt) return null;
+  return (
+    <div className="mt-2">
+      <Button
+        variant="secondary"
+        aria-label={`Copy ${engineName(engine)} to add the second engine`}
+        onClick={() => onCopy(engine)}
+      >
+        Copy for the twin
+      </Button>
+    </div>
+  );
+}
 
 /** Engines as a sortable table on wide screens and as cards on phones; each opens its engine page. */
 export function EnginesList({
   engines,
   showVessel = true,
   emptyText = 'No engines recorded yet.',
+  onCopy,
 }: {
   engines: EngineRow[];
   showVessel?: boolean;
   emptyText?: string;
+  /** When given, each engine in use offers to start a new engine as a copy of it. */
+  onCopy?: (engine: EngineRow) => void;
 }) {
   const sorting = useSorting<EngineRow, Column>(engines, columns, {
     key: showVessel ? 'vessel' : 'engine',
@@ -55,13 +75,19 @@ export function EnginesList({
       sort={sorting.sort}
       sortBy={sorting.sortBy}
       setSort={sorting.setSort}
-      cells={(e) => <EngineCells engine={e} showVessel={showVessel} />}
-      card={(e) => <EngineCard engine={e} showVessel={showVessel} />}
+      cells={(e) => <EngineCells engine={e} showVessel={showVessel} onCopy={onCopy} />}
+      card={(e) => <EngineCard engine={e} showVessel={showVessel} onCopy={onCopy} />}
     />
   );
 }
 
-function EngineCells({ engine: e, showVessel }: { engine: EngineRow; showVessel: boolean }) {
+interface RowProps {
+  engine: EngineRow;
+  showVessel: boolean;
+  onCopy?: (engine: EngineRow) => void;
+}
+
+function EngineCells({ engine: e, showVessel, onCopy }: RowProps) {
   return (
     <>
       <Td>
@@ -69,6 +95,7 @@ function EngineCells({ engine: e, showVessel }: { engine: EngineRow; showVessel:
           {engineName(e)}
         </Link>{' '}
         <ArchivedPill archivedAt={e.archivedAt} />
+        <CopyButton engine={e} onCopy={onCopy} />
       </Td>
       <Td className="figures">{e.serialNumber}</Td>
       {showVessel && (
@@ -96,7 +123,7 @@ function EngineCells({ engine: e, showVessel }: { engine: EngineRow; showVessel:
   );
 }
 
-function EngineCard({ engine: e, showVessel }: { engine: EngineRow; showVessel: boolean }) {
+function EngineCard({ engine: e, showVessel, onCopy }: RowProps) {
   return (
     <Card
       level={3}
@@ -129,6 +156,7 @@ function EngineCard({ engine: e, showVessel }: { engine: EngineRow; showVessel: 
       >
         Commissioning checklist
       </Link>
+      <CopyButton engine={e} onCopy={onCopy} />
     </Card>
   );
 }
