@@ -160,9 +160,5 @@ export type EngineFormInput = z.input<typeof EngineInputSchema>;
 /** Every field of the engine form, in the order the form shows them. */
 export const ENGINE_FIELDS = Object.keys(EngineFieldsSchema.shape) as Array<keyof EngineInput>;
 
-/** Older names of the words in engine-words.ts, kept for the modules that still use them. */
-export {
-  INSTALLATION_WORDS as installationLabel,
-  POSITION_WORDS as positionLabel,
-  TACH_SOURCE_WORDS as tachSourceLabel,
-} from './engine-words';
+/** The older name of POSITION_WORDS (engine-words.ts), kept for the server modules that use it. */
+export { POSITION_WORDS as positionLabel } from './engine-words';

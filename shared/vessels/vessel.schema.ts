@@ -41,9 +41,6 @@ export const VesselInputSchema = z.object({
 });
 export type VesselInput = z.infer<typeof VesselInputSchema>;
 
-/** The older name of VESSEL_TYPE_WORDS (vessel-words.ts). */
-export { VESSEL_TYPE_WORDS as vesselTypeLabel } from './vessel-words';
-
 /** Which records a list shows: the ones in use, the archived ones, or both. */
 export const ListStatusSchema = z.enum(['active', 'archived', 'all'], {
   error: 'The status filter (status) must be active, archived or all.',

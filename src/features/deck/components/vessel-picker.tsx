@@ -6,7 +6,7 @@ import { useDeckVessels, type DeckVessel } from '../device-records';
 import { ENGINE_STATE_WORDS, pickerEngines, type EngineRunState } from '../picker-state';
 import { useNow } from '../device';
 import { RunPageLink } from './run-page-link';
-import { capitalise } from '../format';
+import { positionWords } from '../../../../shared/engines/engine-words';
 
 const STATE_TONE: Record<EngineRunState, 'solid' | 'outline' | 'quiet'> = {
   'workshop-waiting': 'quiet',
@@ -60,7 +60,7 @@ function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; no
         {vessel.runs.map((run) => (
           <li key={run.id} className="rounded-md border-2 border-line bg-paper p-2">
             <p className="font-bold">
-              {capitalise(run.engine.position)} · {run.engine.maker} {run.engine.model}
+              {positionWords(run.engine.position)} · {run.engine.maker} {run.engine.model}
             </p>
             <p className="text-sm">
               {run.programName} · {run.phaseCount} phases
@@ -73,7 +73,7 @@ function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; no
         ))}
         {withoutRun.map((engine) => (
           <li key={engine.id} className="text-muted">
-            {capitalise(engine.position)} · {engine.maker} {engine.model}:{' '}
+            {positionWords(engine.position)} · {engine.maker} {engine.model}:{' '}
             {ENGINE_STATE_WORDS['no-run']}
           </li>
         ))}

@@ -1,10 +1,8 @@
-import { capitalise, formatDate, formatHours, formatRpmRange } from '../../../lib/format';
+import { engineNameWords, fuelAndCycleWords } from '../../../../shared/engines/engine-words';
+import { formatDate, formatHours, formatRpmRange } from '../../../lib/format';
 import type { EngineView } from '../../../../shared/vessels/vessel-view';
 
-const cycleLabel = { 'two-stroke': '2-stroke', 'four-stroke': '4-stroke' } as const;
-
-export const engineTitle = (engine: EngineView) =>
-  `${capitalise(engine.position)} · ${engine.maker} ${engine.model}`.trim();
+export const engineTitle = (engine: EngineView) => engineNameWords(engine);
 
 export function RatedRpm({ engine }: { engine: EngineView }) {
   return (
@@ -27,9 +25,7 @@ export function EngineDetails({ engine }: { engine: EngineView }) {
           <RatedRpm engine={engine} />
         </dd>
         <dt className="text-muted">Fuel and cycle</dt>
-        <dd>
-          {capitalise(engine.fuel)}, {cycleLabel[engine.cycle]}
-        </dd>
+        <dd>{fuelAndCycleWords(engine)}</dd>
         {engine.ratedPowerKw !== null && (
           <>
             <dt className="text-muted">Rated power</dt>

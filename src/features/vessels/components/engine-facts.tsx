@@ -1,8 +1,11 @@
-import { installationLabel, tachSourceLabel } from '../../../../shared/engines/engine.schema';
+import {
+  fuelAndCycleWords,
+  INSTALLATION_WORDS,
+  TACH_SOURCE_WORDS,
+} from '../../../../shared/engines/engine-words';
 import type { EngineView } from '../../../../shared/vessels/vessel-view';
 import { formatDate, formatHours, formatRpmRange } from '../../../lib/format';
 
-const cycleWord = { 'two-stroke': 'two-stroke', 'four-stroke': 'four-stroke' } as const;
 const orDash = (value: string | null) => value ?? '—';
 
 /** Each fact as label, value, and whether the value is figures. */
@@ -15,7 +18,7 @@ function engineFacts(engine: EngineView): Array<[string, string, boolean?]> {
     .filter(Boolean)
     .join(', ');
   const tach = [
-    tachSourceLabel[engine.tachSource],
+    TACH_SOURCE_WORDS[engine.tachSource],
     engine.poles !== null ? `${engine.poles} poles` : null,
     engine.pulleyRatio !== null ? `pulley ratio ${engine.pulleyRatio}` : null,
   ]
@@ -23,11 +26,8 @@ function engineFacts(engine: EngineView): Array<[string, string, boolean?]> {
     .join(', ');
   return [
     ['Serial number', engine.serialNumber, true],
-    ['Installation', installationLabel[engine.installation]],
-    [
-      'Fuel and cycle',
-      `${engine.fuel === 'petrol' ? 'Petrol' : 'Diesel'}, ${cycleWord[engine.cycle]}`,
-    ],
+    ['Installation', INSTALLATION_WORDS[engine.installation]],
+    ['Fuel and cycle', fuelAndCycleWords(engine)],
     ['Rated power', engine.ratedPowerKw !== null ? `${engine.ratedPowerKw} kW` : '—', true],
     ['Rated full throttle', `${formatRpmRange(engine.ratedRpmMin, engine.ratedRpmMax)} RPM`, true],
     ['Gear ratio', engine.gearRatio !== null ? `${engine.gearRatio}:1` : '—', true],

@@ -1,9 +1,6 @@
 import type { ReactNode } from 'react';
-import {
-  VESSEL_TYPES,
-  vesselTypeLabel,
-  type ListStatus,
-} from '../../../../shared/vessels/vessel.schema';
+import { VESSEL_TYPES, type ListStatus } from '../../../../shared/vessels/vessel.schema';
+import { VESSEL_TYPE_WORDS } from '../../../../shared/vessels/vessel-words';
 import { SelectField, TextField } from '../../../components/ui/field';
 import type { ChecklistState } from './status-pills';
 
@@ -65,7 +62,7 @@ export function VesselTypeFilter({
       <option value="">Any type</option>
       {VESSEL_TYPES.map((t) => (
         <option key={t} value={t}>
-          {vesselTypeLabel[t]}
+          {VESSEL_TYPE_WORDS[t]}
         </option>
       ))}
     </SelectField>

@@ -2,11 +2,12 @@ import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Card } from '../../../components/ui/card';
 import type { EngineView, VesselView } from '../../../../shared/vessels/vessel-view';
+import { VESSEL_TYPE_WORDS } from '../../../../shared/vessels/vessel-words';
 import { EngineDetails } from './engine-details';
 
 export function vesselFacts(vessel: VesselView): string {
   const length = vessel.lengthM !== null ? `${vessel.lengthM} m` : null;
-  return [vessel.type, length, vessel.homePort].filter(Boolean).join(' · ');
+  return [VESSEL_TYPE_WORDS[vessel.type], length, vessel.homePort].filter(Boolean).join(' · ');
 }
 
 /**

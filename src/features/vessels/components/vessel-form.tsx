@@ -5,9 +5,9 @@ import type { z } from 'zod';
 import {
   VESSEL_TYPES,
   VesselInputSchema,
-  vesselTypeLabel,
   type VesselInput,
 } from '../../../../shared/vessels/vessel.schema';
+import { VESSEL_TYPE_WORDS } from '../../../../shared/vessels/vessel-words';
 import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Alert } from '../../../components/ui/alert';
 import { SelectField, TextField } from '../../../components/ui/field';
@@ -58,7 +58,7 @@ function VesselFields({
       <SelectField label="Type" error={errors.type?.message} {...register('type')}>
         {VESSEL_TYPES.map((t) => (
           <option key={t} value={t}>
-            {vesselTypeLabel[t]}
+            {VESSEL_TYPE_WORDS[t]}
           </option>
         ))}
       </SelectField>

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { vesselTypeLabel } from '../../../../shared/vessels/vessel.schema';
+import { engineNameWords } from '../../../../shared/engines/engine-words';
+import { VESSEL_TYPE_WORDS } from '../../../../shared/vessels/vessel-words';
 import type { VesselView } from '../../../../shared/vessels/vessel-view';
 import { Card } from '../../../components/ui/card';
 import { Td } from '../../../components/ui/table';
@@ -10,7 +11,7 @@ import { ArchivedPill } from './status-pills';
 type Column = 'name' | 'type' | 'homePort' | 'skippers' | 'engines';
 const columns: Record<Column, (v: VesselView) => SortValue> = {
   name: (v) => v.name,
-  type: (v) => vesselTypeLabel[v.type],
+  type: (v) => VESSEL_TYPE_WORDS[v.type],
   homePort: (v) => v.homePort,
   skippers: (v) => v.skippers.map((s) => s.name).join(', '),
   engines: (v) => v.engines.length,
@@ -24,9 +25,7 @@ const labels: Record<Column, string> = {
 };
 
 const enginesText = (v: VesselView) =>
-  v.engines.length === 0
-    ? 'none yet'
-    : v.engines.map((e) => `${e.position} ${e.maker} ${e.model}`).join('; ');
+  v.engines.length === 0 ? 'none yet' : v.engines.map(engineNameWords).join('; ');
 
 /** Vessels as a sortable table on wide screens and as cards on phones. */
 export function VesselsList({ vessels }: { vessels: VesselView[] }) {
@@ -64,7 +63,7 @@ function VesselCells({ vessel: v }: { vessel: VesselView }) {
         {v.hin && <p className="figures text-sm text-muted">{v.hin}</p>}
       </Td>
       <Td>
-        {vesselTypeLabel[v.type]}
+        {VESSEL_TYPE_WORDS[v.type]}
         {v.lengthM !== null && <span className="figures text-muted"> · {v.lengthM} m</span>}
       </Td>
       <Td>{v.homePort || <span className="text-muted">—</span>}</Td>
@@ -96,7 +95,7 @@ function VesselListCard({ vessel: v }: { vessel: VesselView }) {
     >
       <ArchivedPill archivedAt={v.archivedAt} />
       <p className="text-muted">
-        {[vesselTypeLabel[v.type], v.lengthM !== null ? `${v.lengthM} m` : null, v.homePort]
+        {[VESSEL_TYPE_WORDS[v.type], v.lengthM !== null ? `${v.lengthM} m` : null, v.homePort]
           .filter(Boolean)
           .join(' · ')}
       </p>
