@@ -34,6 +34,40 @@ const optionLabel = ({ program, suitability }: Judged) =>
     ? program.name
     : `${program.name} — does not suit: ${suitability.reasons.join(' ')}`;
 
+interface ProgramSelectProps {
+  judged: Judged[];
+  chosen?: Judged;
+  loading: boolean;
+  onChoose: (programId: string) => void;
+}
+
+/** The list of programs, and why the chosen one does not suit the engine when it does not. */
+function ProgramSelect({ judged, chosen, loading, onChoose }: ProgramSelectProps) {
+  return (
+    <>
+      <SelectField
+        label="Break-in program"
+        value={chosen?.program.id ?? ''}
+        disabled={loading}
+        onChange={(event) => onChoose(event.target.value)}
+      >
+        {loading && <option value="">Loading programs…</option>}
+        {judged.map((j) => (
+          <option key={j.program.id} value={j.program.id}>
+            {optionLabel(j)}
+          </option>
+        ))}
+      </SelectField>
+      {chosen && !chosen.suitability.suits && (
+        <p className="font-semibold">
+          <span aria-hidden="true">⚠ </span>
+          This program does not suit this engine. {chosen.suitability.reasons.join(' ')}
+        </p>
+      )}
+    </>
+  );
+}
+
 interface AssignActionProps {
   suitability: Suitability;
   disabled: boolean;
@@ -97,27 +131,14 @@ export function ProgramChooser({ engineId, engine, onAssigned }: ChooserProps) {
   const onlyReason = isApiError(assign.error) && assign.error.fieldErrors[0]?.field === 'reason';
   return (
     <div className="flex flex-col gap-3">
-      <SelectField
-        label="Break-in program"
-        value={chosen?.program.id ?? ''}
-        disabled={programs.isPending}
-        onChange={(event) => setProgramId(event.target.value)}
-      >
-        {programs.isPending && <option value="">Loading programs…</option>}
-        {judged.map((j) => (
-          <option key={j.program.id} value={j.program.id}>
-            {optionLabel(j)}
-          </option>
-        ))}
-      </SelectField>
+      <ProgramSelect
+        judged={judged}
+        chosen={chosen}
+        loading={programs.isPending}
+        onChoose={setProgramId}
+      />
       {programs.isError && (
         <Alert title="Could not load the programs">{errorMessage(programs.error)}</Alert>
-      )}
-      {chosen && !chosen.suitability.suits && (
-        <p className="font-semibold">
-          <span aria-hidden="true">⚠ </span>
-          This program does not suit this engine. {chosen.suitability.reasons.join(' ')}
-        </p>
       )}
       <AssignAction
         key={chosen?.program.id}

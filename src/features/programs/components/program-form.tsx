@@ -25,6 +25,33 @@ import {
 import { formValuesOf, ProgramFormSchema } from '../program-form-schema';
 import { PhaseFields } from './phase-fields';
 
+/** Which engines the program is written for: the assign card lists suiting programs first. */
+function SuitsFields() {
+  const { register, formState } = useFormContext<ProgramFormValues>();
+  const error = (name: string) => errorAt(formState.errors, name);
+  return (
+    <div className="grid gap-3 sm:grid-cols-2">
+      <SelectField
+        label="Written for"
+        error={error('suits.engineKind')}
+        {...register('suits.engineKind')}
+      >
+        {EngineKindSchema.options.map((kind) => (
+          <option key={kind} value={kind}>
+            {ENGINE_KIND_WORDS[kind]}
+          </option>
+        ))}
+      </SelectField>
+      <TextField
+        label="Engines it suits, in your words"
+        hint="Optional, e.g. 40–60 hp four-stroke outboards"
+        error={error('suits.label')}
+        {...register('suits.label')}
+      />
+    </div>
+  );
+}
+
 /** The program's name, notes and first service. */
 function ProgramDetailsCard() {
   const { register, formState } = useFormContext<ProgramFormValues>();
@@ -33,25 +60,7 @@ function ProgramDetailsCard() {
     <Card title="Program">
       <div className="flex flex-col gap-4">
         <TextField label="Program name" error={error('name')} {...register('name')} />
-        <div className="grid gap-3 sm:grid-cols-2">
-          <SelectField
-            label="Written for"
-            error={error('suits.engineKind')}
-            {...register('suits.engineKind')}
-          >
-            {EngineKindSchema.options.map((kind) => (
-              <option key={kind} value={kind}>
-                {ENGINE_KIND_WORDS[kind]}
-              </option>
-            ))}
-          </SelectField>
-          <TextField
-            label="Engines it suits, in your words"
-            hint="Optional, e.g. 40–60 hp four-stroke outboards"
-            error={error('suits.label')}
-            {...register('suits.label')}
-          />
-        </div>
+        <SuitsFields />
         <Field label="Notes" error={error('notes')}>
           {(c) => (
             <textarea {...c} rows={3} className={`${controlClass} py-2`} {...register('notes')} />
