@@ -67,12 +67,15 @@ describe('the run page route', () => {
       [`GET /api/runs/${RUN_ID}/review`]: { status: 200, body: runOverview() },
     });
     const { router } = renderRoutes(createRoutes(createTestQueryClient()), { at: '/' });
-    const card = (await screen.findByRole('heading', { name: 'Little Auk' })).closest('section')!;
+    const card = (
+      await screen.findByRole('heading', { name: 'Little Auk' }, { timeout: 5000 })
+    ).closest('section')!;
     const link = await within(card).findByRole('link', { name: 'Run page' });
     expect(link).toHaveAttribute('href', `/runs/${RUN_ID}`);
     await userEvent.setup().click(link);
+    // The run page's code loads on arrival (a lazy route): give it time on a busy machine.
     expect(
-      await screen.findByRole('heading', { level: 1, name: 'Little Auk' }),
+      await screen.findByRole('heading', { level: 1, name: 'Little Auk' }, { timeout: 5000 }),
     ).toBeInTheDocument();
     expect(router.state.location.pathname).toBe(`/runs/${RUN_ID}`);
     expect(screen.getByText('Under way')).toBeInTheDocument();

@@ -1,9 +1,9 @@
+import { positionWords } from '../../../shared/engines/engine-words';
 import { orderEvents } from '../../../shared/runs/event-order';
 import { accountOrdered } from '../../../shared/runs/run-accounting';
 import { RunPatchItemSchema, type RunPatchItem } from '../../../shared/sync/sync.schema';
 import type { RingseatDb, RunPatchRecord, RunRecord } from '../../lib/db';
 import { DeckInputError, nextEventAt } from './device-events';
-import { capitalise } from './format';
 import { isLoggable, runPhases } from './run-phases';
 
 /*
@@ -15,7 +15,7 @@ import { isLoggable, runPhases } from './run-phases';
 export const NOTE_REQUIRED =
   'Write a note to the workshop (Note to the workshop) saying why the run goes with a phase not complete.';
 
-const label = (run: RunRecord) => `${capitalise(run.engine.position)} engine`;
+const label = (run: RunRecord) => `${positionWords(run.engine.position)} engine`;
 
 /** The run's verdict from what this device holds, voided entries left out, as the server judges it. */
 async function verdictHere(database: RingseatDb, run: RunRecord) {

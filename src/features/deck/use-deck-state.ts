@@ -1,17 +1,17 @@
 import { useMemo } from 'react';
 import type { Role } from '../../../shared/auth/auth.schema';
+import { positionWords } from '../../../shared/engines/engine-words';
 import type { RunRecord } from '../../lib/db';
 import type { StartChoice } from './components/outing-start';
 import type { VesselDeck } from './device-records';
 import { useNow, useWakeLock } from './device';
 import { engineSnapshot, type EngineSnapshot } from './engine-snapshot';
-import { capitalise } from './format';
 import type { PadEngine } from './reading-entry';
 import { signalSourceOf, type EngineSignal } from './reading-input';
 import { isLoggable } from './run-phases';
 import { useAlertSignals } from './use-alert-signals';
 
-export const engineLabel = (run: RunRecord) => capitalise(run.engine.position);
+export const engineLabel = (run: RunRecord) => positionWords(run.engine.position);
 export const refOf = (s: EngineSnapshot) => ({ runId: s.run.id, engineId: s.engineId });
 
 function padEngine(deck: VesselDeck, snapshot: EngineSnapshot): PadEngine {

@@ -49,7 +49,6 @@ function VesselDeckView({
     role,
   );
   const change = useChangeOuting();
-  const logReading = useLogReading();
   const shown = outing ? inOuting : snapshots.filter((s) => isLoggable(s.run));
   return (
     <div className="flex flex-col gap-3">
@@ -65,18 +64,7 @@ function VesselDeckView({
         </p>
       )}
       <EngineGrid deck={deck} shown={shown} role={role} />
-      {padEngines.length > 0 && (
-        <ReadingPad
-          key={padEngines.map((e) => `${e.engineId}:${e.phaseId}`).join()}
-          engines={padEngines}
-          lastRpm={last?.rpm ?? null}
-          lastThrottle={last?.throttle ?? null}
-          onLog={(entries, photo) => logReading.mutateAsync({ entries, photo })}
-        />
-      )}
-      {running && padEngines.length === 0 && (
-        <p>No engine in this outing can be logged by you right now.</p>
-      )}
+      <PadSection padEngines={padEngines} last={last} running={running} />
       {outing && (
         <OutingBar
           outing={outing}
@@ -96,6 +84,26 @@ function VesselDeckView({
         />
       )}
     </div>
+  );
+}
+
+/** The reading pad for the engines that can be logged now, or why none can. */
+function PadSection({
+  padEngines,
+  last,
+  running,
+}: Pick<ReturnType<typeof useDeckState>, 'padEngines' | 'last' | 'running'>) {
+  const logReading = useLogReading();
+  if (padEngines.length === 0)
+    return running ? <p>No engine in this outing can be logged by you right now.</p> : null;
+  return (
+    <ReadingPad
+      key={padEngines.map((e) => `${e.engineId}:${e.phaseId}`).join()}
+      engines={padEngines}
+      lastRpm={last?.rpm ?? null}
+      lastThrottle={last?.throttle ?? null}
+      onLog={(entries, photo) => logReading.mutateAsync({ entries, photo })}
+    />
   );
 }
 

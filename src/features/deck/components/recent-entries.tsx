@@ -93,16 +93,8 @@ function EntryRow({
   );
 }
 
-/** Why the entry is taken back: required, short; the entry itself stays in the log, struck through. */
-function VoidForm({
-  run,
-  targetId,
-  onDone,
-}: {
-  run: RunRef;
-  targetId: string;
-  onDone: () => void;
-}) {
+/** The reason typed, and the write: the reason is asked for before anything is stored. */
+function useVoidForm(run: RunRef, targetId: string, onDone: () => void) {
   const write = useVoidEntry();
   const [reason, setReason] = useState('');
   const [problem, setProblem] = useState<string | null>(null);
@@ -115,25 +107,39 @@ function VoidForm({
       setProblem(error instanceof DeckInputError ? error.message : 'The void could not be saved.');
     }
   };
+  return { reason, setReason, problem, submit, pending: write.isPending };
+}
+
+/** Why the entry is taken back: required, short; the entry itself stays in the log, struck through. */
+function VoidForm({
+  run,
+  targetId,
+  onDone,
+}: {
+  run: RunRef;
+  targetId: string;
+  onDone: () => void;
+}) {
+  const form = useVoidForm(run, targetId, onDone);
   return (
     <form
       noValidate
       className="flex flex-col gap-2 rounded-md border-2 border-ink p-2"
       onSubmit={(event) => {
         event.preventDefault();
-        void submit();
+        void form.submit();
       }}
     >
       <TextField
         label="Reason"
-        value={reason}
+        value={form.reason}
         maxLength={MAX_VOID_REASON}
         autoComplete="off"
-        error={problem ?? undefined}
-        onChange={(e) => setReason(e.target.value)}
+        error={form.problem ?? undefined}
+        onChange={(e) => form.setReason(e.target.value)}
       />
       <div className="flex gap-2">
-        <Button type="submit" pending={write.isPending} pendingLabel="Voiding…">
+        <Button type="submit" pending={form.pending} pendingLabel="Voiding…">
           Void entry
         </Button>
         <Button variant="secondary" onClick={onDone}>

@@ -27,15 +27,8 @@ interface SubmitSummaryProps {
 
 /** Every engine's phases as the workshop will see them, then one submit for all of them. */
 export function SubmitSummary({ engines, voidedOf, onClose, onSubmitted }: SubmitSummaryProps) {
-  const submit = useSubmitRuns();
   const [note, setNote] = useState('');
   const needsNote = engines.some((s) => s.account.verdict !== 'complete');
-  const missing = needsNote && note.trim() === '';
-  const missingId = useId();
-  const send = async () => {
-    await submit.mutateAsync({ runIds: engines.map((s) => s.run.id), submitNote: note });
-    onSubmitted?.();
-  };
   return (
     <section
       aria-labelledby="submit-summary"
@@ -57,6 +50,39 @@ export function SubmitSummary({ engines, voidedOf, onClose, onSubmitted }: Submi
         Once submitted, nothing more can be logged on{' '}
         {engines.length === 1 ? 'this run' : 'these runs'} unless the workshop sends it back.
       </p>
+      <SubmitActions
+        runIds={engines.map((s) => s.run.id)}
+        note={note}
+        missing={needsNote && note.trim() === ''}
+        onClose={onClose}
+        onSubmitted={onSubmitted}
+      />
+    </section>
+  );
+}
+
+/** The one submit (held back, with the field named, while the note is missing) and "Not yet". */
+function SubmitActions({
+  runIds,
+  note,
+  missing,
+  onClose,
+  onSubmitted,
+}: {
+  runIds: string[];
+  note: string;
+  missing: boolean;
+  onClose: () => void;
+  onSubmitted?: () => void;
+}) {
+  const submit = useSubmitRuns();
+  const missingId = useId();
+  const send = async () => {
+    await submit.mutateAsync({ runIds, submitNote: note });
+    onSubmitted?.();
+  };
+  return (
+    <>
       {missing && (
         <p id={missingId} className="font-semibold">
           <span aria-hidden="true">⚠ </span>Write the note to the workshop first (Note to the
@@ -78,13 +104,13 @@ export function SubmitSummary({ engines, voidedOf, onClose, onSubmitted }: Submi
           pendingLabel="Submitting…"
           onClick={() => void send().catch(() => undefined)}
         >
-          {submitLabel(engines.length)}
+          {submitLabel(runIds.length)}
         </Button>
         <Button variant="secondary" onClick={onClose}>
           Not yet
         </Button>
       </div>
-    </section>
+    </>
   );
 }
 

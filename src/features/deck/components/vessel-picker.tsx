@@ -3,7 +3,12 @@ import { DeckButtonLink } from './deck-link';
 import { Pill } from '../../../components/ui/pill';
 import type { Role } from '../../../../shared/auth/auth.schema';
 import { useDeckVessels, type DeckVessel } from '../device-records';
-import { ENGINE_STATE_WORDS, pickerEngines, type EngineRunState } from '../picker-state';
+import {
+  ENGINE_STATE_WORDS,
+  pickerEngines,
+  type EngineRunState,
+  type PickerEngine,
+} from '../picker-state';
 import { useNow } from '../device';
 import { RunPageLink } from './run-page-link';
 import { positionWords } from '../../../../shared/engines/engine-words';
@@ -45,7 +50,6 @@ export function VesselPicker({ role }: { role: Role }) {
 function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; now: number }) {
   const engines = vessel.vessel?.engines ?? [];
   const states = pickerEngines(vessel, role, now);
-  const stateOf = (runId: string) => states.find((s) => s.run.id === runId)!.state;
   // An outing under way needs the deck to end it, whatever else there is to do.
   const onDeck = vessel.outing !== null || states.some((s) => s.workable);
   const withoutRun = engines.filter((e) => !vessel.runs.some((r) => r.engine.id === e.id));
@@ -57,19 +61,8 @@ function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; no
         </Pill>
       )}
       <ul className="flex flex-col gap-2">
-        {vessel.runs.map((run) => (
-          <li key={run.id} className="rounded-md border-2 border-line bg-paper p-2">
-            <p className="font-bold">
-              {positionWords(run.engine.position)} · {run.engine.maker} {run.engine.model}
-            </p>
-            <p className="text-sm">
-              {run.programName} · {run.phaseCount} phases
-            </p>
-            <Pill tone={STATE_TONE[stateOf(run.id)]} className="mt-1">
-              {ENGINE_STATE_WORDS[stateOf(run.id)]}
-            </Pill>
-            <RunPageLink run={run} />
-          </li>
+        {states.map((engine) => (
+          <RunRow key={engine.run.id} engine={engine} />
         ))}
         {withoutRun.map((engine) => (
           <li key={engine.id} className="text-muted">
@@ -90,5 +83,23 @@ function VesselEntry({ vessel, role, now }: { vessel: DeckVessel; role: Role; no
         <p className="mt-3 text-sm">Nothing on this vessel for you to log right now.</p>
       )}
     </Card>
+  );
+}
+
+/** One engine's run: which engine, its program, where it stands in words, and its page. */
+function RunRow({ engine: { run, state } }: { engine: PickerEngine }) {
+  return (
+    <li className="rounded-md border-2 border-line bg-paper p-2">
+      <p className="font-bold">
+        {positionWords(run.engine.position)} · {run.engine.maker} {run.engine.model}
+      </p>
+      <p className="text-sm">
+        {run.programName} · {run.phaseCount} phases
+      </p>
+      <div className="flex flex-wrap items-center gap-x-3">
+        <Pill tone={STATE_TONE[state]}>{ENGINE_STATE_WORDS[state]}</Pill>
+        <RunPageLink run={run} />
+      </div>
+    </li>
   );
 }

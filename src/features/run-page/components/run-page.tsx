@@ -66,19 +66,7 @@ function RunPageView({
         </Section>
       )}
       {overview.certificate && run.state === 'signed-off' && (
-        <Section id="certificate" title="Certificate">
-          <p>
-            Certificate <strong className="figures">{overview.certificate.number}</strong>, issued{' '}
-            {formatDate(overview.certificate.issuedAt)}.
-          </p>
-          <a
-            href={certificateUrl(run.id)}
-            download
-            className={buttonClass('primary', 'self-start')}
-          >
-            Download the certificate
-          </a>
-        </Section>
+        <Certificate runId={run.id} certificate={overview.certificate} />
       )}
       <Section id="comments" title="The workshop's comments">
         <WorkshopComments reviews={overview.reviews} />
@@ -94,15 +82,30 @@ function RunPageView({
   );
 }
 
-function RunHeader({
-  run,
-  overview,
-  staff,
+/** The signed-off run's certificate: its number, when, and the PDF. */
+function Certificate({
+  runId,
+  certificate,
 }: {
-  run: RunDetail;
-  overview: RunReviewView;
-  staff: boolean;
+  runId: string;
+  certificate: NonNullable<RunReviewView['certificate']>;
 }) {
+  return (
+    <Section id="certificate" title="Certificate">
+      <p>
+        Certificate <strong className="figures">{certificate.number}</strong>, issued{' '}
+        {formatDate(certificate.issuedAt)}.
+      </p>
+      <a href={certificateUrl(runId)} download className={buttonClass('primary', 'self-start')}>
+        Download the certificate
+      </a>
+    </Section>
+  );
+}
+
+type HeaderProps = { run: RunDetail; overview: RunReviewView; staff: boolean };
+
+function RunHeader({ run, overview, staff }: HeaderProps) {
   const { engine } = run;
   return (
     <header className="flex flex-col gap-2">
@@ -123,25 +126,29 @@ function RunHeader({
           </>
         )}
       </dl>
-      <div className="flex flex-wrap gap-3">
-        {OPEN.has(run.state) && (
-          // The deck is its own app: a plain link loads it.
-          <a
-            href={`/deck/${encodeURIComponent(run.vessel.id)}`}
-            className={buttonClass('secondary')}
-          >
-            On deck
-          </a>
-        )}
-        {staff && (
-          <Link
-            to={`/runs/${encodeURIComponent(run.id)}/review`}
-            className={buttonClass('secondary')}
-          >
-            Full review
-          </Link>
-        )}
-      </div>
+      <RunLinks run={run} staff={staff} />
     </header>
+  );
+}
+
+/** Where to go from here: the deck while there is running to do, the full review for staff. */
+function RunLinks({ run, staff }: Omit<HeaderProps, 'overview'>) {
+  return (
+    <div className="flex flex-wrap gap-3">
+      {OPEN.has(run.state) && (
+        // The deck is its own app: a plain link loads it.
+        <a href={`/deck/${encodeURIComponent(run.vessel.id)}`} className={buttonClass('secondary')}>
+          On deck
+        </a>
+      )}
+      {staff && (
+        <Link
+          to={`/runs/${encodeURIComponent(run.id)}/review`}
+          className={buttonClass('secondary')}
+        >
+          Full review
+        </Link>
+      )}
+    </div>
   );
 }
