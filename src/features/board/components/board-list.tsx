@@ -11,7 +11,7 @@ const activity = (run: BoardRow) => (run.lastActivityAt ? formatDate(run.lastAct
 function RunLink({ run }: { run: BoardRow }) {
   return (
     <Link
-      to={`/runs/${run.id}`}
+      to={`/runs/${run.id}/review`}
       className="inline-flex min-h-touch items-center font-bold underline underline-offset-4"
     >
       {run.vessel.name}

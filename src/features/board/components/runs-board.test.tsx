@@ -72,7 +72,10 @@ describe('RunsBoard', () => {
     );
     const table = screen.getByRole('table');
     const [, first, second] = within(table).getAllByRole('row');
-    expect(within(first).getByRole('link', { name: /Petrel/ })).toHaveAttribute('href', '/runs/r1');
+    expect(within(first).getByRole('link', { name: /Petrel/ })).toHaveAttribute(
+      'href',
+      '/runs/r1/review',
+    );
     expect(first).toHaveTextContent('Submitted for review');
     expect(first).toHaveTextContent('Rule broken');
     expect(within(first).getByRole('progressbar')).toHaveAttribute('aria-valuenow', '100');
