@@ -14,7 +14,7 @@ beforeEach(clearDevice);
 const entriesOf = async () => {
   const user = userEvent.setup();
   showDeck();
-  await user.click(await screen.findByText('Recent entries'));
+  await user.click(await screen.findByRole('button', { name: 'Recent entries' }));
   return { user, list: screen.getByRole('list', { name: 'Port: recent entries' }) };
 };
 

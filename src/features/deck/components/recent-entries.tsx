@@ -24,28 +24,41 @@ export function RecentEntries({
   label: string;
   phaseName: (id: string) => string;
 }) {
+  const [open, setOpen] = useState(false);
   const [voiding, setVoiding] = useState<string | null>(null);
+  const listId = useId();
   const shown = entries.slice(0, SHOWN);
+  // A button rather than <details>: it is named and announced as one on every browser.
   return (
-    <details className="text-sm">
-      <summary className="flex min-h-touch cursor-pointer items-center font-semibold">
+    <div className="flex flex-col gap-1 text-sm">
+      <Button
+        variant="quiet"
+        className="justify-start px-0"
+        aria-expanded={open}
+        aria-controls={listId}
+        onClick={() => setOpen(!open)}
+      >
         Recent entries
-      </summary>
-      {shown.length === 0 && <p>Nothing logged yet.</p>}
-      <ol aria-label={`${label}: recent entries`} className="flex flex-col gap-2">
-        {shown.map((entry) => (
-          <EntryRow
-            key={entry.event.id}
-            entry={entry}
-            words={entryText(entry.event, phaseName)}
-            canVoid={mayVoid(entry, role)}
-            open={voiding === entry.event.id}
-            onOpen={(open) => setVoiding(open ? entry.event.id : null)}
-            run={run}
-          />
-        ))}
-      </ol>
-    </details>
+      </Button>
+      {open && (
+        <div id={listId}>
+          {shown.length === 0 && <p>Nothing logged yet.</p>}
+          <ol aria-label={`${label}: recent entries`} className="flex flex-col gap-2">
+            {shown.map((entry) => (
+              <EntryRow
+                key={entry.event.id}
+                entry={entry}
+                words={entryText(entry.event, phaseName)}
+                canVoid={mayVoid(entry, role)}
+                open={voiding === entry.event.id}
+                onOpen={(on) => setVoiding(on ? entry.event.id : null)}
+                run={run}
+              />
+            ))}
+          </ol>
+        </div>
+      )}
+    </div>
   );
 }
 
