@@ -29,8 +29,8 @@ import { BoardService } from './features/review/board.service.js';
 import { ReadingsService } from './features/review/readings.service.js';
 import { reviewRouter } from './features/review/review.router.js';
 import { ReviewService } from './features/review/review.service.js';
-import { RunSummaries } from './features/review/run-summaries.js';
-import { hasOpenRun } from './features/runs/run-access.js';
+import { forgetSummary, RunSummaries } from './features/review/run-summaries.js';
+import { hasOpenRun, latestRunsOf } from './features/runs/run-access.js';
 import { RunCancellation } from './features/runs/cancel-run.js';
 import { runsRouter } from './features/runs/runs.router.js';
 import { RunsService } from './features/runs/runs.service.js';
@@ -107,7 +107,7 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   const team = new TeamService(db, lucia, clock);
   api.use(teamRouter({ service: team, publicOrigin, outbox }));
   api.use(inviteAcceptanceRouter({ service: team, lucia, limiter }));
-  const recordChecks: VesselRecordChecks = { hasOpenRun, checklistsOf };
+  const recordChecks: VesselRecordChecks = { hasOpenRun, checklistsOf, latestRunsOf };
   const vessels = new VesselsService(db, recordChecks, clock);
   api.use(vesselsRouter(vessels));
   api.use(skipperLinksRouter(new SkipperLinksService(db, vessels)));
@@ -123,7 +123,13 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   api.use(boardRouter(new BoardService(db, summaries, clock)));
   api.use(reviewRouter(new ReviewService(db, clock), new ReadingsService(db)));
   const store = new CertificateStore(dataDir);
-  api.use(signOffRouter(new SignOffService(db, clock, outbox, store)));
+  api.use(
+    signOffRouter(
+      new SignOffService(db, clock, outbox, store, (manager, runId) =>
+        forgetSummary(manager, runId),
+      ),
+    ),
+  );
   api.use(serviceDueRouter(new ServiceDueService(db, summaries, clock)));
   api.use(engineRecordRouter(db, summaries, clock));
   api.use(apiNotFound);

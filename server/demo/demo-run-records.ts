@@ -91,7 +91,7 @@ async function addDemoRun(
     const bands: Record<string, RpmBand> = Object.fromEntries(
       program.definition.phases.map((p) => [p.id, resolvePhaseBand(p, engine)]),
     );
-    const phases = frozenPhases(program.definition, bands);
+    const phases = frozenPhases(program.definition, bands, {});
     simulated =
       index === 0
         ? firstEngineEvents(plan, engine, phases)

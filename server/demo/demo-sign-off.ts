@@ -52,7 +52,13 @@ export async function addDemoSignOff(manager: EntityManager, input: SignedOffInp
     comments,
     technician: { name: technician.name, role: technician.role },
   });
-  await addReview(manager, ctx, technician, 'confirmed', comments, at);
+  await addReview(
+    manager,
+    ctx,
+    technician,
+    { decision: 'confirmed', comments, rerunPhaseIds: [] },
+    at,
+  );
   await insertCertificate(manager, ctx, {
     id: randomUUID(),
     number,
@@ -97,6 +103,7 @@ function signedOffContext(input: SignedOffInput): RunContext {
       events: [],
       eventsTotal: 0,
       readingCount: charts.reduce((n, c) => n + c.readingCount, 0),
+      voidedCount: 0,
     },
     skippers: input.skippers.map((s) => ({ id: s.id, name: s.name, email: s.email })),
   };

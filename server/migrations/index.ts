@@ -5,6 +5,7 @@ import { RunPatches1796163491458 } from './1796163491458-RunPatches.js';
 import { WorkshopFleet1796163738205 } from './1796163738205-WorkshopFleet.js';
 import { ReviewSignOff1796163848909 } from './1796163848909-ReviewSignOff.js';
 import { RunEventLeanIndexes1796250000000 } from './1796250000000-RunEventLeanIndexes.js';
+import { ReturnsAndVoids1796300000000 } from './1796300000000-ReturnsAndVoids.js';
 import { ServiceRecords1796300100000 } from './1796300100000-ServiceRecords.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
@@ -16,5 +17,6 @@ export const MIGRATIONS: Function[] = [
   WorkshopFleet1796163738205,
   ReviewSignOff1796163848909,
   RunEventLeanIndexes1796250000000,
+  ReturnsAndVoids1796300000000,
   ServiceRecords1796300100000,
 ];

@@ -47,6 +47,11 @@ export function resolvePhaseBand(phase: Pick<Phase, 'band'>, engine: EngineRatin
 export interface ResolvedPhase extends Omit<Phase, 'band' | 'requiredMinutes'> {
   band: RpmBand;
   requiredMs: number;
+  /**
+   * Set when the workshop sent the phase back to be run again: only time from this instant
+   * counts toward it (the re-run rule at the top of shared/runs/phase-tally.ts).
+   */
+  countsFromMs?: number;
 }
 
 const MS_PER_MINUTE = 60_000;

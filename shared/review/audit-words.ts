@@ -10,6 +10,7 @@ export const AUDIT_ACTION_WORDS: Record<string, string> = {
   'mail-failed': 'E-mail not sent',
   'service-reminder-sent': 'Service reminder sent',
   'first-service-recorded': 'First service recorded',
+  'entry-voided': 'Entry voided',
   'run-cancelled': 'Run cancelled',
   'checklist-completed': 'Checklist completed',
   'checklist-reopened': 'Checklist reopened',

@@ -5,6 +5,7 @@ import type { RunAccount } from '../runs/run-accounting';
 import type { RunEvent } from '../runs/run-event.schema';
 import { walkTimeline } from '../runs/timeline';
 import { keepIndices } from './downsample';
+import { withoutVoided } from '../runs/voids';
 
 /*
  * The review chart plots each phase against its own running time (minutes the engine ran in
@@ -112,7 +113,8 @@ export function phaseCharts(
   options: { maxPoints?: number; maxHoldMs?: number } = {},
 ): PhaseChart[] {
   const maxPoints = options.maxPoints ?? 600;
-  const byPhase = collectSegments(ordered, phases, options.maxHoldMs);
+  // Voided readings are not drawn: they hold no time (shared/runs/voids.ts).
+  const byPhase = collectSegments(withoutVoided(ordered), phases, options.maxHoldMs);
   return phases.map((phase, index) => {
     const s = byPhase.get(phase.id)!;
     const kept = keepIndices(

@@ -2,6 +2,7 @@ import type { ResolvedPhase } from '../programs/resolve-band';
 import { bandState, type BandState } from '../runs/phase-rules';
 import type { Reading } from '../runs/run-event.schema';
 import type { CsvCell } from './csv';
+import type { VoidedMark } from './views';
 
 /** One reading as the review page's table and the CSV export show it. */
 export interface ReadingRow {
@@ -26,12 +27,15 @@ export interface ReadingRow {
   lat: number | null;
   lon: number | null;
   note: string | null;
+  /** Set when the reading was taken back: it counts for nothing (shared/runs/voids.ts). */
+  voided: VoidedMark | null;
 }
 
 export function readingRow(
   reading: Reading,
   receivedAt: number,
   phase: ResolvedPhase | undefined,
+  voided: VoidedMark | null = null,
 ): ReadingRow {
   return {
     id: reading.id,
@@ -52,6 +56,7 @@ export function readingRow(
     lat: reading.lat ?? null,
     lon: reading.lon ?? null,
     note: reading.note ?? null,
+    voided,
   };
 }
 
@@ -80,6 +85,7 @@ export const READING_CSV_HEADER: readonly string[] = [
   'longitude',
   'note',
   'reading id',
+  'voided (reason, by)',
 ];
 
 const iso = (ms: number) => new Date(ms).toISOString();
@@ -103,5 +109,6 @@ export function readingCsvCells(row: ReadingRow): CsvCell[] {
     row.lon,
     row.note,
     row.id,
+    row.voided ? `${row.voided.reason} (${row.voided.byName})` : '',
   ];
 }

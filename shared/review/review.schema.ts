@@ -19,10 +19,21 @@ export const SignOffInputSchema = z
         error: `The comments (comments) can have at most ${MAX_COMMENTS} characters.`,
       })
       .default(''),
+    /** The phases to run again (ids of the run's program); at least one when returning. */
+    rerunPhaseIds: z
+      .array(z.string({ error: 'Each phase to run again (rerunPhaseIds) must be a phase id.' }), {
+        error: 'The phases to run again (rerunPhaseIds) must be a list.',
+      })
+      .max(50, { error: 'Choose at most 50 phases to run again (rerunPhaseIds).' })
+      .default([]),
   })
   .refine((input) => input.decision !== 'return' || input.comments.length > 0, {
     error: 'Write what the skipper should do (comments) when you return a run.',
     path: ['comments'],
+  })
+  .refine((input) => input.decision !== 'return' || input.rerunPhaseIds.length > 0, {
+    error: 'Choose at least one phase to run again (rerunPhaseIds) when you return a run.',
+    path: ['rerunPhaseIds'],
   });
 export type SignOffInput = z.infer<typeof SignOffInputSchema>;
 export type SignOffFormValues = z.input<typeof SignOffInputSchema>;
@@ -57,6 +68,7 @@ export const BOARD_SHOWS = [
   'submitted',
   'signed-off',
   'returned',
+  'cancelled',
 ] as const;
 export type BoardShow = (typeof BOARD_SHOWS)[number];
 
@@ -68,7 +80,6 @@ export const BoardQuerySchema = z.object({
     .default('action'),
   q: z
     .string({ error: 'The search text (q) must be text.' })
-  'cancelled',
     .trim()
     .max(80, { error: 'The search text (q) can have at most 80 characters.' })
     .default(''),
@@ -80,3 +91,14 @@ export const BoardQuerySchema = z.object({
     .default(100),
 });
 export type BoardQuery = z.infer<typeof BoardQuerySchema>;
+
+/** A technician takes back a reading or a note from the review page (POST /api/runs/:id/voids). */
+export const VoidInputSchema = z.object({
+  targetId: z.uuid({ error: 'Choose the entry to void (targetId).' }),
+  reason: z
+    .string({ error: 'Say why the entry is voided (reason).' })
+    .trim()
+    .min(1, { error: 'Say why the entry is voided (reason).' })
+    .max(200, { error: 'The reason (reason) can have at most 200 characters.' }),
+});
+export type VoidInput = z.infer<typeof VoidInputSchema>;

@@ -52,11 +52,19 @@ export interface BoardView {
   runs: BoardRow[];
 }
 
+/** An entry taken back: shown struck through with why and by whom (shared/runs/voids.ts). */
+export interface VoidedMark {
+  reason: string;
+  byName: string;
+  /** Time of the void on the device that made it, epoch ms. */
+  at: number;
+}
+
 export type LoggedEvent =
   | { kind: 'session-start' | 'session-stop'; id: string; at: number }
   | { kind: 'phase-advance'; id: string; at: number; phaseId: string }
   | { kind: 'alert'; id: string; at: number; phaseId: string | null; code: string; message: string }
-  | { kind: 'note'; id: string; at: number; text: string };
+  | { kind: 'note'; id: string; at: number; text: string; voided: VoidedMark | null };
 
 export interface ReviewPhase {
   id: string;
@@ -71,6 +79,10 @@ export interface ReviewPhase {
   timeUnderMs: number;
   longestFullThrottleMs: number;
   progressShare: number;
+  /** Time logged before the phase was sent back to be run again: shown, not counted. */
+  setAsideMs: number;
+  /** When the phase was sent back (epoch ms), or null. */
+  countsFromMs: number | null;
   verdict: Verdict;
   reasons: RunReason[];
   firstAt: number | null;
@@ -94,6 +106,8 @@ export interface RunReviewView {
     currentPhaseId: string | null;
     createdAt: string;
     submittedAt: string | null;
+    /** The skipper's note when submitting with a phase not complete. */
+    submitNote: string | null;
     signedOffAt: string | null;
     lastEventAt: number | null;
     clockSkewMs: number | null;
@@ -108,9 +122,13 @@ export interface RunReviewView {
   events: LoggedEvent[];
   eventsTotal: number;
   readingCount: number;
+  /** Readings and notes taken back, however many (the readings table marks each one). */
+  voidedCount: number;
   reviews: Array<{
     decision: 'confirmed' | 'returned';
     comments: string;
+    /** Names of the phases sent back to be run again. */
+    rerunPhaseNames: string[];
     verdict: string;
     reviewerName: string;
     decidedAt: string;

@@ -2,6 +2,7 @@ import type { RpmBand } from '../programs/phase-band.schema';
 import type { ResolvedPhase } from '../programs/resolve-band';
 import { orderEvents } from './event-order';
 import { bandState } from './phase-rules';
+import { withoutVoided } from './voids';
 import { accountOrdered, type AccountingOptions } from './run-accounting';
 import type { Reading, RunEvent } from './run-event.schema';
 import type { TimelineEnd } from './timeline';
@@ -34,18 +35,34 @@ export interface LiveTimerState {
   heldReading: { reading: Reading; holdEndsMs: number } | null;
 }
 
+/** The latest moment the workshop sent phases back, and the first phase it sent back then. */
+export function latestReturn(
+  phases: readonly ResolvedPhase[],
+): { atMs: number; index: number } | null {
+  let found: { atMs: number; index: number } | null = null;
+  phases.forEach((p, index) => {
+    if (p.countsFromMs !== undefined && (found === null || p.countsFromMs > found.atMs))
+      found = { atMs: p.countsFromMs, index };
+  });
+  return found;
+}
+
 /**
  * The phase the skipper is on: named by the newest phase-advance or reading that names a phase
- * of this program; the first phase before any.
+ * of this program; the first phase before any. After a return, what was logged before it no
+ * longer decides: the skipper starts again on the first phase sent back.
  */
 function currentPhaseIndex(ordered: readonly RunEvent[], phases: readonly ResolvedPhase[]): number {
   const indexById = new Map(phases.map((p, i) => [p.id, i]));
+  const returned = latestReturn(phases);
   for (let i = ordered.length - 1; i >= 0; i--) {
     const event = ordered[i];
+    if (returned !== null && event.at < returned.atMs) break;
     if (event.kind !== 'reading' && event.kind !== 'phase-advance') continue;
     const index = indexById.get(event.phaseId);
     if (index !== undefined) return index;
   }
+  if (returned !== null) return returned.index;
   return phases.length > 0 ? 0 : -1;
 }
 
@@ -67,7 +84,7 @@ export function liveTimerState(
   nowMs: number,
   options: Omit<AccountingOptions, 'untilMs'> = {},
 ): LiveTimerState {
-  const ordered = orderEvents(events, options.engineId);
+  const ordered = withoutVoided(orderEvents(events, options.engineId));
   const newestMs = ordered.length > 0 ? ordered[ordered.length - 1].at : nowMs;
   // A clock set back must not make time run backwards or go negative: hold at the newest event.
   const now = Math.max(nowMs, newestMs);

@@ -4,6 +4,23 @@ import { durationWords, minutesToMs, ONE_HOUR_MS, secondsToMs } from './duration
 import { bandState, OVER_BAND_GRACE_MS, ruleBreaches, type RunReason } from './phase-rules';
 import { maxTotalInWindow, SteadyTracker, stretchMs, StretchTracker } from './stretches';
 
+/*
+ * RE-RUN RULE: how time counts for a phase the workshop sent back.
+ *
+ * When the workshop returns a run it names the phases to run again; each such phase gets the
+ * moment of the return (server time) as `countsFromMs`, the latest return winning. From then on:
+ *
+ * 1. Only engine time from that moment on counts toward the phase: in-band time, the time over
+ *    and under, and every rule (full throttle, idling, steady speed, over the band). The phase
+ *    is run again from nothing.
+ * 2. Time logged on the phase before that moment is kept and shown as "set aside" (setAsideMs),
+ *    never counted: a reading that holds across the moment counts only for its part after it.
+ * 3. Phases not sent back keep everything they had: the return does not touch them.
+ *
+ * The phone, the review and the certificate all resolve the run's phases with the same
+ * `countsFromMs` (frozenPhases), so they count the same time.
+ */
+
 export type Verdict = 'complete' | 'incomplete' | 'breached';
 
 export interface PhaseAccount {
@@ -17,6 +34,10 @@ export interface PhaseAccount {
   maxFullThrottleInHourMs: number;
   /** min(1, time in band / required). */
   progressShare: number;
+  /** Time logged before the phase was sent back to be run again: shown, not counted. */
+  setAsideMs: number;
+  /** When the phase was sent back (epoch ms); null when it never was. */
+  countsFromMs: number | null;
   verdict: Verdict;
   reasons: RunReason[];
 }
@@ -30,6 +51,7 @@ export class PhaseTally {
   private inBandMs = 0;
   private overMs = 0;
   private underMs = 0;
+  private setAsideMs = 0;
   private firstMs: number | null = null;
   private lastMs = 0;
   private readonly burstsAllowed: boolean;
@@ -46,6 +68,12 @@ export class PhaseTally {
   }
 
   add(fromMs: number, toMs: number, rpm: number, throttle: ThrottlePosition): void {
+    const countsFrom = this.phase.countsFromMs;
+    if (countsFrom !== undefined && fromMs < countsFrom) {
+      this.setAsideMs += Math.min(toMs, countsFrom) - fromMs;
+      if (toMs <= countsFrom) return;
+      fromMs = countsFrom;
+    }
     const state = bandState(rpm, throttle, this.phase);
     const ms = toMs - fromMs;
     if (state === 'in-band') this.inBandMs += ms;
@@ -88,6 +116,8 @@ export class PhaseTally {
       longestFullThrottleMs: full.reduce((most, s) => Math.max(most, stretchMs(s)), 0),
       maxFullThrottleInHourMs: fullThrottleHour.totalMs,
       progressShare: Math.min(1, this.inBandMs / this.phase.requiredMs),
+      setAsideMs: this.setAsideMs,
+      countsFromMs: this.phase.countsFromMs ?? null,
       verdict: breaches.length > 0 ? 'breached' : done ? 'complete' : 'incomplete',
       reasons: done ? breaches : [...breaches, this.shortOfTime()],
     };

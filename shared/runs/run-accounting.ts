@@ -2,9 +2,12 @@ import type { ResolvedPhase } from '../programs/resolve-band';
 import { orderEvents } from './event-order';
 import { PhaseTally, type PhaseAccount, type Verdict } from './phase-tally';
 import type { Reading, RunEvent } from './run-event.schema';
+import { withoutVoided } from './voids';
 import { walkTimeline, type TimelineEnd, type TimelineOptions } from './timeline';
 
-// How time is attributed to phases is set out at the top of timeline.ts.
+// How time is attributed to phases is set out at the top of timeline.ts; how a voided entry
+// drops out, at the top of voids.ts; how a phase sent back to be run again counts, at the top
+// of phase-tally.ts.
 
 export type { PhaseAccount, Verdict } from './phase-tally';
 
@@ -29,12 +32,13 @@ export function runVerdict(phases: readonly PhaseAccount[]): Verdict {
   return phases.every((p) => p.verdict === 'complete') ? 'complete' : 'incomplete';
 }
 
-/** Accounts events already in (at, id) order; also returns how the timeline ended. */
+/** Accounts events already in (at, id) order, voided entries left out; also returns how the timeline ended. */
 export function accountOrdered(
-  ordered: readonly RunEvent[],
+  all: readonly RunEvent[],
   phases: readonly ResolvedPhase[],
   options: TimelineOptions = {},
 ): { account: RunAccount; end: TimelineEnd } {
+  const ordered = withoutVoided(all);
   const tallies = new Map(phases.map((p) => [p.id, new PhaseTally(p)]));
   let unassignedMs = 0;
   // Readings of one phase come in long runs, so remember the last lookup.

@@ -87,7 +87,7 @@ describe('run event schemas', () => {
     expect(firstIssue({ ...valid, kind: 'anchor-drop' })).toEqual({
       field: 'kind',
       message:
-        'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.',
+        'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert, note or void.',
     });
   });
 });

@@ -162,6 +162,30 @@ export const NoteEventSchema = z.object({
 });
 export type NoteEvent = z.infer<typeof NoteEventSchema>;
 
+/** Kinds of entry a void may name: what a person typed. Alerts, sessions and phase moves stand. */
+export const VOIDABLE_KINDS = ['reading', 'note'] as const;
+
+export const MAX_VOID_REASON = 200;
+
+/**
+ * Takes back one earlier entry (a reading or a note) of the same run. Entries are never edited
+ * or deleted: the void is an entry of its own, synced like any other, and accounting leaves the
+ * named entry out (see voids.ts).
+ */
+export const VoidEventSchema = z.object({
+  kind: z.literal('void'),
+  ...eventBase,
+  targetId: z.uuid({ error: 'Choose the entry to void (targetId).' }),
+  reason: z.string({ error: 'Say why the entry is voided (reason).' }).check(
+    z.trim(),
+    z.minLength(1, { error: 'Say why the entry is voided (reason).' }),
+    z.maxLength(MAX_VOID_REASON, {
+      error: `The reason (reason) can have at most ${MAX_VOID_REASON} characters.`,
+    }),
+  ),
+});
+export type VoidEvent = z.infer<typeof VoidEventSchema>;
+
 export const RunEventSchema = z.discriminatedUnion(
   'kind',
   [
@@ -171,10 +195,11 @@ export const RunEventSchema = z.discriminatedUnion(
     PhaseAdvanceSchema,
     AlertEventSchema,
     NoteEventSchema,
+    VoidEventSchema,
   ],
   {
     error:
-      'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert or note.',
+      'The event kind (kind) must be session-start, session-stop, reading, phase-advance, alert, note or void.',
   },
 );
 export type RunEvent = z.infer<typeof RunEventSchema>;

@@ -19,6 +19,16 @@ export interface CommissionedEngine extends RunEngine {
   commissionedOn: string | null;
 }
 
+/** The workshop's latest decision on a run, as the skipper and the workshop see it. */
+export interface RunDecisionView {
+  decision: 'confirmed' | 'returned';
+  comments: string;
+  /** The phases sent back to be run again (ids of the run's program); empty when confirmed. */
+  rerunPhaseIds: string[];
+  reviewerName: string;
+  decidedAt: string;
+}
+
 /** A run as the API lists it (GET /api/runs, /api/engines/:id/runs). */
 export interface RunView {
   id: string;
@@ -36,6 +46,13 @@ export interface RunView {
   /** Device time of the newest event, epoch ms. */
   lastEventAt: number | null;
   submittedAt: string | null;
+  /** The skipper's note when the run was submitted with a phase not complete. */
+  submitNote: string | null;
+  /** For each phase sent back to be run again, the moment it was sent back (epoch ms). */
+  rerunFrom: Record<string, number>;
+  lastDecision: RunDecisionView | null;
+  /** Set once signed off; the PDF is GET /api/runs/:id/certificate. */
+  certificateNumber: string | null;
   signedOffAt: string | null;
   createdAt: string;
   updatedAt: string;

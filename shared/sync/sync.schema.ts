@@ -12,6 +12,7 @@ import type { VesselView } from '../vessels/vessel-view';
  */
 
 export const MAX_PUSH_ITEMS = 2000;
+export const MAX_SUBMIT_NOTE = 2000;
 
 /** A device-made event (reading, session start/stop, phase advance, alert, note) for one run. */
 export const EventItemSchema = z.object({
@@ -23,7 +24,8 @@ export type EventItem = z.infer<typeof EventItemSchema>;
 
 /**
  * A change to the run itself. `id` makes it idempotent like an event. Fields left out are not
- * changed. `submit` asks for the run to go to the workshop for review.
+ * changed. `submit` asks for the run to go to the workshop for review; with a phase not complete
+ * it needs `submitNote`, which the workshop reads on the review.
  */
 export const RunPatchItemSchema = z.object({
   type: z.literal('run-patch'),
@@ -41,6 +43,15 @@ export const RunPatchItemSchema = z.object({
       ),
   ),
   submit: z.optional(z.literal(true)),
+  /** Why the run goes to the workshop with a phase not complete; required then (see apply-items). */
+  submitNote: z.optional(
+    z.string({ error: 'The note to the workshop (submitNote) must be text.' }).check(
+      z.trim(),
+      z.maxLength(MAX_SUBMIT_NOTE, {
+        error: `The note to the workshop (submitNote) can have at most ${MAX_SUBMIT_NOTE} characters.`,
+      }),
+    ),
+  ),
 });
 export type RunPatchItem = z.infer<typeof RunPatchItemSchema>;
 

@@ -1,4 +1,5 @@
 import type { EngineInput } from '../engines/engine.schema';
+import type { RunState } from '../runs/run.schema';
 import type { VesselType } from './vessel.schema';
 
 /** An engine as the API answers it: every input field plus its id and times. */
@@ -9,6 +10,8 @@ export interface EngineView extends Omit<EngineInput, 'vesselId'> {
   updatedAt: string;
   /** Present on the engine routes; GET /api/vessels lists only engines in use. */
   archivedAt?: string | null;
+  /** In vessel lists (GET /api/vessels, the device's pull): the engine's newest run, if any. */
+  latestRun?: { id: string; state: RunState } | null;
 }
 
 export interface SkipperRef {

@@ -13,6 +13,7 @@ export type AuditAction =
   | 'mail-failed'
   | 'service-reminder-sent'
   | 'first-service-recorded'
+  | 'entry-voided'
   | 'run-cancelled'
   | 'checklist-completed'
   | 'checklist-reopened';

@@ -8,10 +8,11 @@ import {
   readingRow,
   type ReadingRow,
 } from '../../../shared/review/readings.js';
-import type { ReadingsPage } from '../../../shared/review/views.js';
+import type { ReadingsPage, VoidedMark } from '../../../shared/review/views.js';
 import type { Reading } from '../../../shared/runs/run-event.schema.js';
 import type { Run } from '../runs/run.entity.js';
 import { visibleRun } from '../runs/run-access.js';
+import { voidMarks } from '../runs/run-voids.js';
 
 type Row = { body: string; receivedAt: number };
 
@@ -29,11 +30,14 @@ const slug = (text: string) =>
 export class ReadingsService {
   constructor(private readonly dataSource: DataSource) {}
 
-  private rowsOf(run: Run, rows: Row[]): ReadingRow[] {
-    const phases = new Map(frozenPhases(run.program, run.bands).map((p) => [p.id, p]));
+  private rowsOf(run: Run, rows: Row[], voided: Map<string, VoidedMark>): ReadingRow[] {
+    const phases = new Map(
+      frozenPhases(run.program, run.bands, run.rerunFrom).map((p) => [p.id, p]),
+    );
     return rows.map((r) => {
       const reading = JSON.parse(r.body) as Reading;
-      return readingRow(reading, r.receivedAt, phases.get(reading.phaseId));
+      const mark = voided.get(reading.id) ?? null;
+      return readingRow(reading, r.receivedAt, phases.get(reading.phaseId), mark);
     });
   }
 
@@ -53,7 +57,12 @@ export class ReadingsService {
       `SELECT "body", "receivedAt" ${ORDERED} LIMIT ? OFFSET ?`,
       [run.id, limit, offset],
     );
-    return { total: Number(total), offset, limit, readings: this.rowsOf(run, rows) };
+    return {
+      total: Number(total),
+      offset,
+      limit,
+      readings: this.rowsOf(run, rows, voidMarks(this.dataSource, run.id)),
+    };
   }
 
   /**
@@ -64,6 +73,7 @@ export class ReadingsService {
   async exportCsv(user: SessionUser, runId: string, write: (chunk: string) => void): Promise<void> {
     const run = await visibleRun(this.dataSource, user, runId);
     write(csvLine(READING_CSV_HEADER));
+    const voided = voidMarks(this.dataSource, run.id);
     let after: { at: number; id: string } | null = null;
     for (;;) {
       const rows: Array<Row & { at: number; id: string }> = after
@@ -77,7 +87,7 @@ export class ReadingsService {
           );
       if (rows.length === 0) return;
       write(
-        this.rowsOf(run, rows)
+        this.rowsOf(run, rows, voided)
           .map((r) => csvLine(readingCsvCells(r)))
           .join(''),
       );

@@ -133,7 +133,7 @@ describe('readings', () => {
     );
     const lines = res.text.split('\r\n').filter(Boolean);
     expect(lines[0]).toBe(
-      'device time (UTC),received (UTC),phase,rpm,throttle,band,rpm source,frequency (Hz),speed (kn),speed source,fuel (L/h),hour meter (h),cooling water ok,latitude,longitude,note,reading id',
+      'device time (UTC),received (UTC),phase,rpm,throttle,band,rpm source,frequency (Hz),speed (kn),speed source,fuel (L/h),hour meter (h),cooling water ok,latitude,longitude,note,reading id,"voided (reason, by)"',
     );
     expect(lines).toHaveLength(total + 1);
     expect(lines.filter((l) => l.includes(',full,over,'))).not.toHaveLength(0);

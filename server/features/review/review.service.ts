@@ -52,7 +52,8 @@ export class ReviewService {
       events: ctx.figures.events,
       eventsTotal: ctx.figures.eventsTotal,
       readingCount: ctx.figures.readingCount,
-      ...decisions(runId, reviews, certificate),
+      voidedCount: ctx.figures.voidedCount,
+      ...decisions(ctx, reviews, certificate),
       firstService: ctx.firstService,
       trail: staff ? await runTrail(this.dataSource, ctx.run) : [],
       canDecide: staff && ctx.run.state === 'submitted',
@@ -71,6 +72,7 @@ function runPart({ run }: RunContext) {
     currentPhaseId: run.currentPhaseId,
     createdAt: run.createdAt.toISOString(),
     submittedAt: iso(run.submittedAt),
+    submitNote: run.submitNote,
     signedOffAt: iso(run.signedOffAt),
     lastEventAt: run.lastEventAt,
     clockSkewMs: skew,
@@ -96,6 +98,8 @@ function phaseViews(ctx: RunContext): RunReviewView['phases'] {
       timeUnderMs: a.timeUnderMs,
       longestFullThrottleMs: a.longestFullThrottleMs,
       progressShare: a.progressShare,
+      setAsideMs: a.setAsideMs,
+      countsFromMs: a.countsFromMs,
       verdict: a.verdict,
       reasons: a.reasons,
       firstAt,
@@ -106,7 +110,7 @@ function phaseViews(ctx: RunContext): RunReviewView['phases'] {
 
 /** The workshop's decisions so far, oldest first, and the certificate if one was issued. */
 function decisions(
-  runId: string,
+  { run }: RunContext,
   reviews: RunReview[],
   certificate: Certificate | null,
 ): Pick<RunReviewView, 'reviews' | 'certificate'> {
@@ -114,6 +118,9 @@ function decisions(
     reviews: reviews.map((r) => ({
       decision: r.decision,
       comments: r.comments,
+      rerunPhaseNames: r.rerunPhaseIds.map(
+        (id) => run.program.phases.find((p) => p.id === id)?.name ?? id,
+      ),
       verdict: r.verdict,
       reviewerName: r.reviewerName,
       decidedAt: r.decidedAt.toISOString(),
@@ -122,7 +129,7 @@ function decisions(
       ? {
           number: certificate.number,
           issuedAt: certificate.issuedAt.toISOString(),
-          downloadUrl: `/api/runs/${runId}/certificate`,
+          downloadUrl: `/api/runs/${run.id}/certificate`,
         }
       : null,
   };

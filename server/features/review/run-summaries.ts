@@ -15,13 +15,21 @@ const UPSERT_SUMMARY_SQL = `INSERT INTO "run_summary" ("runId", "workshopId", "e
            "breachCount" = excluded."breachCount", "openPhaseName" = excluded."openPhaseName", "sessionMs" = excluded."sessionMs",
            "hourMeter" = excluded."hourMeter", "hourMeterAt" = excluded."hourMeterAt"`;
 
-type RunRow = { id: string; workshopId: string; engineId: string; program: string; bands: string };
+type RunRow = {
+  id: string;
+  workshopId: string;
+  engineId: string;
+  program: string;
+  bands: string;
+  rerunFrom: string;
+};
 
 /**
  * Keeps run_summary in step with the events. Every event carries a change number handed out in
  * commit order and events are never edited, so "events numbered above the workshop's mark" is
  * exactly what is new since the last refresh; only those runs (and runs never summarised) are
- * accounted again.
+ * accounted again. A return changes how a run counts without any new event, so it deletes the
+ * run's summary (forgetSummary) and the next refresh counts the run as never summarised.
  */
 export class RunSummaries {
   constructor(private readonly dataSource: DataSource) {}
@@ -85,7 +93,7 @@ export class RunSummaries {
 
   private async summarise(manager: EntityManager, runIds: string[]): Promise<void> {
     const runs: RunRow[] = await manager.query(
-      `SELECT "id", "workshopId", "engineId", "program", "bands" FROM "run" WHERE "id" IN (${runIds.map(() => '?').join(', ')})`,
+      `SELECT "id", "workshopId", "engineId", "program", "bands", "rerunFrom" FROM "run" WHERE "id" IN (${runIds.map(() => '?').join(', ')})`,
       runIds,
     );
     const events = await loadRunEvents(manager, runIds);
@@ -105,7 +113,11 @@ function summaryRow(
   meter: { hourMeter: number; at: number } | undefined,
 ): unknown[] {
   const program = JSON.parse(run.program) as Program;
-  const phases = frozenPhases(program, JSON.parse(run.bands) as Record<string, RpmBand>);
+  const phases = frozenPhases(
+    program,
+    JSON.parse(run.bands) as Record<string, RpmBand>,
+    JSON.parse(run.rerunFrom) as Record<string, number>,
+  );
   const account = accountRun(list, phases, { engineId: run.engineId });
   const open = account.phases.findIndex((p) => p.progressShare < 1);
   return [
@@ -126,4 +138,9 @@ function summaryRow(
     meter?.hourMeter ?? null,
     meter?.at ?? null,
   ];
+}
+
+/** Drops a run's summary so the next refresh accounts it afresh (a return changed how it counts). */
+export async function forgetSummary(manager: EntityManager, runId: string): Promise<void> {
+  await manager.query('DELETE FROM "run_summary" WHERE "runId" = ?', [runId]);
 }

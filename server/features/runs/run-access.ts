@@ -1,5 +1,5 @@
 import { In, type DataSource, type EntityManager, type FindOptionsWhere } from 'typeorm';
-import { OPEN_RUN_STATES } from '../../../shared/runs/run.schema.js';
+import { OPEN_RUN_STATES, type RunState } from '../../../shared/runs/run.schema.js';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import { NotFoundError } from '../../lib/errors.js';
 import { visibleVesselIds } from '../vessels/vessel-access.js';
@@ -44,4 +44,22 @@ export function hasOpenRun(
   return manager
     .getRepository(Run)
     .exists({ where: { ...where, state: In([...OPEN_RUN_STATES]) } });
+}
+
+/** Each engine's newest run (any state), for the deck's vessel picker to say where each engine stands. */
+export async function latestRunsOf(
+  manager: EntityManager,
+  engineIds: string[],
+): Promise<Array<{ engineId: string; runId: string; state: RunState }>> {
+  if (engineIds.length === 0) return [];
+  const runs = await manager.getRepository(Run).find({
+    where: { engineId: In(engineIds) },
+    select: { id: true, engineId: true, state: true, createdAt: true },
+    order: { createdAt: 'DESC' },
+  });
+  const newest = new Map<string, { engineId: string; runId: string; state: RunState }>();
+  for (const r of runs)
+    if (!newest.has(r.engineId))
+      newest.set(r.engineId, { engineId: r.engineId, runId: r.id, state: r.state });
+  return [...newest.values()];
 }

@@ -30,7 +30,7 @@ export interface RunContext {
   account: RunAccount;
   charts: PhaseChart[];
   /** The rest of what the events give: the log, counts, the newest hour meter. */
-  figures: Pick<RunFigures, 'events' | 'eventsTotal' | 'readingCount'>;
+  figures: Pick<RunFigures, 'events' | 'eventsTotal' | 'readingCount' | 'voidedCount'>;
   firstService: FirstServiceView | null;
 }
 
@@ -56,7 +56,7 @@ export async function loadRunContext(
   const engine = run.engine!;
   const vessel = await dataSource.getRepository(Vessel).findOneByOrFail({ id: run.vesselId });
   const workshop = await dataSource.getRepository(Workshop).findOneByOrFail({ id: run.workshopId });
-  const phases = frozenPhases(run.program, run.bands);
+  const phases = frozenPhases(run.program, run.bands, run.rerunFrom);
   const figures = cache
     ? await cache.get(run, phases)
     : await computeRunFigures(dataSource, run, phases);

@@ -1,12 +1,13 @@
 import type { DataSource } from 'typeorm';
 import type { ResolvedPhase } from '../../../shared/programs/resolve-band.js';
 import { phaseCharts, type PhaseChart } from '../../../shared/review/chart-series.js';
-import type { LoggedEvent } from '../../../shared/review/views.js';
+import type { LoggedEvent, VoidedMark } from '../../../shared/review/views.js';
 import { orderEvents } from '../../../shared/runs/event-order.js';
 import { accountOrdered, type RunAccount } from '../../../shared/runs/run-accounting.js';
 import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Run } from './run.entity.js';
 import { countRunEvents, latestHourMeters, loadRunEvents } from './run-events.js';
+import { voidMarks } from './run-voids.js';
 
 /** Plenty for any honest run; a device stuck raising alerts should not swamp the page. */
 const MAX_LISTED_EVENTS = 1000;
@@ -14,18 +15,26 @@ const MAX_LISTED_EVENTS = 1000;
 /** Everything worked out from a run's events: the accounting, the charts and the log. */
 export interface RunFigures {
   eventCount: number;
+  /** The phases these figures were worked out against (a return sets when phases count from). */
+  phases: ResolvedPhase[];
   account: RunAccount;
   charts: PhaseChart[];
   events: LoggedEvent[];
   eventsTotal: number;
   readingCount: number;
+  /** Entries (readings and notes) taken back. */
+  voidedCount: number;
   meter: { hourMeter: number; at: number } | null;
 }
 
-function loggedEvents(ordered: readonly RunEvent[]): { events: LoggedEvent[]; total: number } {
+function loggedEvents(
+  ordered: readonly RunEvent[],
+  voided: ReadonlyMap<string, VoidedMark>,
+): { events: LoggedEvent[]; total: number } {
   const events: LoggedEvent[] = [];
   for (const e of ordered) {
-    if (e.kind === 'reading') continue;
+    // Readings are in the readings table; a void shows as the mark on the entry it names.
+    if (e.kind === 'reading' || e.kind === 'void') continue;
     if (e.kind === 'phase-advance')
       events.push({ kind: e.kind, id: e.id, at: e.at, phaseId: e.phaseId });
     else if (e.kind === 'alert')
@@ -37,7 +46,14 @@ function loggedEvents(ordered: readonly RunEvent[]): { events: LoggedEvent[]; to
         code: e.code,
         message: e.message,
       });
-    else if (e.kind === 'note') events.push({ kind: e.kind, id: e.id, at: e.at, text: e.text });
+    else if (e.kind === 'note')
+      events.push({
+        kind: e.kind,
+        id: e.id,
+        at: e.at,
+        text: e.text,
+        voided: voided.get(e.id) ?? null,
+      });
     else events.push({ kind: e.kind, id: e.id, at: e.at });
   }
   return { events: events.slice(-MAX_LISTED_EVENTS), total: events.length };
@@ -52,14 +68,17 @@ export async function computeRunFigures(
   const ordered = orderEvents(events, run.engineId);
   const { account } = accountOrdered(ordered, phases);
   const charts = phaseCharts(ordered, phases, account);
-  const logged = loggedEvents(ordered);
+  const voided = voidMarks(dataSource, run.id);
+  const logged = loggedEvents(ordered, voided);
   return {
     eventCount: events.length,
+    phases,
     account,
     charts,
     events: logged.events,
     eventsTotal: logged.total,
     readingCount: charts.reduce((n, c) => n + c.readingCount, 0),
+    voidedCount: voided.size,
     meter: (await latestHourMeters(dataSource, [run.id])).get(run.id) ?? null,
   };
 }
@@ -81,7 +100,8 @@ export class RunFiguresCache {
   async get(run: Run, phases: ResolvedPhase[]): Promise<RunFigures> {
     const count = countRunEvents(this.dataSource, run.id);
     const hit = this.kept.get(run.id);
-    if (hit && hit.eventCount === count) {
+    // A return changes how the run counts without a new event: the phases say so.
+    if (hit && hit.eventCount === count && samePhases(hit.phases, phases)) {
       this.kept.delete(run.id);
       this.kept.set(run.id, hit);
       return hit;
@@ -93,3 +113,6 @@ export class RunFiguresCache {
     return figures;
   }
 }
+
+const samePhases = (a: readonly ResolvedPhase[], b: readonly ResolvedPhase[]) =>
+  a.length === b.length && a.every((p, i) => p.countsFromMs === b[i].countsFromMs);

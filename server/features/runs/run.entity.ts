@@ -11,6 +11,7 @@ import {
 import type { RpmBand } from '../../../shared/programs/phase-band.schema.js';
 import type { Program as ProgramDefinition } from '../../../shared/programs/program.schema.js';
 import type { RunState } from '../../../shared/runs/run.schema.js';
+import type { RunDecisionView } from '../../../shared/runs/run-view.js';
 import { Engine } from '../vessels/engine.entity.js';
 
 /**
@@ -77,6 +78,24 @@ export class Run {
 
   @Column({ type: 'datetime', nullable: true })
   submittedAt: Date | null;
+
+  /** The skipper's note on submitting with a phase not complete. */
+  @Column({ type: 'text', nullable: true })
+  submitNote: string | null;
+
+  /**
+   * For each phase the workshop sent back, the moment it did (epoch ms, latest return wins): the
+   * re-run rule in shared/runs/phase-tally.ts counts the phase only from then.
+   */
+  @Column('simple-json', { default: '{}' })
+  rerunFrom: Record<string, number>;
+
+  /** The latest decision on the run (also in run_review, which keeps every one). */
+  @Column('simple-json', { nullable: true })
+  lastDecision: RunDecisionView | null;
+
+  @Column({ type: 'text', nullable: true })
+  certificateNumber: string | null;
 
   @Column({ type: 'datetime', nullable: true })
   signedOffAt: Date | null;

@@ -36,7 +36,14 @@ describe('returning a run', () => {
     const sunniva = await signedInAgent(server.app, DEMO.skipperA);
     const items = [
       ...events.map((event) => ({ type: 'event', runId: run.id, event })),
-      { type: 'run-patch', id: randomUUID(), runId: run.id, at: t0 + 300_000, submit: true },
+      {
+        type: 'run-patch',
+        id: randomUUID(),
+        runId: run.id,
+        at: t0 + 300_000,
+        submit: true,
+        submitNote: 'Ran out of daylight after four minutes.',
+      },
     ];
     expect(
       (
@@ -54,10 +61,15 @@ describe('returning a run', () => {
         field: 'comments',
         message: 'Write what the skipper should do (comments) when you return a run.',
       },
+      {
+        field: 'rerunPhaseIds',
+        message: 'Choose at least one phase to run again (rerunPhaseIds) when you return a run.',
+      },
     ]);
     const res = await tech.post(`/api/runs/${run.id}/sign-off`).send({
       decision: 'return',
       comments: 'Only four minutes logged. Finish the dock run and the phases after it.',
+      rerunPhaseIds: ['dock-run'],
     });
     expect(res.status).toBe(200);
     expect(res.body).toMatchObject({ state: 'returned', certificate: null, mail: { sent: true } });

@@ -24,6 +24,10 @@ export class RunReview {
   @Column('text', { default: '' })
   comments: string;
 
+  /** The phases sent back to be run again (program phase ids); empty when confirmed. */
+  @Column('simple-json', { default: '[]' })
+  rerunPhaseIds: string[];
+
   /** The computation's verdict at the moment of the decision. */
   @Column('text')
   verdict: string;

@@ -11,6 +11,7 @@ import { Run } from '../runs/run.entity.js';
 import { certificateFilePath } from './certificate-store.js';
 import { Certificate } from './certificate.entity.js';
 import { RunReview } from './run-review.entity.js';
+import type { RunDecisionView } from '../../../shared/runs/run-view.js';
 
 /*
  * The rows a decision on a run writes, each inside the caller's transaction. The sign-off
@@ -51,25 +52,48 @@ export async function markRun(
     );
 }
 
+export interface ReviewDecision {
+  decision: 'confirmed' | 'returned';
+  comments: string;
+  /** The phases sent back to be run again; empty when confirmed. */
+  rerunPhaseIds: string[];
+}
+
+/**
+ * Keeps the decision (run_review keeps every one) and writes it on the run as its latest. A
+ * return also sets, for each phase sent back, the moment from which it counts again (the re-run
+ * rule in shared/runs/phase-tally.ts); the caller has the board's summary of the run counted afresh.
+ */
 export async function addReview(
   manager: EntityManager,
   ctx: RunContext,
   reviewer: Pick<Reviewer, 'id' | 'name'>,
-  decision: 'confirmed' | 'returned',
-  comments: string,
+  review: ReviewDecision,
   now: Date,
 ) {
+  const { decision, comments, rerunPhaseIds } = review;
   await manager.getRepository(RunReview).insert({
     id: randomUUID(),
     runId: ctx.run.id,
     workshopId: ctx.run.workshopId,
     decision,
     comments,
+    rerunPhaseIds,
     verdict: ctx.account.verdict,
     reviewerId: reviewer.id,
     reviewerName: reviewer.name,
     decidedAt: now,
   });
+  const lastDecision: RunDecisionView = {
+    decision,
+    comments,
+    rerunPhaseIds,
+    reviewerName: reviewer.name,
+    decidedAt: now.toISOString(),
+  };
+  const rerunFrom = { ...ctx.run.rerunFrom };
+  for (const phaseId of rerunPhaseIds) rerunFrom[phaseId] = now.getTime();
+  await manager.getRepository(Run).update({ id: ctx.run.id }, { lastDecision, rerunFrom });
 }
 
 /** The year's next running number of the workshop, inside the sign-off's transaction. */
@@ -110,6 +134,9 @@ export async function insertCertificate(
     storedAt: stored?.at ?? null,
     byteSize: stored?.byteSize ?? null,
   });
+  await manager
+    .getRepository(Run)
+    .update({ id: ctx.run.id }, { certificateNumber: certificate.number });
 }
 
 /** The trail of a sign-off: the decision with its comments, then the certificate's number. */

@@ -127,7 +127,7 @@ describe('signing off a submitted run', () => {
 
     const again = await tech
       .post(`/api/runs/${skua.id}/sign-off`)
-      .send({ decision: 'return', comments: 'Changed my mind.' });
+      .send({ decision: 'return', comments: 'Changed my mind.', rerunPhaseIds: ['dock-run'] });
     expect(again.status).toBe(409);
     expect(again.body.detail).toBe(
       'This run is already signed off; a signed-off run cannot be changed.',

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import { CONFIRM_NEEDS_COMMENT, type SignOffInput } from '../../../shared/review/review.schema.js';
 import type { Clock } from '../../lib/clock.js';
@@ -37,6 +37,8 @@ export class SignOffService {
     private readonly clock: Clock,
     private readonly outbox: Outbox,
     private readonly store: CertificateStore,
+    /** Has the board count a run afresh after a return changed how it counts (app.ts passes it in). */
+    private readonly recount: (manager: EntityManager, runId: string) => Promise<void>,
   ) {}
 
   async decide(user: SessionUser, runId: string, input: SignOffInput): Promise<DecisionResult> {
@@ -45,13 +47,20 @@ export class SignOffService {
     if (input.decision === 'confirm' && ctx.account.verdict !== 'complete' && !input.comments) {
       throw new ValidationError([{ field: 'comments', message: CONFIRM_NEEDS_COMMENT }]);
     }
+    const rerunPhaseIds =
+      input.decision === 'return' ? phasesToRerun(ctx, input.rerunPhaseIds) : [];
     const person = await this.dataSource.getRepository(User).findOneByOrFail({ id: user.id });
     const reviewer: Reviewer = { id: person.id, name: person.name, role: person.role };
     const now = this.clock.now();
     const decided =
       input.decision === 'confirm'
         ? await this.confirm(ctx, reviewer, input.comments, now)
-        : await this.returnToSkipper(ctx, reviewer, input.comments, now);
+        : await this.returnToSkipper(
+            ctx,
+            reviewer,
+            { comments: input.comments, rerunPhaseIds },
+            now,
+          );
     const mail = await mailDecision(
       this.outbox,
       ctx,
@@ -88,7 +97,13 @@ export class SignOffService {
     try {
       return await this.dataSource.transaction(async (manager) => {
         await markRun(manager, ctx, 'signed-off', now);
-        await addReview(manager, ctx, reviewer, 'confirmed', comments, now);
+        await addReview(
+          manager,
+          ctx,
+          reviewer,
+          { decision: 'confirmed', comments, rerunPhaseIds: [] },
+          now,
+        );
         const number = await nextCertificateNumber(manager, ctx, now);
         const content = certificateContent(ctx, ctx.charts, {
           number,
@@ -116,10 +131,22 @@ export class SignOffService {
     }
   }
 
-  private async returnToSkipper(ctx: RunContext, reviewer: Reviewer, comments: string, now: Date) {
+  private async returnToSkipper(
+    ctx: RunContext,
+    reviewer: Reviewer,
+    { comments, rerunPhaseIds }: { comments: string; rerunPhaseIds: string[] },
+    now: Date,
+  ) {
     return this.dataSource.transaction(async (manager) => {
       await markRun(manager, ctx, 'returned', now);
-      await addReview(manager, ctx, reviewer, 'returned', comments, now);
+      await addReview(
+        manager,
+        ctx,
+        reviewer,
+        { decision: 'returned', comments, rerunPhaseIds },
+        now,
+      );
+      await this.recount(manager, ctx.run.id);
       await recordAudit(manager, {
         workshopId: ctx.run.workshopId,
         recordType: 'run',
@@ -127,7 +154,9 @@ export class SignOffService {
         action: 'run-returned',
         actor: reviewer,
         at: now,
-        detail: comments,
+        detail: `${comments} (to run again: ${rerunPhaseIds
+          .map((id) => ctx.run.program.phases.find((p) => p.id === id)!.name)
+          .join(', ')})`,
       });
       return { state: 'returned' as const, certificate: null };
     });
@@ -158,4 +187,17 @@ export class SignOffService {
     );
     return { fileName: `break-in-certificate-${certificate.number}.pdf`, pdf };
   }
+}
+
+/** The phases named to run again, each a phase of the run's program, in program order. */
+function phasesToRerun(ctx: RunContext, ids: readonly string[]): string[] {
+  const unknown = ids.filter((id) => !ctx.run.program.phases.some((p) => p.id === id));
+  if (unknown.length > 0)
+    throw new ValidationError([
+      {
+        field: 'rerunPhaseIds',
+        message: `The run's program has no phase "${unknown[0]}": choose the phases to run again from its phases.`,
+      },
+    ]);
+  return ctx.run.program.phases.filter((p) => ids.includes(p.id)).map((p) => p.id);
 }

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
-import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
+import type { RunEvent, VoidEvent } from '../../../shared/runs/run-event.schema.js';
 import type {
   EventItem,
   PushItem,
@@ -10,7 +10,10 @@ import type {
 import type { Run } from '../runs/run.entity.js';
 import { reserveChangeSeq } from '../../lib/change-seq.js';
 import { eventStore } from './event-store.js';
+import { recordAudit } from '../audit/audit.service.js';
 import { RunPatchRow } from './run-patch.entity.js';
+import { submitRefusal } from './submit-check.js';
+import { voidRefusal, type BatchEntries } from './void-check.js';
 
 export type Applied = { results: PushResult[]; touched: Set<Run> };
 type Context = { user: SessionUser; runs: Map<string, Run>; items: PushItem[]; now: number };
@@ -24,13 +27,21 @@ const rejected = (id: string, reason: string, field?: string): PushResult => ({
 });
 
 /** Why the server will not take this event for this run, or null when it will. */
-function eventRefusal(run: Run, event: RunEvent): { reason: string; field?: string } | null {
+function eventRefusal(
+  run: Run,
+  event: RunEvent,
+  user: SessionUser,
+): { reason: string; field?: string } | null {
   if (run.state === 'signed-off') {
     return {
       reason: `This run was signed off by the workshop${run.signedOffAt ? ` on ${run.signedOffAt.toISOString().slice(0, 10)}` : ''}; nothing more can be added to it.`,
     };
   }
-  if (run.state === 'submitted')
+  if ((run.state as string) === 'cancelled')
+    return { reason: 'This run was cancelled by the workshop; nothing more can be added to it.' };
+  // Staff may still take an entry back while deciding; nothing else is added under review.
+  const staffVoid = event.kind === 'void' && user.role !== 'skipper';
+  if (run.state === 'submitted' && !staffVoid)
     return {
       reason:
         'This run is with the workshop for review; logging opens again if the workshop returns it.',
@@ -59,11 +70,6 @@ function refusePatch(run: Run, patch: RunPatchItem): { reason: string; field?: s
       field: 'currentPhaseId',
     };
   }
-  if (patch.submit && run.state === 'planned')
-    return {
-      reason: 'Nothing has been logged on this run yet, so there is nothing to submit.',
-      field: 'submit',
-    };
   return null;
 }
 
@@ -76,13 +82,15 @@ async function applyPatch(
 ): Promise<PushResult> {
   if (await manager.getRepository(RunPatchRow).existsBy({ id: patch.id }))
     return { id: patch.id, status: 'duplicate' };
-  const refusal = refusePatch(run, patch);
+  const refusal =
+    refusePatch(run, patch) ?? (patch.submit ? await submitRefusal(manager, run, patch) : null);
   if (refusal) return rejected(patch.id, refusal.reason, refusal.field);
   if (patch.currentPhaseId !== undefined) run.currentPhaseId = patch.currentPhaseId;
   if (patch.notes !== undefined) run.notes = patch.notes;
-  if (patch.submit && run.state !== 'submitted') {
+  if (patch.submit) {
     run.state = 'submitted';
     run.submittedAt = new Date(ctx.now);
+    run.submitNote = patch.submitNote || null;
   }
   const { id, runId, at, ...body } = patch;
   await manager
@@ -120,37 +128,73 @@ function noteEventOnRun(run: Run, event: RunEvent) {
   run.lastEventAt = Math.max(run.lastEventAt ?? 0, event.at);
 }
 
-/** Decides every item in batch order, then writes the new events in bulk. */
+/** A void's author and reason go into the run's trail as well as the log. */
+async function auditVoid(manager: EntityManager, ctx: Context, run: Run, event: VoidEvent) {
+  await recordAudit(manager, {
+    workshopId: run.workshopId,
+    recordType: 'run',
+    recordId: run.id,
+    action: 'entry-voided',
+    actor: { id: ctx.user.id, name: ctx.user.name },
+    at: new Date(ctx.now),
+    detail: event.reason,
+  });
+}
+
+/** Writes the events decided so far and settles their results; a submit needs them on disk first. */
+async function flush(manager: EntityManager, ctx: Context, pending: Candidate[], out: Applied) {
+  const stored = await insertEvents(manager, ctx, pending);
+  for (const { index, item, run } of pending) {
+    const isNew = stored.has(item.event.id);
+    out.results[index] = { id: item.event.id, status: isNew ? 'stored' : 'duplicate' };
+    if (isNew) out.touched.add(run);
+    if (isNew && item.event.kind === 'void') await auditVoid(manager, ctx, run, item.event);
+  }
+  pending.length = 0;
+}
+
+/** Why this event will not be taken (its run's state, its engine and phase, a void's target). */
+function refusalOf(
+  manager: EntityManager,
+  ctx: Context,
+  run: Run,
+  event: RunEvent,
+  batch: BatchEntries,
+) {
+  return (
+    eventRefusal(run, event, ctx.user) ??
+    (event.kind === 'void' ? voidRefusal(manager, ctx.user, run, event, batch) : null)
+  );
+}
+
+/** Decides every item in batch order, writing new events in bulk (before a submit, and at the end). */
 export async function applyItems(manager: EntityManager, ctx: Context): Promise<Applied> {
-  const results: PushResult[] = new Array(ctx.items.length);
-  const touched = new Set<Run>();
-  const candidates: Candidate[] = [];
-  const seen = new Set<string>();
+  const out: Applied = { results: new Array(ctx.items.length), touched: new Set<Run>() };
+  const pending: Candidate[] = [];
+  const batch: BatchEntries = { entries: new Map(), voided: new Set() };
   const store = eventStore(manager);
   for (const [index, item] of ctx.items.entries()) {
     const run = ctx.runs.get(item.runId)!;
     if (item.type === 'run-patch') {
-      results[index] = await applyPatch(manager, ctx, run, item);
-      if (results[index].status === 'stored') touched.add(run);
+      if (item.submit) await flush(manager, ctx, pending, out);
+      out.results[index] = await applyPatch(manager, ctx, run, item);
+      if (out.results[index].status === 'stored') out.touched.add(run);
       continue;
     }
-    const refusal = eventRefusal(run, item.event);
+    const event = item.event;
+    const refusal = refusalOf(manager, ctx, run, event, batch);
     // A copy of something already stored is "duplicate" even on a run now frozen, so the device
     // can clear it; only refused items need the look-up, the rest learn it from the insert.
-    if (seen.has(item.event.id) || (refusal && store.exists(item.event.id)))
-      results[index] = { id: item.event.id, status: 'duplicate' };
-    else if (refusal) results[index] = rejected(item.event.id, refusal.reason, refusal.field);
+    if (batch.entries.has(event.id) || (refusal && store.exists(event.id)))
+      out.results[index] = { id: event.id, status: 'duplicate' };
+    else if (refusal) out.results[index] = rejected(event.id, refusal.reason, refusal.field);
     else {
-      seen.add(item.event.id);
-      candidates.push({ index, item, run });
-      noteEventOnRun(run, item.event);
+      batch.entries.set(event.id, { runId: run.id, kind: event.kind, authorId: ctx.user.id });
+      if (event.kind === 'void') batch.voided.add(event.targetId);
+      pending.push({ index, item, run });
+      noteEventOnRun(run, event);
     }
   }
-  const stored = await insertEvents(manager, ctx, candidates);
-  for (const { index, item, run } of candidates) {
-    const isNew = stored.has(item.event.id);
-    results[index] = { id: item.event.id, status: isNew ? 'stored' : 'duplicate' };
-    if (isNew) touched.add(run);
-  }
-  return { results, touched };
+  await flush(manager, ctx, pending, out);
+  return out;
 }

@@ -45,6 +45,7 @@ beforeAll(async () => {
     runId: starboard.id,
     at: T0 + 70_000,
     submit: true,
+    submitNote: 'Stopped after three readings to change the propeller.',
   };
   for (const batch of [readings, [submit]]) {
     const results: Array<{ status: string }> = (await push(batch)).body.results;

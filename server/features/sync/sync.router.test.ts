@@ -135,6 +135,7 @@ describe('push', () => {
       runId: starboard.id,
       at: T0 + 70_000,
       submit: true,
+      submitNote: 'Stopped early: weather.',
       notes: 'Ran both engines together.',
     };
     expect((await push([submit])).body.results[0].status).toBe('stored');

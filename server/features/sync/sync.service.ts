@@ -1,3 +1,4 @@
+import { randomUUID } from 'node:crypto';
 import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import {
@@ -7,9 +8,10 @@ import {
   type PullResponse,
   type PushResult,
 } from '../../../shared/sync/sync.schema.js';
-import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
+import type { RunEvent, VoidEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Clock } from '../../lib/clock.js';
-import { NotFoundError } from '../../lib/errors.js';
+import { NotFoundError, ValidationError } from '../../lib/errors.js';
+import type { VoidInput } from '../../../shared/review/review.schema.js';
 import { visibleRunsWhere } from '../runs/run-access.js';
 import { visibleVesselIds } from '../vessels/vessel-access.js';
 import { Run } from '../runs/run.entity.js';
@@ -141,6 +143,33 @@ export class SyncService {
     };
   }
 
+  /**
+   * A technician or manager takes back an entry from the review page: the same void a device
+   * would send, made here with the server's clock, through the same checks and trail.
+   */
+  async voidEntry(user: SessionUser, runId: string, input: VoidInput): Promise<{ id: string }> {
+    const run = (await this.loadVisibleRuns(user, [runId])).get(runId)!;
+    const event: VoidEvent = {
+      kind: 'void',
+      id: randomUUID(),
+      at: this.clock.now().getTime(),
+      engineId: run.engineId,
+      targetId: input.targetId,
+      reason: input.reason,
+    };
+    const { results } = await this.push(user, {
+      deviceId: randomUUID(),
+      sentAt: event.at,
+      items: [{ type: 'event', runId, event }],
+    });
+    const [result] = results;
+    if (result.status === 'rejected') {
+      const field = result.field === 'event.targetId' ? 'targetId' : (result.field ?? 'targetId');
+      throw new ValidationError([{ field, message: result.reason! }], result.reason);
+    }
+    return { id: event.id };
+  }
+
   private async loadVisibleRuns(user: SessionUser, runIds: string[]): Promise<Map<string, Run>> {
     const runs =
       runIds.length === 0
@@ -168,6 +197,7 @@ export class SyncService {
         {
           state: run.state,
           submittedAt: run.submittedAt,
+          submitNote: run.submitNote,
           currentPhaseId: run.currentPhaseId,
           notes: run.notes,
           clockSkewMs: run.clockSkewMs,

@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import type { RunState } from '../../../shared/runs/run.schema.js';
 import { ConflictError } from '../../lib/errors.js';
 
 /*
@@ -17,6 +18,11 @@ export interface VesselRecordChecks {
     manager: EntityManager,
     engineIds: string[],
   ): Promise<Array<{ engineId: string; completedAt: Date | null }>>;
+  /** Each engine's newest break-in run and its state (the deck's vessel picker shows it). */
+  latestRunsOf(
+    manager: EntityManager,
+    engineIds: string[],
+  ): Promise<Array<{ engineId: string; runId: string; state: RunState }>>;
 }
 
 /** A record with a break-in still open cannot be archived: the run would lose its place. */

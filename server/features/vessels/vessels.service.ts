@@ -59,7 +59,15 @@ export class VesselsService {
       relations: { engines: true, skippers: { user: true } },
       order: { name: 'ASC' },
     });
-    return vessels.map(toVesselView).filter((view) => vesselMatches(view, query.q));
+    const views = vessels.map(toVesselView).filter((view) => vesselMatches(view, query.q));
+    const latest = await this.checks.latestRunsOf(
+      this.dataSource.manager,
+      views.flatMap((v) => v.engines.map((e) => e.id)),
+    );
+    const byEngine = new Map(latest.map((r) => [r.engineId, { id: r.runId, state: r.state }]));
+    for (const view of views)
+      for (const engine of view.engines) engine.latestRun = byEngine.get(engine.id) ?? null;
+    return views;
   }
 
   async get(user: SessionUser, id: string): Promise<VesselView> {
