@@ -45,6 +45,7 @@ function ReviewPage({ runId }: { runId: string }) {
           <SignOffForm
             runId={r.run.id}
             verdict={r.account.verdict}
+            phases={r.phases}
             onDecided={(result) => {
               setDecided(result);
               void invalidateBoard();

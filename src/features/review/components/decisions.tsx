@@ -66,6 +66,9 @@ export function ReviewHistory({ reviews }: { reviews: RunReviewView['reviews'] }
             {formatMoment(r.decidedAt)}
           </p>
           {r.comments && <p>{r.comments}</p>}
+          {r.rerunPhaseNames.length > 0 && (
+            <p className="text-sm">To run again: {r.rerunPhaseNames.join(', ')}</p>
+          )}
         </li>
       ))}
     </ol>

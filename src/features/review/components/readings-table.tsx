@@ -10,8 +10,9 @@ const PAGE = 50;
 const BAND_MARK = { 'in-band': '■', over: '▲', under: '▽' } as const;
 
 function ReadingTableRow({ reading: r }: { reading: ReadingRow }) {
+  // A voided reading stays in the record, struck through; it counts for nothing.
   return (
-    <tr>
+    <tr className={r.voided ? 'text-muted line-through' : undefined}>
       <Td className="figures whitespace-nowrap">{formatMoment(r.at)}</Td>
       <Td>{r.phaseName}</Td>
       <Td className="figures">
@@ -31,7 +32,14 @@ function ReadingTableRow({ reading: r }: { reading: ReadingRow }) {
       </Td>
       <Td className="figures">{r.speedKn !== null ? `${r.speedKn} kn` : '—'}</Td>
       <Td className="figures">{r.hourMeter !== null ? `${r.hourMeter.toFixed(1)} h` : '—'}</Td>
-      <Td>{r.note ?? ''}</Td>
+      <Td>
+        {r.note ?? ''}
+        {r.voided && (
+          <span className="block no-underline [text-decoration:none]">
+            Voided by {r.voided.byName}: {r.voided.reason}
+          </span>
+        )}
+      </Td>
     </tr>
   );
 }

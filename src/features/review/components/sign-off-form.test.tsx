@@ -10,6 +10,10 @@ afterEach(() => {
 });
 
 const runId = '7c1d2e3f-4a5b-4c6d-8e7f-0a1b2c3d4e5f';
+const phases = [
+  { id: 'p1', name: 'First hour' },
+  { id: 'p2', name: 'Second hour' },
+];
 const decided = {
   state: 'returned',
   certificate: null,
@@ -20,7 +24,7 @@ describe('SignOffForm', () => {
   it('asks for comments before returning a run, naming the field, and sends nothing', async () => {
     const { calls } = stubFetch({});
     const user = userEvent.setup();
-    renderPage(<SignOffForm runId={runId} verdict="incomplete" />);
+    renderPage(<SignOffForm runId={runId} verdict="incomplete" phases={phases} />);
     await user.click(screen.getByRole('radio', { name: /Return to the skipper/ }));
     await user.click(screen.getByRole('button', { name: 'Return the run' }));
     expect(
@@ -49,7 +53,7 @@ describe('SignOffForm', () => {
       ),
     });
     const user = userEvent.setup();
-    renderPage(<SignOffForm runId={runId} verdict="breached" />);
+    renderPage(<SignOffForm runId={runId} verdict="breached" phases={phases} />);
     expect(
       screen.getByText(/does not judge this run complete: say why you confirm it/),
     ).toBeInTheDocument();
@@ -68,18 +72,36 @@ describe('SignOffForm', () => {
     });
     const onDecided = vi.fn();
     const user = userEvent.setup();
-    renderPage(<SignOffForm runId={runId} verdict="incomplete" onDecided={onDecided} />);
+    renderPage(
+      <SignOffForm runId={runId} verdict="incomplete" phases={phases} onDecided={onDecided} />,
+    );
     await user.click(screen.getByRole('radio', { name: /Return to the skipper/ }));
     await user.type(
       screen.getByLabelText('Comments', { exact: true }),
       '  Finish the dock run first.  ',
     );
+    await user.click(screen.getByRole('checkbox', { name: 'Second hour' }));
     await user.click(screen.getByRole('button', { name: 'Return the run' }));
     await vi.waitFor(() => expect(onDecided).toHaveBeenCalledWith(decided));
     expect(calls[0]).toMatchObject({
       method: 'POST',
-      body: { decision: 'return', comments: 'Finish the dock run first.' },
+      body: { decision: 'return', comments: 'Finish the dock run first.', rerunPhaseIds: ['p2'] },
     });
+  });
+
+  it('asks which phases to run again before returning a run, and sends nothing', async () => {
+    const { calls } = stubFetch({});
+    const user = userEvent.setup();
+    renderPage(<SignOffForm runId={runId} verdict="incomplete" phases={phases} />);
+    await user.click(screen.getByRole('radio', { name: /Return to the skipper/ }));
+    await user.type(screen.getByLabelText('Comments', { exact: true }), 'Run it again.');
+    await user.click(screen.getByRole('button', { name: 'Return the run' }));
+    expect(
+      await screen.findByText(
+        'Choose at least one phase to run again (rerunPhaseIds) when you return a run.',
+      ),
+    ).toBeInTheDocument();
+    expect(calls).toEqual([]);
   });
 
   it('says plainly when the run was decided elsewhere in the meantime', async () => {
@@ -92,7 +114,7 @@ describe('SignOffForm', () => {
       ),
     });
     const user = userEvent.setup();
-    renderPage(<SignOffForm runId={runId} verdict="complete" />);
+    renderPage(<SignOffForm runId={runId} verdict="complete" phases={phases} />);
     await user.click(screen.getByRole('button', { name: 'Sign off the run' }));
     expect(await screen.findByText('This run is already signed off.')).toBeInTheDocument();
   });

@@ -13,6 +13,7 @@ import { Button } from '../../../components/ui/button';
 import { Field, controlClass } from '../../../components/ui/field';
 import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSignOff } from '../api';
+import { RerunPhases } from './rerun-phases';
 
 const CHOICES = [
   {
@@ -78,14 +79,18 @@ function useSignOffForm(runId: string, onDecided?: (result: DecisionView) => voi
   const [refusal, setRefusal] = useState<string | null>(null);
   const form = useForm<SignOffFormValues, unknown, SignOffInput>({
     resolver: zodResolver(SignOffInputSchema),
-    defaultValues: { decision: 'confirm', comments: '' },
+    defaultValues: { decision: 'confirm', comments: '', rerunPhaseIds: [] },
   });
   const decision = useWatch({ control: form.control, name: 'decision' });
   const onSubmit = form.handleSubmit((input) => {
     setRefusal(null);
     signOff.mutate(input, {
       onError: (error) => {
-        const messages = serverErrorMessages(error, form.setError, ['decision', 'comments']);
+        const messages = serverErrorMessages(error, form.setError, [
+          'decision',
+          'comments',
+          'rerunPhaseIds',
+        ]);
         setRefusal(messages.join(' ') || null);
       },
     });
@@ -97,10 +102,13 @@ function useSignOffForm(runId: string, onDecided?: (result: DecisionView) => voi
 export function SignOffForm({
   runId,
   verdict,
+  phases,
   onDecided,
 }: {
   runId: string;
   verdict: Verdict;
+  /** The run's phases, to choose those to run again on a return. */
+  phases: ReadonlyArray<{ id: string; name: string }>;
   onDecided?: (result: DecisionView) => void;
 }) {
   const { signOff, form, decision, refusal, onSubmit } = useSignOffForm(runId, onDecided);
@@ -109,6 +117,13 @@ export function SignOffForm({
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Sign-off">
       {refusal && <Alert title="Not saved">{refusal}</Alert>}
       <DecisionChoices register={register} error={formState.errors.decision?.message} />
+      {decision === 'return' && (
+        <RerunPhases
+          phases={phases}
+          register={register}
+          error={formState.errors.rerunPhaseIds?.message}
+        />
+      )}
       <Field
         label="Comments"
         error={formState.errors.comments?.message}

@@ -1,0 +1,40 @@
+import type { UseFormRegister } from 'react-hook-form';
+import type { SignOffFormValues } from '../../../../shared/review/review.schema';
+
+/** On a return: which of the run's phases the skipper must run again (at least one). */
+export function RerunPhases({
+  phases,
+  register,
+  error,
+}: {
+  phases: ReadonlyArray<{ id: string; name: string }>;
+  register: UseFormRegister<SignOffFormValues>;
+  error?: string;
+}) {
+  return (
+    <fieldset className="flex flex-col gap-2" aria-describedby="rerun-hint">
+      <legend className="mb-1 font-semibold">Phases to run again</legend>
+      <p id="rerun-hint" className="text-sm text-muted">
+        Each phase chosen counts again from now; time logged on it before stays in the record but no
+        longer counts.
+      </p>
+      {phases.map((phase) => (
+        <label key={phase.id} className="flex min-h-touch cursor-pointer items-center gap-3">
+          <input
+            type="checkbox"
+            value={phase.id}
+            className="size-5 accent-[var(--rs-accent)]"
+            {...register('rerunPhaseIds')}
+          />
+          {phase.name}
+        </label>
+      ))}
+      {error && (
+        <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
+          <span aria-hidden="true">⚠</span>
+          {error}
+        </p>
+      )}
+    </fieldset>
+  );
+}
