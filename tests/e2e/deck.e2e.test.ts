@@ -78,12 +78,17 @@ describe('on deck with no signal', () => {
           timeout: 15_000,
         })
         .toBe(true);
-      expect(
-        await page
-          .getByRole('list', { name: 'Vessels on this device' })
-          .getByText('Blue Tern')
-          .isVisible(),
-      ).toBe(true);
+      // The heading comes before the device database has answered: wait for the list itself.
+      await expect
+        .poll(
+          () =>
+            page
+              .getByRole('list', { name: 'Vessels on this device' })
+              .getByText('Blue Tern')
+              .isVisible(),
+          { timeout: 15_000 },
+        )
+        .toBe(true);
       expect(await visible(page, 'Four-stroke outboard, about 10 hours')).toBe(true);
       // A cold start on a deep link, offline: the app shell comes from the cache, the data from IndexedDB.
       const cold = await context.newPage();
