@@ -19,6 +19,9 @@ import {
   Section,
 } from './run-review-parts';
 
+/** Before sign-off staff may take a reading back (the server says the same). */
+const VOIDABLE_STATES: readonly string[] = ['under-way', 'submitted', 'returned'];
+
 function ReviewPage({ runId }: { runId: string }) {
   const user = useSessionUser();
   const review = useRunReview(runId);
@@ -54,7 +57,11 @@ function ReviewPage({ runId }: { runId: string }) {
         </Card>
       )}
       <Section id="readings" title="Readings">
-        <ReadingsTable runId={r.run.id} total={r.readingCount} />
+        <ReadingsTable
+          runId={r.run.id}
+          total={r.readingCount}
+          canVoid={staff && VOIDABLE_STATES.includes(r.run.state)}
+        />
       </Section>
       <Section id="photos" title="Photos and documents">
         <AttachmentPanel

@@ -1,3 +1,4 @@
+import type { VoidInput } from '../../../shared/review/review.schema';
 import {
   keepPreviousData,
   queryOptions,
@@ -60,5 +61,15 @@ export function useSignOff(runId: string, onDecided?: (result: DecisionView) => 
       await onDecided?.(result);
       await queryClient.invalidateQueries({ queryKey: reviewKeys.all });
     },
+  });
+}
+
+/** A technician takes back a reading from the review page, with a reason (kept in the trail). */
+export function useVoidEntry(runId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: VoidInput) =>
+      api.post<{ id: string }>(`/api/runs/${encodeURIComponent(runId)}/voids`, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
   });
 }

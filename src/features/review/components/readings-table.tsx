@@ -5,11 +5,18 @@ import { LoadError, Loading } from '../../../components/ui/status-message';
 import { Table, Td, Th } from '../../../components/ui/table';
 import { readingsCsvUrl, useReadings } from '../api';
 import { formatMoment } from '../format';
+import { VoidReading } from './void-reading';
 
 const PAGE = 50;
 const BAND_MARK = { 'in-band': '■', over: '▲', under: '▽' } as const;
 
-function ReadingTableRow({ reading: r }: { reading: ReadingRow }) {
+function ReadingTableRow({
+  reading: r,
+  voidable,
+}: {
+  reading: ReadingRow;
+  voidable: string | null;
+}) {
   // A voided reading stays in the record, struck through; it counts for nothing.
   return (
     <tr className={r.voided ? 'text-muted line-through' : undefined}>
@@ -40,6 +47,9 @@ function ReadingTableRow({ reading: r }: { reading: ReadingRow }) {
           </span>
         )}
       </Td>
+      {voidable !== null && (
+        <Td>{!r.voided && <VoidReading runId={voidable} readingId={r.id} />}</Td>
+      )}
     </tr>
   );
 }
@@ -75,7 +85,16 @@ function ReadingsPager({
 }
 
 /** Every reading, fifty at a time, with the whole list as a CSV download. */
-export function ReadingsTable({ runId, total }: { runId: string; total: number }) {
+export function ReadingsTable({
+  runId,
+  total,
+  canVoid,
+}: {
+  runId: string;
+  total: number;
+  /** Staff, before sign-off: each reading can be voided with a reason. */
+  canVoid: boolean;
+}) {
   const [offset, setOffset] = useState(0);
   const readings = useReadings(runId, offset, PAGE);
   const last = Math.min(offset + PAGE, readings.data?.total ?? total);
@@ -106,11 +125,12 @@ export function ReadingsTable({ runId, total }: { runId: string; total: number }
               <Th>Speed</Th>
               <Th>Hour meter</Th>
               <Th>Note</Th>
+              {canVoid && <Th>Void</Th>}
             </tr>
           </thead>
           <tbody>
             {readings.data.readings.map((r) => (
-              <ReadingTableRow key={r.id} reading={r} />
+              <ReadingTableRow key={r.id} reading={r} voidable={canVoid ? runId : null} />
             ))}
           </tbody>
         </Table>
