@@ -77,6 +77,8 @@ describe('returning a run', () => {
       m.subject.startsWith('Break-in returned: Blue Tern'),
     );
     expect(mail.text).toContain('Only four minutes logged.');
+    const rerunList = mail.text.slice(mail.text.indexOf('Phases to run again:'));
+    expect(rerunList.split('\n')[1]).toContain(run.program.phases[0].name);
     expect(mail.text).toContain('In band for 4 min of the 10 min required; 6 min to go.');
     expect(mail.text).toContain('kill-switch lanyard');
 

@@ -67,6 +67,11 @@ export class SignOffService {
       reviewer,
       input.comments,
       decided.certificate,
+      {
+        rerunPhaseNames: rerunPhaseIds.map(
+          (id) => ctx.run.program.phases.find((p) => p.id === id)!.name,
+        ),
+      },
     );
     await this.dataSource.transaction((manager) =>
       recordAudit(manager, {
