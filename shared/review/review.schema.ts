@@ -102,3 +102,28 @@ export const VoidInputSchema = z.object({
     .max(200, { error: 'The reason (reason) can have at most 200 characters.' }),
 });
 export type VoidInput = z.infer<typeof VoidInputSchema>;
+
+/** The most runs decided together from one vessel's page (quad outboards are the most we expect). */
+export const MAX_VESSEL_DECISIONS = 6;
+
+/**
+ * Decisions on the submitted runs of one vessel, saved together or not at all
+ * (POST /api/vessels/:id/decisions). Each is a sign-off input naming its run.
+ */
+export const VesselDecisionsInputSchema = z.object({
+  decisions: z
+    .array(
+      z
+        .object({ runId: z.uuid({ error: 'Each decision names a run (runId).' }) })
+        .and(SignOffInputSchema),
+      { error: 'The decisions (decisions) must be a list.' },
+    )
+    .min(1, { error: 'Decide on at least one run (decisions).' })
+    .max(MAX_VESSEL_DECISIONS, {
+      error: `Decide on at most ${MAX_VESSEL_DECISIONS} runs at once (decisions).`,
+    })
+    .refine((list) => new Set(list.map((d) => d.runId)).size === list.length, {
+      error: 'Each run can be decided on once (decisions).',
+    }),
+});
+export type VesselDecisionsInput = z.infer<typeof VesselDecisionsInputSchema>;

@@ -1,29 +1,20 @@
-import { randomUUID } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import { CONFIRM_NEEDS_COMMENT, type SignOffInput } from '../../../shared/review/review.schema.js';
 import type { Clock } from '../../lib/clock.js';
-import { NotFoundError, ValidationError } from '../../lib/errors.js';
+import { HttpError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { positionWords } from '../../../shared/engines/engine-words.js';
 import { recordAudit } from '../audit/audit.service.js';
 import type { MailOutcome, Outbox } from '../mail/outbox.js';
 import { visibleRun } from '../runs/run-access.js';
 import { loadRunContext, type RunContext } from '../runs/run-context.js';
 import { User } from '../users/user.entity.js';
-import { certificateContent } from './certificate-content.js';
-import { renderCertificate } from './certificate-pdf.js';
 import { writeCertificateFile } from './certificate-files.js';
-import { certificateFilePath, type CertificateStore } from './certificate-store.js';
+import type { CertificateStore } from './certificate-store.js';
 import { Certificate } from './certificate.entity.js';
 import { mailDecision } from './decision-mail.js';
-import {
-  addReview,
-  insertCertificate,
-  markRun,
-  nextCertificateNumber,
-  recordSignOff,
-  refuseUnlessSubmitted,
-  type Reviewer,
-} from './signoff-records.js';
+import { refuseUnlessSubmitted, type Reviewer } from './signoff-records.js';
+import { confirmRun, phaseNames, returnRun, type Written } from './signoff-writes.js';
 
 export interface DecisionResult {
   state: 'signed-off' | 'returned';
@@ -41,26 +32,72 @@ export class SignOffService {
     private readonly recount: (manager: EntityManager, runId: string) => Promise<void>,
   ) {}
 
+  /** A decision on one run. */
   async decide(user: SessionUser, runId: string, input: SignOffInput): Promise<DecisionResult> {
     const ctx = await loadRunContext(this.dataSource, user, runId, this.clock.now());
-    refuseUnlessSubmitted(ctx.run);
-    if (input.decision === 'confirm' && ctx.account.verdict !== 'complete' && !input.comments) {
-      throw new ValidationError([{ field: 'comments', message: CONFIRM_NEEDS_COMMENT }]);
+    const [result] = await this.decideAll(user, [checkDecision(ctx, input)]);
+    return result;
+  }
+
+  /**
+   * Decisions on several runs of one vessel (both engines of a twin), saved together or not at
+   * all: one refused decision refuses them all, naming the engine and the field
+   * (decisions.N.field). Each engine keeps its own run, decision and certificate.
+   */
+  async decideVessel(
+    user: SessionUser,
+    vesselId: string,
+    items: ReadonlyArray<SignOffInput & { runId: string }>,
+  ): Promise<Array<DecisionResult & { runId: string }>> {
+    const checked: CheckedDecision[] = [];
+    for (const [index, { runId, ...input }] of items.entries()) {
+      const ctx = await loadRunContext(this.dataSource, user, runId, this.clock.now());
+      checked.push(forEngine(index, ctx, () => checkDecision(ctx, input, vesselId)));
     }
-    const rerunPhaseIds =
-      input.decision === 'return' ? phasesToRerun(ctx, input.rerunPhaseIds) : [];
+    const results = await this.decideAll(user, checked);
+    return results.map((result, i) => ({ runId: checked[i].ctx.run.id, ...result }));
+  }
+
+  private async decideAll(user: SessionUser, decisions: CheckedDecision[]) {
     const person = await this.dataSource.getRepository(User).findOneByOrFail({ id: user.id });
     const reviewer: Reviewer = { id: person.id, name: person.name, role: person.role };
     const now = this.clock.now();
-    const decided =
-      input.decision === 'confirm'
-        ? await this.confirm(ctx, reviewer, input.comments, now)
-        : await this.returnToSkipper(
-            ctx,
-            reviewer,
-            { comments: input.comments, rerunPhaseIds },
-            now,
-          );
+    const written: string[] = [];
+    let saved: Written[];
+    try {
+      saved = await this.dataSource.transaction(async (manager) => {
+        const out: Written[] = [];
+        for (const d of decisions) out.push(await this.write(manager, written, d, reviewer, now));
+        return out;
+      });
+    } catch (error) {
+      for (const relative of written) this.store.remove(relative);
+      throw error;
+    }
+    const results: DecisionResult[] = [];
+    for (const [i, d] of decisions.entries()) results.push(await this.tell(d, reviewer, saved[i]));
+    return results;
+  }
+
+  private write(
+    manager: EntityManager,
+    written: string[],
+    { ctx, input, rerunPhaseIds }: CheckedDecision,
+    reviewer: Reviewer,
+    now: Date,
+  ): Promise<Written> {
+    const decision = { ctx, reviewer, comments: input.comments, now };
+    return input.decision === 'confirm'
+      ? confirmRun(manager, this.store, written, decision)
+      : returnRun(manager, this.recount, { ...decision, rerunPhaseIds });
+  }
+
+  /** After the decision is on disk: the e-mail to the skipper, and whether it went, in the trail. */
+  private async tell(
+    { ctx, input, rerunPhaseIds }: CheckedDecision,
+    reviewer: Reviewer,
+    decided: Written,
+  ): Promise<DecisionResult> {
     const mail = await mailDecision(
       this.outbox,
       ctx,
@@ -68,9 +105,7 @@ export class SignOffService {
       input.comments,
       decided.certificate,
       {
-        rerunPhaseNames: rerunPhaseIds.map(
-          (id) => ctx.run.program.phases.find((p) => p.id === id)!.name,
-        ),
+        rerunPhaseNames: phaseNames(ctx, rerunPhaseIds),
       },
     );
     await this.dataSource.transaction((manager) =>
@@ -88,83 +123,10 @@ export class SignOffService {
       state: decided.state,
       certificate: decided.certificate && {
         number: decided.certificate.number,
-        downloadUrl: `/api/runs/${runId}/certificate`,
+        downloadUrl: `/api/runs/${ctx.run.id}/certificate`,
       },
       mail: mail.outcome,
     };
-  }
-
-  /** Signs off, numbers and writes the certificate, all in one transaction (the PDF is removed again if it fails). */
-  private async confirm(ctx: RunContext, reviewer: Reviewer, comments: string, now: Date) {
-    const id = randomUUID();
-    const relative = certificateFilePath(ctx.run.workshopId, id);
-    let written = false;
-    try {
-      return await this.dataSource.transaction(async (manager) => {
-        await markRun(manager, ctx, 'signed-off', now);
-        await addReview(
-          manager,
-          ctx,
-          reviewer,
-          { decision: 'confirmed', comments, rerunPhaseIds: [] },
-          now,
-        );
-        const number = await nextCertificateNumber(manager, ctx, now);
-        const content = certificateContent(ctx, ctx.charts, {
-          number,
-          issuedAt: now,
-          comments,
-          technician: { name: reviewer.name, role: reviewer.role },
-        });
-        const pdf = renderCertificate(content);
-        this.store.write(relative, pdf);
-        written = true;
-        await insertCertificate(manager, ctx, {
-          id,
-          number,
-          issuedAt: now,
-          issuedById: reviewer.id,
-          content,
-          stored: { at: now, byteSize: pdf.length },
-        });
-        await recordSignOff(manager, ctx, reviewer, now, { comments, number });
-        return { state: 'signed-off' as const, certificate: { number, pdf } };
-      });
-    } catch (error) {
-      if (written) this.store.remove(relative);
-      throw error;
-    }
-  }
-
-  private async returnToSkipper(
-    ctx: RunContext,
-    reviewer: Reviewer,
-    { comments, rerunPhaseIds }: { comments: string; rerunPhaseIds: string[] },
-    now: Date,
-  ) {
-    return this.dataSource.transaction(async (manager) => {
-      await markRun(manager, ctx, 'returned', now);
-      await addReview(
-        manager,
-        ctx,
-        reviewer,
-        { decision: 'returned', comments, rerunPhaseIds },
-        now,
-      );
-      await this.recount(manager, ctx.run.id);
-      await recordAudit(manager, {
-        workshopId: ctx.run.workshopId,
-        recordType: 'run',
-        recordId: ctx.run.id,
-        action: 'run-returned',
-        actor: reviewer,
-        at: now,
-        detail: `${comments} (to run again: ${rerunPhaseIds
-          .map((id) => ctx.run.program.phases.find((p) => p.id === id)!.name)
-          .join(', ')})`,
-      });
-      return { state: 'returned' as const, certificate: null };
-    });
   }
 
   /** The certificate PDF for anyone who may see the run; each download goes into the trail. */
@@ -191,6 +153,47 @@ export class SignOffService {
       }),
     );
     return { fileName: `break-in-certificate-${certificate.number}.pdf`, pdf };
+  }
+}
+
+interface CheckedDecision {
+  ctx: RunContext;
+  input: SignOffInput;
+  /** The phases to run again, in program order; empty on a confirmation. */
+  rerunPhaseIds: string[];
+}
+
+/** Refuses a decision the run cannot take: not submitted, not this vessel's, a missing comment, an unknown phase. */
+function checkDecision(ctx: RunContext, input: SignOffInput, vesselId?: string): CheckedDecision {
+  if (vesselId !== undefined && ctx.run.vesselId !== vesselId)
+    throw new ValidationError([
+      { field: 'runId', message: "This run is not one of this vessel's runs." },
+    ]);
+  refuseUnlessSubmitted(ctx.run);
+  if (input.decision === 'confirm' && ctx.account.verdict !== 'complete' && !input.comments) {
+    throw new ValidationError([{ field: 'comments', message: CONFIRM_NEEDS_COMMENT }]);
+  }
+  const rerunPhaseIds = input.decision === 'return' ? phasesToRerun(ctx, input.rerunPhaseIds) : [];
+  return { ctx, input, rerunPhaseIds };
+}
+
+/** A refusal of one engine's decision names the engine and its place in the list. */
+function forEngine<T>(index: number, ctx: RunContext, check: () => T): T {
+  try {
+    return check();
+  } catch (error) {
+    if (!(error instanceof HttpError)) throw error;
+    const engine = `${positionWords(ctx.engine.position)} engine`;
+    throw new HttpError(
+      error.status,
+      error.slug,
+      error.title,
+      `${engine}: ${error.detail ?? error.title}`,
+      (error.errors ?? []).map((e) => ({
+        field: `decisions.${index}.${e.field}`,
+        message: `${engine}: ${e.message}`,
+      })),
+    );
   }
 }
 
