@@ -127,3 +127,4 @@ export const VesselDecisionsInputSchema = z.object({
     }),
 });
 export type VesselDecisionsInput = z.infer<typeof VesselDecisionsInputSchema>;
+export type VesselDecisionsFormValues = z.input<typeof VesselDecisionsInputSchema>;

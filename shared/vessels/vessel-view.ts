@@ -10,7 +10,7 @@ export interface EngineView extends Omit<EngineInput, 'vesselId'> {
   updatedAt: string;
   /** Present on the engine routes; GET /api/vessels lists only engines in use. */
   archivedAt?: string | null;
-  /** In vessel lists (GET /api/vessels, the device's pull): the engine's newest run, if any. */
+  /** In GET /api/vessels, GET /api/vessels/:id and the device's pull: the engine's newest run, if any. */
   latestRun?: { id: string; state: RunState } | null;
 }
 

@@ -76,6 +76,7 @@ function signedInRoutes(queryClient: QueryClient): RouteObject[] {
     { path: 'deck/*', element: <ReloadPage /> },
     { path: 'vessels', lazy: () => import('./routes/vessels'), errorElement },
     { path: 'vessels/:id', lazy: () => import('./routes/vessel'), errorElement },
+    { path: 'vessels/:id/decide', lazy: () => import('./routes/vessel-decide'), errorElement },
     { path: 'engines/:id', lazy: () => import('./routes/engine'), errorElement },
     {
       path: 'engines/:id/checklist',

@@ -60,6 +60,17 @@ export class VesselsService {
       order: { name: 'ASC' },
     });
     const views = vessels.map(toVesselView).filter((view) => vesselMatches(view, query.q));
+    return this.withLatestRuns(views);
+  }
+
+  async get(user: SessionUser, id: string): Promise<VesselView> {
+    await findVisibleVessel(this.dataSource.manager, user, id);
+    const [view] = await this.withLatestRuns([await this.view(this.dataSource.manager, id)]);
+    return view;
+  }
+
+  /** Each engine's newest run (the deck's picker and the vessel's decision page read it). */
+  private async withLatestRuns(views: VesselView[]): Promise<VesselView[]> {
     const latest = await this.checks.latestRunsOf(
       this.dataSource.manager,
       views.flatMap((v) => v.engines.map((e) => e.id)),
@@ -68,11 +79,6 @@ export class VesselsService {
     for (const view of views)
       for (const engine of view.engines) engine.latestRun = byEngine.get(engine.id) ?? null;
     return views;
-  }
-
-  async get(user: SessionUser, id: string): Promise<VesselView> {
-    await findVisibleVessel(this.dataSource.manager, user, id);
-    return this.view(this.dataSource.manager, id);
   }
 
   async create(user: SessionUser, input: VesselInput): Promise<VesselView> {

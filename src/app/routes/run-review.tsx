@@ -7,6 +7,7 @@ import { useRunReview } from '../../features/review/api';
 import { ReviewHistory } from '../../features/review/components/decisions';
 import { ReadingsTable } from '../../features/review/components/readings-table';
 import { AuditTrail } from '../../features/review/components/run-log';
+import { DecideTogetherLink } from './decide-together-link';
 import { SignOffForm } from '../../features/review/components/sign-off-form';
 import { Card } from '../../components/ui/card';
 import { LoadError, Loading } from '../../components/ui/status-message';
@@ -45,6 +46,7 @@ function ReviewPage({ runId }: { runId: string }) {
       <PhasesSection review={r} />
       {r.canDecide && (
         <Card title="Sign-off" id="sign-off" className="scroll-mt-4">
+          <DecideTogetherLink vesselId={r.vessel.id} className="mb-4" />
           <SignOffForm
             runId={r.run.id}
             verdict={r.account.verdict}

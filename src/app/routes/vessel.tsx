@@ -9,6 +9,7 @@ import { EngineForm } from '../../features/vessels/components/engine-form';
 import { engineName, EnginesList } from '../../features/vessels/components/engines-list';
 import { SkipperLinks } from '../../features/vessels/components/skipper-links';
 import { ArchivedPill } from '../../features/vessels/components/status-pills';
+import { DecideTogetherLink } from './decide-together-link';
 import { VesselForm } from '../../features/vessels/components/vessel-form';
 import { Button } from '../../components/ui/button';
 import { Card } from '../../components/ui/card';
@@ -141,6 +142,10 @@ function VesselPage({ id }: { id: string }) {
         <h1 className="text-3xl font-bold">{v.name}</h1>
         <ArchivedPill archivedAt={v.archivedAt} />
       </div>
+      <DecideTogetherLink
+        vesselId={v.id}
+        className="rounded-md border-2 border-ink bg-surface p-3"
+      />
       <VesselRecordCard vessel={v} />
       <EnginesCard vessel={v} />
       <Card title="Skippers">

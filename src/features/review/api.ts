@@ -6,7 +6,7 @@ import {
   useQuery,
   useQueryClient,
 } from '@tanstack/react-query';
-import type { SignOffInput } from '../../../shared/review/review.schema';
+import type { SignOffInput, VesselDecisionsInput } from '../../../shared/review/review.schema';
 import type { DecisionView, ReadingsPage, RunReviewView } from '../../../shared/review/views';
 import { api } from '../../lib/api-client';
 
@@ -70,6 +70,21 @@ export function useVoidEntry(runId: string) {
   return useMutation({
     mutationFn: (input: VoidInput) =>
       api.post<{ id: string }>(`/api/runs/${encodeURIComponent(runId)}/voids`, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
+  });
+}
+
+export type VesselDecisionView = DecisionView & { runId: string };
+
+/** Decides the submitted runs of one vessel together (both engines of a twin): all or none. */
+export function useVesselDecisions(vesselId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: VesselDecisionsInput) =>
+      api.post<{ decisions: VesselDecisionView[] }>(
+        `/api/vessels/${encodeURIComponent(vesselId)}/decisions`,
+        input,
+      ),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: reviewKeys.all }),
   });
 }

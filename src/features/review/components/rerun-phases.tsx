@@ -1,14 +1,14 @@
-import type { UseFormRegister } from 'react-hook-form';
-import type { SignOffFormValues } from '../../../../shared/review/review.schema';
+import type { UseFormRegisterReturn } from 'react-hook-form';
 
 /** On a return: which of the run's phases the skipper must run again (at least one). */
 export function RerunPhases({
   phases,
-  register,
+  field,
   error,
 }: {
   phases: ReadonlyArray<{ id: string; name: string }>;
-  register: UseFormRegister<SignOffFormValues>;
+  /** The form's registration of the phase list (its name differs per engine on a vessel's page). */
+  field: UseFormRegisterReturn;
   error?: string;
 }) {
   return (
@@ -24,7 +24,7 @@ export function RerunPhases({
             type="checkbox"
             value={phase.id}
             className="size-5 accent-[var(--rs-accent)]"
-            {...register('rerunPhaseIds')}
+            {...field}
           />
           {phase.name}
         </label>

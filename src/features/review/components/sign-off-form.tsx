@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm, useWatch, type UseFormRegister } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import {
   SignOffInputSchema,
   type SignOffFormValues,
@@ -13,65 +13,8 @@ import { Button } from '../../../components/ui/button';
 import { Field, controlClass } from '../../../components/ui/field';
 import { serverErrorMessages } from '../../../lib/form-errors';
 import { useSignOff } from '../api';
+import { commentsHint, DecisionChoices } from './decision-choices';
 import { RerunPhases } from './rerun-phases';
-
-const CHOICES = [
-  {
-    value: 'confirm',
-    label: 'Confirm and sign off',
-    hint: 'Freezes the run, issues the PDF certificate and e-mails it to the skipper.',
-  },
-  {
-    value: 'return',
-    label: 'Return to the skipper',
-    hint: 'Opens logging again and e-mails the skipper your comments and what the log shows.',
-  },
-] as const;
-
-/** What the comments are for: next steps on a return, the certificate's words on a sign-off. */
-function commentsHint(decision: SignOffFormValues['decision'], verdict: Verdict): string {
-  if (decision === 'return') return 'Say what the skipper should do next.';
-  return verdict === 'complete'
-    ? 'Optional; printed on the certificate.'
-    : 'The computation does not judge this run complete: say why you confirm it. Printed on the certificate.';
-}
-
-function DecisionChoices({
-  register,
-  error,
-}: {
-  register: UseFormRegister<SignOffFormValues>;
-  error?: string;
-}) {
-  return (
-    <fieldset className="flex flex-col gap-2">
-      <legend className="mb-1 font-semibold">Decision</legend>
-      {CHOICES.map((choice) => (
-        <label
-          key={choice.value}
-          className="flex min-h-touch cursor-pointer items-start gap-3 rounded-md border-2 border-line p-3 has-[:checked]:border-ink"
-        >
-          <input
-            type="radio"
-            value={choice.value}
-            className="mt-1 size-5 accent-[var(--rs-accent)]"
-            {...register('decision')}
-          />
-          <span>
-            <span className="font-bold">{choice.label}</span>
-            <span className="block text-sm text-muted">{choice.hint}</span>
-          </span>
-        </label>
-      ))}
-      {error && (
-        <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
-          <span aria-hidden="true">⚠</span>
-          {error}
-        </p>
-      )}
-    </fieldset>
-  );
-}
 
 /** The decision form and sending it; a refusal the fields do not show goes in the alert. */
 function useSignOffForm(runId: string, onDecided?: (result: DecisionView) => void) {
@@ -116,11 +59,11 @@ export function SignOffForm({
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4" aria-label="Sign-off">
       {refusal && <Alert title="Not saved">{refusal}</Alert>}
-      <DecisionChoices register={register} error={formState.errors.decision?.message} />
+      <DecisionChoices field={register('decision')} error={formState.errors.decision?.message} />
       {decision === 'return' && (
         <RerunPhases
           phases={phases}
-          register={register}
+          field={register('rerunPhaseIds')}
           error={formState.errors.rerunPhaseIds?.message}
         />
       )}
