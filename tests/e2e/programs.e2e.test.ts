@@ -122,7 +122,7 @@ describe('break-in programs', () => {
           .poll(() => card.getByText('Run created.').count(), { timeout: 15_000 })
           .toBe(1);
         expect(await card.getByRole('link', { name: 'Open the run' }).getAttribute('href')).toMatch(
-          /^\/runs\/[0-9a-f-]{36}$/,
+          /^\/runs\/[0-9a-f-]{36}\/review$/,
         );
       }
       await keepScreenshot(tech, 'engine-assign-program-phone');

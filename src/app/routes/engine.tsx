@@ -18,9 +18,9 @@ import { Button } from '../../components/ui/button';
 import { ButtonLink } from '../../components/ui/button-link';
 import { Card } from '../../components/ui/card';
 import { LoadError, Loading } from '../../components/ui/status-message';
+import { SkipperEngine } from './skipper-engine';
 import { formatDate } from '../../lib/format';
 import { useSessionUser } from '../shell/session';
-import { StaffOnly } from './staff-only';
 
 function DetailsCard({ engine }: { engine: EngineRow }) {
   const [editing, setEditing] = useState(false);
@@ -136,11 +136,9 @@ function EnginePage({ id }: { id: string }) {
 
 export function EngineRoute() {
   const { id = '' } = useParams();
-  return (
-    <StaffOnly title="Engine">
-      <EnginePage key={id} id={id} />
-    </StaffOnly>
-  );
+  const user = useSessionUser();
+  if (user.role === 'skipper') return <SkipperEngine key={id} id={id} />;
+  return <EnginePage key={id} id={id} />;
 }
 
 export { EngineRoute as Component };

@@ -1,3 +1,4 @@
+import { positionWords } from '../../../shared/engines/engine-words';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { DecisionView, RunReviewView } from '../../../shared/review/views';
@@ -15,7 +16,6 @@ import {
 import { PhaseSection } from '../../features/review/components/phase-section';
 import { EventList } from '../../features/review/components/run-log';
 import { Card } from '../../components/ui/card';
-import { capitalise } from '../../lib/format';
 
 /* The parts of the review page (run-review.tsx), each composed from the review and board features. */
 
@@ -43,7 +43,7 @@ export function ReviewHeader({ review }: { review: RunReviewView }) {
   return (
     <header className="flex flex-col gap-2">
       <h1 className="text-3xl font-bold">
-        {vessel.name} · {capitalise(engine.position)} engine
+        {vessel.name} · {positionWords(engine.position)} engine
       </h1>
       <p>
         {engine.maker} {engine.model} · serial{' '}

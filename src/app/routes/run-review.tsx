@@ -1,3 +1,4 @@
+import { positionWords } from '../../../shared/engines/engine-words';
 import { useState } from 'react';
 import { useParams } from 'react-router-dom';
 import type { DecisionView } from '../../../shared/review/views';
@@ -36,7 +37,7 @@ function ReviewPage({ runId }: { runId: string }) {
   const open = r.run.state !== 'signed-off';
   return (
     <div className="flex flex-col gap-6">
-      <title>{`${r.vessel.name}, ${r.engine.position} engine · Review · Ringseat`}</title>
+      <title>{`${r.vessel.name}, ${positionWords(r.engine.position)} engine · Review · Ringseat`}</title>
       <ReviewTop review={r} staff={staff} decided={decided} />
       {r.reviews.length > 0 && (
         <Section id="decisions" title="Decisions">

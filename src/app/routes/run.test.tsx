@@ -80,4 +80,24 @@ describe('the run page route', () => {
     expect(router.state.location.pathname).toBe(`/runs/${RUN_ID}`);
     expect(screen.getByText('Under way')).toBeInTheDocument();
   });
+
+  it('takes a skipper who follows a link to an engine (the service reminder) to its newest run', async () => {
+    const engine = {
+      ...vessel.engines[0],
+      latestRun: { id: RUN_ID, state: 'signed-off' as const },
+    };
+    stubFetch({
+      'GET /api/auth/me': { status: 200, body: { user: testUser('skipper') } },
+      'GET /api/vessels': { status: 200, body: { vessels: [{ ...vessel, engines: [engine] }] } },
+      [`GET /api/runs/${RUN_ID}`]: { status: 200, body: { run } },
+      [`GET /api/runs/${RUN_ID}/review`]: { status: 200, body: runOverview() },
+    });
+    const { router } = renderRoutes(createRoutes(createTestQueryClient()), {
+      at: `/engines/${engine.id}`,
+    });
+    expect(
+      await screen.findByRole('heading', { level: 1, name: 'Little Auk' }, { timeout: 5000 }),
+    ).toBeInTheDocument();
+    expect(router.state.location.pathname).toBe(`/runs/${RUN_ID}`);
+  });
 });

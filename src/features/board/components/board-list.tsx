@@ -1,11 +1,12 @@
+import { positionWords } from '../../../../shared/engines/engine-words';
 import { Link } from 'react-router-dom';
 import type { BoardRow } from '../../../../shared/review/views';
 import { Table, Td, Th } from '../../../components/ui/table';
-import { capitalise, formatDate } from '../../../lib/format';
+import { formatDate } from '../../../lib/format';
 import { FirstServiceText, FlagList, ProgressBar, RunStatePill, VerdictPill } from './run-badges';
 
 const engineWords = (run: BoardRow) =>
-  `${capitalise(run.engine.position)} · ${run.engine.maker} ${run.engine.model}`;
+  `${positionWords(run.engine.position)} · ${run.engine.maker} ${run.engine.model}`;
 const activity = (run: BoardRow) => (run.lastActivityAt ? formatDate(run.lastActivityAt) : '—');
 
 function RunLink({ run }: { run: BoardRow }) {

@@ -119,7 +119,7 @@ describe('AssignProgram', () => {
     expect(await screen.findByText(/Run created/)).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Open the run' })).toHaveAttribute(
       'href',
-      `/runs/${plannedRun.id}`,
+      `/runs/${plannedRun.id}/review`,
     );
     expect(calls.find((call) => call.method === 'POST')?.body).toEqual({
       engineId,

@@ -13,8 +13,9 @@ import { useCancelRun } from '../assign-api';
 const reasonProblem = (reason: string) =>
   CancelRunInputSchema.safeParse({ reason }).error?.issues[0]?.message ?? null;
 
+/** Staff open a run at its review, where every entry and decision is. */
 export const RunLink = ({ runId }: { runId: string }) => (
-  <Link to={`/runs/${runId}`} className="underline underline-offset-4">
+  <Link to={`/runs/${runId}/review`} className="underline underline-offset-4">
     Open the run
   </Link>
 );
