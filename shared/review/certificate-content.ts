@@ -22,6 +22,8 @@ export interface CertificateContent {
   comments: string;
   technician: { name: string; role: string };
   submittedAt: string | null;
+  /** Readings and notes taken back before sign-off (absent on certificates issued before voids). */
+  voidedCount?: number;
   firstService: {
     dueAtHours: number | null;
     dueOn: string | null;
@@ -43,4 +45,6 @@ export interface CertificatePhase {
   firstAt: string | null;
   lastAt: string | null;
   reasons: string[];
+  /** Minutes logged before the phase was sent back to be run again: kept, not counted. */
+  setAsideMinutes?: number;
 }

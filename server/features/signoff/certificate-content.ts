@@ -34,6 +34,7 @@ export function certificateContent(
     comments: decision.comments,
     technician: decision.technician,
     submittedAt: run.submittedAt?.toISOString() ?? null,
+    voidedCount: ctx.figures.voidedCount,
     firstService: firstServicePart(ctx),
   };
 }
@@ -60,6 +61,7 @@ function phaseParts(ctx: RunContext, charts: PhaseChart[]): CertificateContent['
       firstAt: isoOrNull(charts[i].firstAt),
       lastAt: isoOrNull(charts[i].lastAt),
       reasons: a.reasons.map((r) => r.message),
+      setAsideMinutes: minutes(a.setAsideMs),
     };
   });
 }

@@ -41,7 +41,18 @@ export function phaseTable(doc: Doc, c: CertificateContent) {
     true,
   );
   for (const phase of c.phases) tableRow(doc, COLUMNS, phaseCells(phase, c.timezone), false);
-  const reasons = c.phases.flatMap((p) => p.reasons.map((r) => `${p.name}: ${r}`));
+  const reasons = c.phases.flatMap((p) => [
+    ...p.reasons.map((r) => `${p.name}: ${r}`),
+    ...(p.setAsideMinutes
+      ? [
+          `${p.name}: run again after a return; ${minutesWords(p.setAsideMinutes)} logged before the return kept in the record but not counted.`,
+        ]
+      : []),
+  ]);
+  if (c.voidedCount)
+    reasons.push(
+      `${c.voidedCount} ${c.voidedCount === 1 ? 'entry' : 'entries'} voided before sign-off, each with its reason: kept in the record, not counted.`,
+    );
   doc.moveDown(0.6);
   if (reasons.length > 0) {
     doc.font('bold').fontSize(10).fillColor(INK).text('What the log shows');

@@ -1,5 +1,4 @@
 import { randomUUID } from 'node:crypto';
-import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   addOtherWorkshop,
@@ -7,6 +6,7 @@ import {
   FakeClock,
   signedInAgent,
 } from '../../../tests/helpers/test-server.js';
+import { certificatePdf, pdfText } from '../../../tests/helpers/pdf.js';
 import { startMailTestServer, type MailTestServer } from '../mail/mail-test-server.js';
 import { Run } from '../runs/run.entity.js';
 
@@ -23,26 +23,7 @@ const runOf = async (vessel: string) =>
     (r: { vessel: { name: string } }) => r.vessel.name === vessel,
   );
 
-async function pdfOf(agent: Awaited<ReturnType<typeof staff>>, runId: string) {
-  const res = await agent
-    .get(`/api/runs/${runId}/certificate`)
-    .buffer(true)
-    .parse((r, done) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (c: Buffer) => chunks.push(c));
-      r.on('end', () => done(null, Buffer.concat(chunks)));
-    });
-  return res;
-}
-
-async function pdfText(pdf: Buffer): Promise<string> {
-  const parser = new PDFParse({ data: new Uint8Array(pdf) });
-  try {
-    return (await parser.getText()).text.replace(/\s+/g, ' ');
-  } finally {
-    await parser.destroy();
-  }
-}
+const pdfOf = certificatePdf;
 
 describe('signing off a submitted run', () => {
   it('refuses a skipper (403) and another workshop (404), changing nothing', async () => {

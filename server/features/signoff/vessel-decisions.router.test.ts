@@ -1,6 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { assignRun, sessionEventFor, type RunDetail } from '../../../tests/helpers/runs.js';
+import { certificatePdf, pdfText } from '../../../tests/helpers/pdf.js';
+import {
+  assignRun,
+  readingFor,
+  sessionEventFor,
+  type RunDetail,
+} from '../../../tests/helpers/runs.js';
 import { DEMO, FakeClock, signedInAgent } from '../../../tests/helpers/test-server.js';
 import { startMailTestServer, type MailTestServer } from '../mail/mail-test-server.js';
 
@@ -19,6 +25,7 @@ async function submittedTwin(): Promise<[RunDetail, RunDetail]> {
   const t0 = clock.now().getTime() - 3_600_000;
   const items = [port, starboard].flatMap((run) => [
     sessionEventFor(run, 'session-start', t0),
+    readingFor(run, t0, 850, 'idle', 0),
     sessionEventFor(run, 'session-stop', t0 + 4 * 60_000),
     {
       type: 'run-patch',
@@ -35,6 +42,45 @@ async function submittedTwin(): Promise<[RunDetail, RunDetail]> {
     .send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items });
   expect(push.status).toBe(200);
   return [port, starboard];
+}
+
+/** The skipper runs the returned engine again, voids a mistyped reading and submits again. */
+async function rerunWithAVoid(run: RunDetail) {
+  clock.advance(60_000);
+  const t1 = clock.now().getTime();
+  const typo = readingFor(run, t1 + 1000, 8500, 'idle', 0);
+  const items = [
+    sessionEventFor(run, 'session-start', t1),
+    typo,
+    {
+      type: 'event',
+      runId: run.id,
+      event: {
+        kind: 'void',
+        id: randomUUID(),
+        at: t1 + 2000,
+        engineId: run.engine.id,
+        targetId: typo.event.id,
+        reason: 'Typed 8500 for 850.',
+      },
+    },
+    readingFor(run, t1 + 3000, 850, 'idle', 0),
+    sessionEventFor(run, 'session-stop', t1 + 3 * 60_000),
+    {
+      type: 'run-patch',
+      id: randomUUID(),
+      runId: run.id,
+      at: t1 + 4 * 60_000,
+      submit: true,
+      submitNote: 'Only three more minutes before the fog closed in again.',
+    },
+  ];
+  clock.advance(5 * 60_000);
+  const skipper = await signedInAgent(server.app, DEMO.skipperA);
+  const push = await skipper
+    .post('/api/sync/push')
+    .send({ deviceId: randomUUID(), sentAt: clock.now().getTime(), items });
+  expect(push.body.results.every((r: { status: string }) => r.status === 'stored')).toBe(true);
 }
 
 const stateOf = async (runId: string) => {
@@ -108,6 +154,21 @@ describe('deciding both engines of a vessel at once', () => {
     await server.catcher.waitFor((m) => m.subject.startsWith('Break-in returned: Blue Tern'));
     const certificate = await tech.get(`/api/runs/${port.id}/certificate`);
     expect(certificate.headers['content-type']).toBe('application/pdf');
+
+    await rerunWithAVoid(starboard);
+    const last = await tech.post(url).send({
+      decisions: [{ ...confirmPort, runId: starboard.id }],
+    });
+    expect(last.status).toBe(200);
+    const text = await pdfText((await certificatePdf(tech, starboard.id)).body as Buffer);
+    expect(text).toContain(
+      'run again after a return; 4 min logged before the return kept in the record but not counted.',
+    );
+    expect(text).toContain('1 entry voided before sign-off, each with its reason');
+    // Three minutes after the return count, the four before it do not (the re-run rule).
+    expect(text).toContain(
+      'First run at the dock (by the workshop) 0–3000 rpm, idle only 10 min 2 min 57 s',
+    );
   });
 
   it('refuses a run of another vessel, and a signed-off run, in the same words as one run', async () => {
