@@ -23,7 +23,8 @@ describe('SignInForm', () => {
     await user.click(screen.getByRole('button', { name: 'Sign in' }));
 
     const email = screen.getByLabelText('E-mail');
-    expect(email).toHaveAttribute('aria-invalid', 'true');
+    // The form checks its fields asynchronously: wait for the marks rather than race them.
+    await vi.waitFor(() => expect(email).toHaveAttribute('aria-invalid', 'true'));
     expect(email).toHaveAccessibleDescription(/e-mail address/i);
     expect(screen.getByLabelText('Password')).toHaveAccessibleDescription('Enter your password.');
     expect(fetchMock).not.toHaveBeenCalled();
