@@ -125,6 +125,39 @@ describe('commissioning checklist', () => {
     expect(engine.body.engine.checklist).toEqual({ completedAt: '2026-11-20T14:30:00.000Z' });
   });
 
+  it('makes the day of completion the commissioning date when the engine has none, and keeps one entered', async () => {
+    const tech = await signedInAgent(server.app, DEMO.technician);
+    const gannet = (await tech.get(`/api/engines/${await engineId('NV60-26-00418')}`)).body.engine;
+    const { id: _id, vessel: _v, checklist: _c, createdAt: _a, updatedAt: _u, ...facts } = gannet;
+    const completedWith = async (
+      position: string,
+      serialNumber: string,
+      commissionedOn: string | null,
+    ) => {
+      const added = await tech
+        .post('/api/engines')
+        .send({ ...facts, archivedAt: undefined, position, serialNumber, commissionedOn });
+      expect(added.status).toBe(201);
+      const id = added.body.engine.id;
+      const done = await tech.post(`/api/engines/${id}/checklist/complete`).send(finished);
+      expect(done.status).toBe(200);
+      const trail = await server.dataSource.query(
+        'SELECT "detail" FROM "audit_entry" WHERE "recordId" = ? AND "action" = ?',
+        [id, 'checklist-completed'],
+      );
+      return { engine: (await tech.get(`/api/engines/${id}`)).body.engine, trail };
+    };
+    const undated = await completedWith('port', 'NV60-26-00998', null);
+    // 14:30 UTC on 20 Nov is the same day in the demo workshop's zone.
+    expect(undated.engine.commissionedOn).toBe('2026-11-20');
+    expect(undated.trail).toEqual([
+      { detail: 'Commissioning date set to 2026-11-20, the day of completion.' },
+    ]);
+    const dated = await completedWith('starboard', 'NV60-26-00999', '2026-11-12');
+    expect(dated.engine.commissionedOn).toBe('2026-11-12');
+    expect(dated.trail).toEqual([{ detail: '' }]);
+  });
+
   it('names a bad measured value by its field', async () => {
     const tech = await signedInAgent(server.app, DEMO.technician);
     const res = await tech

@@ -18,6 +18,7 @@ import type { Engine } from '../vessels/engine.entity.js';
 import { findVisibleEngine } from '../vessels/vessel-access.js';
 import { CommissioningChecklist } from './checklist.entity.js';
 import { checklistView } from './checklist-views.js';
+import { commissionOnCompletion } from './commission-date.js';
 
 /** A completion either closes the checklist or leaves it as a draft with what is missing. */
 type Completion = { view: ChecklistView } | { problems: FieldError[] };
@@ -62,7 +63,9 @@ export class ChecklistsService {
       const ready = evaluation.summary.readyToComplete;
       const saved = await this.store(manager, user, engine, row, input, ready);
       if (!ready) return { problems: completionProblems(evaluation) };
-      await this.trail(manager, user, engine, 'checklist-completed', '');
+      const dated = await commissionOnCompletion(manager, engine, this.clock.now());
+      const detail = dated ? `Commissioning date set to ${dated}, the day of completion.` : '';
+      await this.trail(manager, user, engine, 'checklist-completed', detail);
       return { view: await checklistView(manager, engine, saved) };
     });
     if ('view' in outcome) return outcome.view;

@@ -49,7 +49,11 @@ function useRunWrite<TInput>(
   return useMutation({
     mutationKey,
     mutationFn,
-    onSuccess: () => queryClient.invalidateQueries({ refetchType: 'active' }),
+    // Not awaited: the refetch swaps the card that sent this for the new run, and a caller's own
+    // onSuccess (the "Run created." note) must run before that card is gone.
+    onSuccess: () => {
+      void queryClient.invalidateQueries({ refetchType: 'active' });
+    },
   });
 }
 

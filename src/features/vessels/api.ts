@@ -55,12 +55,17 @@ export async function fetchVesselList(signal?: AbortSignal): Promise<{ vessels: 
   }
 }
 
+/** Vessels change under other people's hands (colleagues, skippers' submits): kept fresh briefly. */
+const FRESH_MS = 5_000;
+
 export const vesselQueries = {
   list: () =>
     queryOptions({
       queryKey: vesselKeys.list(),
       queryFn: ({ signal }) => fetchVesselList(signal),
       select: (data) => data.vessels,
+      // A colleague's new vessel must be there when the invite form or the list opens.
+      staleTime: FRESH_MS,
     }),
   filtered: (filters: VesselFilters) =>
     queryOptions({
@@ -68,6 +73,7 @@ export const vesselQueries = {
       queryFn: ({ signal }) =>
         api.get<{ vessels: VesselView[] }>(`/api/vessels${search(filters)}`, signal),
       select: (data) => data.vessels,
+      staleTime: FRESH_MS,
       // The list stays on screen (and keeps its sorting) while a new search loads.
       placeholderData: keepPreviousData,
     }),
@@ -76,6 +82,9 @@ export const vesselQueries = {
       queryKey: vesselKeys.detail(id),
       queryFn: ({ signal }) => api.get<{ vessel: VesselView }>(`/api/vessels/${id}`, signal),
       select: (data) => data.vessel,
+      // Skippers submit and colleagues add engines meanwhile: read afresh on a visit (the few
+      // seconds only spare the route's prefetch a second request).
+      staleTime: FRESH_MS,
     }),
   skippers: () =>
     queryOptions({
