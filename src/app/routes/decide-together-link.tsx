@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
-import { useVessel } from '../../features/vessels/api';
+import { useQuery } from '@tanstack/react-query';
+import { vesselQueries } from '../../features/vessels/api';
 import { decideWords, enginesToDecide } from '../../features/review/vessel-decisions';
 
 /**
@@ -13,7 +14,8 @@ export function DecideTogetherLink({
   vesselId: string;
   className?: string;
 }) {
-  const vessel = useVessel(vesselId);
+  // A skipper's submit may come while the page is open: look again every half minute.
+  const vessel = useQuery({ ...vesselQueries.detail(vesselId), refetchInterval: 30_000 });
   const waiting = vessel.data ? enginesToDecide(vessel.data).length : 0;
   if (waiting < 2) return null;
   return (

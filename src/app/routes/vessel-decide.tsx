@@ -23,7 +23,7 @@ function DecidePage({ id }: { id: string }) {
   const items = saved?.items ?? enginesToDecide(v);
   const heading = decideWords(items.length);
   return (
-    <div className="flex max-w-3xl flex-col gap-5">
+    <div className="flex max-w-6xl flex-col gap-5">
       <title>{`${heading} · ${v.name} · Ringseat`}</title>
       <Link
         to={`/vessels/${v.id}`}

@@ -55,7 +55,10 @@ export async function fetchVesselList(signal?: AbortSignal): Promise<{ vessels: 
   }
 }
 
-/** Vessels change under other people's hands (colleagues, skippers' submits): kept fresh briefly. */
+/**
+ * Vessel lists change under other people's hands (a colleague's new vessel): kept fresh only
+ * briefly, so the route's prefetch and the page share one request.
+ */
 const FRESH_MS = 5_000;
 
 export const vesselQueries = {
@@ -82,9 +85,8 @@ export const vesselQueries = {
       queryKey: vesselKeys.detail(id),
       queryFn: ({ signal }) => api.get<{ vessel: VesselView }>(`/api/vessels/${id}`, signal),
       select: (data) => data.vessel,
-      // Skippers submit and colleagues add engines meanwhile: read afresh on a visit (the few
-      // seconds only spare the route's prefetch a second request).
-      staleTime: FRESH_MS,
+      // Skippers submit and colleagues add engines meanwhile: read afresh on every visit.
+      staleTime: 0,
     }),
   skippers: () =>
     queryOptions({

@@ -60,16 +60,18 @@ export function VesselDecisionsForm({
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label="Decisions">
       {refusal && <Alert title="Nothing saved">{refusal}</Alert>}
-      {items.map((item, index) => (
-        <EngineDecision
-          key={item.runId}
-          index={index}
-          item={item}
-          control={form.control}
-          register={form.register}
-          errors={form.formState.errors}
-        />
-      ))}
+      <div className="grid items-start gap-5 lg:grid-cols-2">
+        {items.map((item, index) => (
+          <EngineDecision
+            key={item.runId}
+            index={index}
+            item={item}
+            control={form.control}
+            register={form.register}
+            errors={form.formState.errors}
+          />
+        ))}
+      </div>
       <p className="text-sm">
         The engine maker&rsquo;s manual and warranty terms come first: sign off only what they
         accept. Each engine keeps its own run and certificate; nothing is saved unless every
