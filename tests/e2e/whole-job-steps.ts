@@ -9,6 +9,7 @@ import { visible } from './whole-job-deck.js';
  */
 
 export const BUILT_IN = 'Four-stroke outboard, about 10 hours';
+export const DOCK_RUN = 'First run at the dock';
 export const BELOW_HALF = 'Below half throttle, changing speed';
 export const BELOW_THREE_QUARTER = 'Below three-quarter throttle, short full-throttle bursts';
 
@@ -22,9 +23,9 @@ export async function waitForHome(page: Page, heading: string) {
 }
 
 /**
- * A manager copies the built-in outboard program and cuts it to the two skipper phases, a minute
- * each, so the whole job runs in minutes of simulated time. The dock run is left out: the
- * workshop's own first run belongs to commissioning, which the checklist records here.
+ * A manager copies the built-in outboard program and gives each of its three phases (the
+ * workshop's dock run, then the skipper's two) a minute, so the whole job runs in minutes of
+ * simulated time.
  */
 export async function createShortProgram(page: Page, name: string) {
   await mainNav(page).getByRole('link', { name: 'Programs', exact: true }).click();
@@ -32,19 +33,16 @@ export async function createShortProgram(page: Page, name: string) {
   await page.getByRole('button', { name: `Copy ${BUILT_IN}`, exact: true }).click();
   await visible(page.getByRole('button', { name: 'Save program' }));
   await page.getByLabel('Program name').fill(name);
-  await page
-    .getByRole('region', { name: 'Phase 1', exact: true })
-    .getByRole('button', { name: 'Remove phase' })
-    .click();
   for (const [phase, phaseName] of [
-    ['Phase 1', BELOW_HALF],
-    ['Phase 2', BELOW_THREE_QUARTER],
+    ['Phase 1', DOCK_RUN],
+    ['Phase 2', BELOW_HALF],
+    ['Phase 3', BELOW_THREE_QUARTER],
   ]) {
     const card = page.getByRole('region', { name: phase, exact: true });
     expect(await card.getByLabel('Phase name').inputValue()).toBe(phaseName);
     await card.getByLabel('Required minutes in band').fill('1');
   }
-  expect(await page.getByRole('region', { name: 'Phase 3', exact: true }).count()).toBe(0);
+  expect(await page.getByRole('region', { name: 'Phase 4', exact: true }).count()).toBe(0);
   await page.getByRole('button', { name: 'Save program' }).click();
   await visible(page.getByRole('status').filter({ hasText: 'Program saved.' }));
 }

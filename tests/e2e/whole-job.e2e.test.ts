@@ -75,9 +75,11 @@ let workshop: { tech: Page; manager: Page };
 let phone: { context: BrowserContext; page: Page };
 const contexts: BrowserContext[] = [];
 
-async function staffPage(email: string) {
+async function staffPage(email: string, clockBackMinutes = 0) {
   const context = await newContext(browser, baseURL, DESKTOP);
   contexts.push(context);
+  if (clockBackMinutes > 0)
+    await context.clock.install({ time: Date.now() - clockBackMinutes * 60_000 });
   const page = await context.newPage();
   await signIn(page, email);
   await waitForHome(page, 'Workshop');
@@ -120,7 +122,8 @@ describe('the whole job, through the screens only', () => {
   it('1. the workshop sets up twin outboards: program, vessel, engines, checklists, runs', async () => {
     // Technician and manager each at their own desk: two browsers' worth of cookies.
     workshop = {
-      tech: await staffPage('ivo@tidewright.example'),
+      // The dock run came first, an hour ago, before the skipper's outing (see beforeAll).
+      tech: await staffPage('ivo@tidewright.example', 60),
       manager: await staffPage('maren@tidewright.example'),
     };
     await createShortProgram(workshop.manager, job.program);
@@ -135,7 +138,20 @@ describe('the whole job, through the screens only', () => {
     await keepScreenshot(tech, 'whole-job-engine-assigned-desktop');
   }, 240_000);
 
-  it('2. the manager invites the skipper, who accepts on the phone', async () => {
+  it('2. the technician runs the workshop phase at the dock on deck, for both engines', async () => {
+    const tech = workshop.tech;
+    await openDeck(tech, job.vessel);
+    await startOuting(tech);
+    await logReading(tech, 800, 'idle'); // inside the dock run's 0–3000 rpm at idle (built-in program, common practice)
+    await tech.clock.fastForward(65_000);
+    await moveOn(tech, 'Port', BELOW_HALF);
+    await moveOn(tech, 'Starboard', BELOW_HALF);
+    await keepScreenshot(tech, 'whole-job-dock-run-desktop');
+    await endOuting(tech);
+    await pillSays(tech, /All synced/);
+  }, 120_000);
+
+  it('3. the manager invites the skipper, who accepts on the phone', async () => {
     const path = await inviteSkipper(workshop.manager, job.skipper.email, job.vessel);
     await acceptInvite(phone.page, path, job.skipper.name, job.password);
     const engines = phone.page.getByRole('list', { name: `Engines of ${job.vessel}` });
@@ -143,7 +159,7 @@ describe('the whole job, through the screens only', () => {
     await visible(engines.getByText(job.serials.starboard));
   }, 120_000);
 
-  it('3. the skipper runs both phases on deck, offline for part of it, voids a slip, submits', async () => {
+  it('4. the skipper runs the remaining phases on deck, offline for part of it, voids a slip, submits', async () => {
     const { page } = phone;
     await openDeck(page, job.vessel);
     await startOuting(page);
@@ -164,7 +180,7 @@ describe('the whole job, through the screens only', () => {
     await pillSays(page, /All synced/);
   }, 240_000);
 
-  it('4. the technician returns both engines from one page, each with a phase to run again', async () => {
+  it('5. the technician returns both engines from one page, each with a phase to run again', async () => {
     const tech = workshop.tech;
     await openDecide(tech, job.vessel, job.vesselId);
     const saved = await decideBoth(
@@ -181,7 +197,7 @@ describe('the whole job, through the screens only', () => {
     await keepScreenshot(tech, 'whole-job-decide-returned-desktop');
   }, 120_000);
 
-  it('5. the skipper reads why on the phone, re-runs the phases sent back and resubmits', async () => {
+  it('6. the skipper reads why on the phone, re-runs the phases sent back and resubmits', async () => {
     const { page } = phone;
     // Back in signal, the phone's clock is right again (the outing is after the return).
     await page.clock.setSystemTime(Date.now());
@@ -211,7 +227,7 @@ describe('the whole job, through the screens only', () => {
     );
   }, 180_000);
 
-  it('6. the technician signs off both engines from one page and sees two certificates', async () => {
+  it('7. the technician signs off both engines from one page and sees two certificates', async () => {
     const tech = workshop.tech;
     await openDecide(tech, job.vessel, job.vesselId);
     const signOff = { choice: 'confirm', comments: 'Re-run logged cleanly. Signed off.' } as const;
@@ -227,7 +243,7 @@ describe('the whole job, through the screens only', () => {
     await keepScreenshot(tech, 'whole-job-decide-signed-off-desktop');
   }, 120_000);
 
-  it('7. the skipper downloads the certificate from the run page', async () => {
+  it('8. the skipper downloads the certificate from the run page', async () => {
     const { page } = phone;
     await openRunPage(page, job.vessel, job.serials.port);
     await expect.poll(() => runState(page).textContent()).toBe('Signed off');
@@ -248,7 +264,7 @@ describe('the whole job, through the screens only', () => {
     await keepScreenshot(page, 'whole-job-certificate-phone');
   }, 120_000);
 
-  it('8. the technician records the first service on the engine page', async () => {
+  it('9. the technician records the first service on the engine page', async () => {
     const tech = workshop.tech;
     await openEngine(tech, job.vessel, PORT);
     await visible(tech.getByText('Signed off'));

@@ -1,13 +1,16 @@
+import { liveQuery } from 'dexie';
 import type { PushResponse } from '../../../shared/sync/sync.schema';
 import { api, isApiError } from '../../lib/api-client';
 import { db } from '../../lib/db';
-import { nextPushBatch, recordResults, rejectAll } from './outbox';
+import { nextPushBatch, outboxCounts, recordResults, rejectAll } from './outbox';
 import { uploadPendingPhotos, isFinalRefusal } from './photos';
 import { pullAll } from './pull';
 import { setSyncStatus } from './sync-status';
 
 const ONLINE_INTERVAL_MS = 60_000;
 const BACKOFF_BASE_MS = 2_000;
+/** A new entry goes out this soon when the network is there (entries typed together go together). */
+const AFTER_WRITE_MS = 2_000;
 const BACKOFF_MAX_MS = 5 * 60_000;
 
 async function deviceId(): Promise<string> {
@@ -97,12 +100,36 @@ export function startSync(): () => void {
   window.addEventListener('online', kick);
   document.addEventListener('visibilitychange', onVisible);
   const timer = setInterval(kick, ONLINE_INTERVAL_MS);
+  const afterWrites = watchNewEntries(kick);
   kick();
   return () => {
     started = false;
+    afterWrites.unsubscribe();
     window.removeEventListener('online', kick);
     document.removeEventListener('visibilitychange', onVisible);
     clearInterval(timer);
     clearTimeout(retryTimer);
+  };
+}
+
+/** Calls `kick` shortly after more entries wait to go out (written on this device while online). */
+function watchNewEntries(kick: () => void) {
+  let waiting = 0;
+  let soon: ReturnType<typeof setTimeout> | undefined;
+  const subscription = liveQuery(outboxCounts).subscribe({
+    next: (counts) => {
+      if (counts.waiting > waiting) {
+        clearTimeout(soon);
+        soon = setTimeout(kick, AFTER_WRITE_MS);
+      }
+      waiting = counts.waiting;
+    },
+    error: () => undefined,
+  });
+  return {
+    unsubscribe: () => {
+      clearTimeout(soon);
+      subscription.unsubscribe();
+    },
   };
 }

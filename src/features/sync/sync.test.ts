@@ -4,7 +4,7 @@ import { db, type EventRecord, type RunRecord } from '../../lib/db';
 import { stubFetch } from '../../test/fetch-stub';
 import { nextPushBatch, outboxCounts, recordResults } from './outbox';
 import { applyPull } from './pull';
-import { backoffDelay, syncNow } from './sync-engine';
+import { backoffDelay, startSync, syncNow } from './sync-engine';
 import { getSyncStatus } from './sync-status';
 
 const RUN = '11111111-1111-4111-8111-111111111111';
@@ -181,5 +181,35 @@ describe('retry timing', () => {
     expect(backoffDelay(4, () => 1)).toBe(16_000);
     expect(backoffDelay(30, () => 1)).toBe(300_000);
     expect(backoffDelay(30, () => 0)).toBe(150_000);
+  });
+});
+
+describe('sending soon after a write', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('pushes a reading written while online within seconds, not at the next minute', async () => {
+    const pushed: string[] = [];
+    const empty = { cursor: 0, more: false, runIds: [], runs: [], vessels: [], events: [] };
+    stubFetch({
+      'POST /api/sync/push': (request) => {
+        const items = (request.body as { items: Array<{ event: { id: string } }> }).items;
+        pushed.push(...items.map((i) => i.event.id));
+        return {
+          status: 200,
+          body: { results: items.map((i) => ({ id: i.event.id, status: 'stored' })) },
+        };
+      },
+      'GET /api/sync/pull': { status: 200, body: empty },
+    });
+    const stop = startSync();
+    try {
+      await vi.waitFor(() => expect(getSyncStatus().lastSyncAt).not.toBeNull());
+      await db.events.add(reading(uuid(21), 21_000));
+      // The minute's timer is far off: only the write itself can have sent it.
+      await vi.waitFor(() => expect(pushed).toEqual([uuid(21)]), { timeout: 5_000 });
+      await vi.waitFor(async () => expect((await outboxCounts()).waiting).toBe(0));
+    } finally {
+      stop();
+    }
   });
 });
