@@ -7,7 +7,12 @@ import {
   sessionEventFor,
   type RunDetail,
 } from '../../../tests/helpers/runs.js';
-import { DEMO, FakeClock, signedInAgent } from '../../../tests/helpers/test-server.js';
+import {
+  addOtherWorkshop,
+  DEMO,
+  FakeClock,
+  signedInAgent,
+} from '../../../tests/helpers/test-server.js';
 import { startMailTestServer, type MailTestServer } from '../mail/mail-test-server.js';
 
 let server: MailTestServer;
@@ -101,6 +106,9 @@ describe('deciding both engines of a vessel at once', () => {
 
     const skipper = await signedInAgent(server.app, DEMO.skipperA);
     expect((await skipper.post(url).send({ decisions: [confirmPort] })).status).toBe(403);
+    const { technicianEmail } = await addOtherWorkshop(server.dataSource);
+    const stranger = await signedInAgent(server.app, technicianEmail);
+    expect((await stranger.post(url).send({ decisions: [confirmPort] })).status).toBe(404);
 
     const tech = await signedInAgent(server.app, DEMO.technician);
     const refused = await tech.post(url).send({
