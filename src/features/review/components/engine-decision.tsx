@@ -73,28 +73,62 @@ function RunInShort({ review }: { review: RunReviewView }) {
   );
 }
 
+interface FieldsProps {
+  index: number;
+  control: Control<VesselDecisionsFormValues>;
+  register: UseFormRegister<VesselDecisionsFormValues>;
+  errors: FieldErrors<VesselDecisionsFormValues>;
+}
+
+/** The `index`th decision's fields: confirm or return, the phases to run again, the comments. */
+function DecisionFields({
+  index,
+  control,
+  register,
+  errors,
+  review,
+}: FieldsProps & { review: RunReviewView | undefined }) {
+  const decision = useWatch({ control, name: `decisions.${index}.decision` });
+  const fieldErrors = errors.decisions?.[index];
+  return (
+    <>
+      <DecisionChoices
+        field={register(`decisions.${index}.decision`)}
+        error={fieldErrors?.decision?.message}
+      />
+      {decision === 'return' && (
+        <RerunPhases
+          phases={review?.phases ?? []}
+          field={register(`decisions.${index}.rerunPhaseIds`)}
+          error={fieldErrors?.rerunPhaseIds?.message}
+        />
+      )}
+      <Field
+        label="Comments"
+        error={fieldErrors?.comments?.message}
+        hint={commentsHint(decision ?? 'confirm', review?.account.verdict ?? 'complete')}
+      >
+        {(props) => (
+          <textarea
+            {...props}
+            rows={3}
+            className={`${controlClass} py-2`}
+            {...register(`decisions.${index}.comments`)}
+          />
+        )}
+      </Field>
+    </>
+  );
+}
+
 /**
  * One engine's submitted run on the vessel's decision page: the run in short, then its decision,
  * comments and, on a return, the phases to run again. The fields are the `index`th decision of
  * the page's one form.
  */
-export function EngineDecision({
-  index,
-  item,
-  control,
-  register,
-  errors,
-}: {
-  index: number;
-  item: EngineToDecide;
-  control: Control<VesselDecisionsFormValues>;
-  register: UseFormRegister<VesselDecisionsFormValues>;
-  errors: FieldErrors<VesselDecisionsFormValues>;
-}) {
+export function EngineDecision({ item, ...fields }: FieldsProps & { item: EngineToDecide }) {
   const headingId = useId();
   const review = useRunReview(item.runId);
-  const decision = useWatch({ control, name: `decisions.${index}.decision` });
-  const fieldErrors = errors.decisions?.[index];
   const { engine } = item;
   return (
     <section
@@ -109,31 +143,7 @@ export function EngineDecision({
         <LoadError error={review.error} what="this run" onRetry={() => review.refetch()} />
       )}
       {review.data && <RunInShort review={review.data} />}
-      <DecisionChoices
-        field={register(`decisions.${index}.decision`)}
-        error={fieldErrors?.decision?.message}
-      />
-      {decision === 'return' && (
-        <RerunPhases
-          phases={review.data?.phases ?? []}
-          field={register(`decisions.${index}.rerunPhaseIds`)}
-          error={fieldErrors?.rerunPhaseIds?.message}
-        />
-      )}
-      <Field
-        label="Comments"
-        error={fieldErrors?.comments?.message}
-        hint={commentsHint(decision ?? 'confirm', review.data?.account.verdict ?? 'complete')}
-      >
-        {(props) => (
-          <textarea
-            {...props}
-            rows={3}
-            className={`${controlClass} py-2`}
-            {...register(`decisions.${index}.comments`)}
-          />
-        )}
-      </Field>
+      <DecisionFields {...fields} review={review.data} />
     </section>
   );
 }

@@ -20,19 +20,12 @@ const fieldsOf = (count: number) =>
     ),
   ).flat();
 
-/**
- * The decisions on every submitted run of one vessel, saved with one button and together: when
- * one is refused none is saved, and the refusal names its engine.
- */
-export function VesselDecisionsForm({
-  vesselId,
-  items,
-  onSaved,
-}: {
-  vesselId: string;
-  items: EngineToDecide[];
-  onSaved: (results: VesselDecisionView[]) => void;
-}) {
+/** The page's one form over every decision, and saving it; a refusal not on a field goes in the alert. */
+function useVesselDecisionsForm(
+  vesselId: string,
+  items: EngineToDecide[],
+  onSaved: (results: VesselDecisionView[]) => void,
+) {
   const save = useVesselDecisions(vesselId);
   const [refusal, setRefusal] = useState<string | null>(null);
   const form = useForm<VesselDecisionsFormValues, unknown, VesselDecisionsInput>({
@@ -56,6 +49,23 @@ export function VesselDecisionsForm({
       },
     });
   });
+  return { save, form, refusal, onSubmit };
+}
+
+/**
+ * The decisions on every submitted run of one vessel, saved with one button and together: when
+ * one is refused none is saved, and the refusal names its engine.
+ */
+export function VesselDecisionsForm({
+  vesselId,
+  items,
+  onSaved,
+}: {
+  vesselId: string;
+  items: EngineToDecide[];
+  onSaved: (results: VesselDecisionView[]) => void;
+}) {
+  const { save, form, refusal, onSubmit } = useVesselDecisionsForm(vesselId, items, onSaved);
   const both = items.length === 2 ? 'both decisions' : items.length > 2 ? 'all decisions' : null;
   return (
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-5" aria-label="Decisions">
