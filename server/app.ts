@@ -1,8 +1,9 @@
 import 'reflect-metadata';
 import fs from 'node:fs';
 import path from 'node:path';
-import express, { type Express, type RequestHandler, type Router } from 'express';
+import express, { type Express, type Request, type RequestHandler, type Router } from 'express';
 import helmet from 'helmet';
+import { HttpError } from './lib/errors.js';
 import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import { AttachmentStorage } from './features/attachments/attachment-storage.js';
@@ -137,10 +138,33 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
 }
 
 /** Sync batches are larger than anything else: that route parses its own body with its own limit. */
+/**
+ * Bodies are JSON everywhere but the upload (multipart): a body of any other type is answered
+ * 415 and changes nothing (it is never read as an empty body). The sync push reads its own JSON
+ * with its larger limit.
+ */
 function jsonBodies(limit: string): RequestHandler {
   const json = express.json({ limit });
-  return (req, res, next) => (req.path === '/sync/push' ? next() : json(req, res, next));
+  return (req, res, next) => {
+    const upload = req.path === '/attachments' && req.is('multipart/form-data');
+    if (hasContent(req) && req.is(['application/json', '+json']) === false && !upload) {
+      const type = req.headers['content-type'] ?? 'none';
+      return next(
+        new HttpError(
+          415,
+          'unsupported-media-type',
+          'Unsupported media type',
+          `Send the body as JSON (Content-Type: application/json); a body of type "${type}" is not read.`,
+        ),
+      );
+    }
+    return req.path === '/sync/push' ? next() : json(req, res, next);
+  };
 }
+
+/** A body with bytes in it (an empty body, as a POST with nothing to say sends, is none). */
+const hasContent = (req: Request) =>
+  req.headers['transfer-encoding'] !== undefined || Number(req.headers['content-length'] ?? 0) > 0;
 
 function securityHeaders(secure: boolean): RequestHandler {
   return helmet({

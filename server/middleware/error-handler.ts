@@ -51,9 +51,34 @@ function fromBodyParser(error: {
   return null;
 }
 
+/**
+ * Errors Express and its body reading raise with a 4xx status but no body-parser type: a
+ * malformed percent-escape in the address, a body that does not decompress as its
+ * Content-Encoding says.
+ */
+function fromRequestReading(error: { name?: string; status?: number }): HttpError | null {
+  if (!error.status || error.status < 400 || error.status >= 500) return null;
+  if (error.name === 'URIError')
+    return new HttpError(
+      400,
+      'malformed-address',
+      'Malformed address',
+      'The address has a malformed percent-escape (a % not followed by two hexadecimal digits).',
+    );
+  return new HttpError(
+    error.status,
+    'bad-request',
+    'Bad request',
+    'The request could not be read: check its Content-Encoding and body.',
+  );
+}
+
 export function errorHandler(logger: Logger): ErrorRequestHandler {
   return (error, req, res, _next) => {
-    const known = error instanceof HttpError ? error : fromBodyParser(error ?? {});
+    const known =
+      error instanceof HttpError
+        ? error
+        : (fromBodyParser(error ?? {}) ?? fromRequestReading(error ?? {}));
     if (known) {
       send(res, problemFrom(known, req.originalUrl));
       return;

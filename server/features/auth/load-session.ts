@@ -21,7 +21,7 @@ export function loadSession(lucia: AppLucia): RequestHandler {
   return async (req, res, next) => {
     res.locals.user = null;
     res.locals.sessionId = null;
-    const sessionId = lucia.readSessionCookie(req.headers.cookie ?? '');
+    const sessionId = sessionCookieOf(req.headers.cookie ?? '', lucia.sessionCookieName);
     if (!sessionId) return next();
     const { session, user } = await lucia.validateSession(sessionId);
     if (!session) {
@@ -33,4 +33,23 @@ export function loadSession(lucia: AppLucia): RequestHandler {
     res.locals.user = toSessionUser(user);
     next();
   };
+}
+
+/**
+ * The session cookie's value, read without decoding any other cookie: a browser may carry
+ * cookies of other apps on the same host, and one with a malformed percent-escape
+ * (`theme=%zz`) must not turn every request into an error. A malformed session cookie counts
+ * as none.
+ */
+export function sessionCookieOf(header: string, name: string): string | null {
+  for (const part of header.split(';')) {
+    const at = part.indexOf('=');
+    if (at < 0 || part.slice(0, at).trim() !== name) continue;
+    try {
+      return decodeURIComponent(part.slice(at + 1).trim()) || null;
+    } catch {
+      return null;
+    }
+  }
+  return null;
 }
