@@ -11,7 +11,7 @@ const EnvSchema = z.object({
   RINGSEAT_ORIGIN: z.string().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  RINGSEAT_SEED: z.enum(['demo', 'none']).default('demo'),
+  RINGSEAT_DEMO: z.enum(['demo', 'none']).default('demo'),
 });
 
 export type AppConfig = {
@@ -22,7 +22,7 @@ export type AppConfig = {
   publicOrigin?: string;
   production: boolean;
   logLevel: z.infer<typeof EnvSchema>['LOG_LEVEL'];
-  /** Whether a new database gets the demo workshop (from RINGSEAT_SEED). */
+  /** Whether a new database gets the demo workshop (from RINGSEAT_DEMO). */
   demo: 'demo' | 'none';
 };
 
@@ -41,6 +41,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     publicOrigin: e.RINGSEAT_ORIGIN,
     production: e.NODE_ENV === 'production',
     logLevel: e.LOG_LEVEL,
-    demo: e.RINGSEAT_SEED,
+    demo: e.RINGSEAT_DEMO,
   };
 }

@@ -78,7 +78,7 @@ describe('void properties', () => {
         eventsArb,
         fc.array(fc.boolean(), { minLength: 1, maxLength: 8 }),
         fc.integer(),
-        (events, pick, seed) => {
+        (events, pick, shuffleKey) => {
           const voided = withVoids(events, pick, MIN);
           const extra = voided
             .filter((e): e is VoidEvent => e.kind === 'void')
@@ -86,7 +86,7 @@ describe('void properties', () => {
               ...v,
               id: `e${String(i).padStart(7, '0')}-0000-4000-8000-000000000000`,
             }));
-          const messy = shuffled([...voided, ...voided.slice(0, 5), ...extra], seed);
+          const messy = shuffled([...voided, ...voided.slice(0, 5), ...extra], shuffleKey);
           expect(accountRun(messy, phases)).toEqual(accountRun(voided, phases));
         },
       ),
