@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { visible } from './whole-job-deck.js';
+import { answer, CHECKS } from '../helpers/checklist-screen.js';
 
 /*
  * The workshop's side of the whole job, at a desk: a short program, a vessel with twin
@@ -91,25 +92,6 @@ export async function addTwinOutboards(page: Page, serials: { port: string; star
   await twin.getByRole('button', { name: 'Add engine' }).click();
   await waitForHome(page, 'Starboard · Kestrel K150 4S');
 }
-
-async function answer(page: Page, item: string, choice: 'Pass' | 'Fail' | 'N/A') {
-  await page
-    .getByRole('radiogroup', { name: item })
-    .locator('label')
-    .filter({ hasText: choice })
-    .click();
-}
-
-const CHECKS = [
-  'Steering',
-  'Throttle cable adjustment',
-  'Shift cable adjustment',
-  'Starts in neutral only',
-  'Kill switch and lanyard',
-  'Cooling-water tell-tale',
-  'No fuel, oil or water leaks',
-  'Propeller and nut',
-];
 
 /** The engine page's checklist, every item measured or passed, then completed. */
 export async function completeChecklist(page: Page, engineName: string) {

@@ -183,6 +183,11 @@ describe('the whole job, through the screens only', () => {
   it('5. the technician returns both engines from one page, each with a phase to run again', async () => {
     const tech = workshop.tech;
     await openDecide(tech, job.vessel, job.vesselId);
+    // The same page on a phone at the dock: the engines one above the other.
+    await tech.setViewportSize(PHONE.viewport);
+    await visible(tech.getByRole('button', { name: 'Save both decisions' }));
+    await keepScreenshot(tech, 'whole-job-decide-phone');
+    await tech.setViewportSize(DESKTOP.viewport);
     const saved = await decideBoth(
       tech,
       {

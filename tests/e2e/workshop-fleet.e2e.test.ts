@@ -9,6 +9,7 @@ import {
   PHONE,
   signIn,
 } from '../helpers/browser.js';
+import { answer, CHECKS } from '../helpers/checklist-screen.js';
 
 const baseURL = inject('baseURL');
 let browser: Browser;
@@ -65,25 +66,6 @@ async function uploadPhoto(page: Page) {
   await page.getByRole('button', { name: 'Attach file' }).click();
   await visible(page.getByRole('img', { name: 'Installation at handover' }));
 }
-
-async function answer(page: Page, item: string, choice: 'Pass' | 'Fail' | 'N/A') {
-  await page
-    .getByRole('radiogroup', { name: item })
-    .locator('label')
-    .filter({ hasText: choice })
-    .click();
-}
-
-const CHECKS = [
-  'Steering',
-  'Throttle cable adjustment',
-  'Shift cable adjustment',
-  'Starts in neutral only',
-  'Kill switch and lanyard',
-  'Cooling-water tell-tale',
-  'No fuel, oil or water leaks',
-  'Propeller and nut',
-];
 
 describe('workshop fleet: vessel, engine and commissioning checklist', () => {
   for (const [size, device] of [

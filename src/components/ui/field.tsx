@@ -41,6 +41,17 @@ export function Field({ label, hint, error, children }: FieldProps) {
   );
 }
 
+/** The error under a fieldset of choices (radios, checkboxes), announced when it appears. */
+export function FieldsetError({ error }: { error?: string }) {
+  if (!error) return null;
+  return (
+    <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
+      <span aria-hidden="true">⚠</span>
+      {error}
+    </p>
+  );
+}
+
 export const controlClass =
   'min-h-touch w-full rounded-md border-2 border-line bg-surface px-3 text-ink ' +
   'aria-[invalid=true]:border-danger focus-visible:border-ink';

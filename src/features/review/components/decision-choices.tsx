@@ -1,6 +1,7 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
 import type { SignOffFormValues } from '../../../../shared/review/review.schema';
 import type { Verdict } from '../../../../shared/runs/phase-tally';
+import { FieldsetError } from '../../../components/ui/field';
 
 /** Confirm or return: the two decisions on a submitted run, with what each one does. */
 const CHOICES = [
@@ -52,12 +53,7 @@ export function DecisionChoices({
           </span>
         </label>
       ))}
-      {error && (
-        <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
-          <span aria-hidden="true">⚠</span>
-          {error}
-        </p>
-      )}
+      <FieldsetError error={error} />
     </fieldset>
   );
 }

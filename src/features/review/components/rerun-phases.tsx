@@ -1,4 +1,5 @@
 import type { UseFormRegisterReturn } from 'react-hook-form';
+import { FieldsetError } from '../../../components/ui/field';
 
 /** On a return: which of the run's phases the skipper must run again (at least one). */
 export function RerunPhases({
@@ -29,12 +30,7 @@ export function RerunPhases({
           {phase.name}
         </label>
       ))}
-      {error && (
-        <p role="alert" className="flex items-start gap-1 text-sm font-semibold text-danger">
-          <span aria-hidden="true">⚠</span>
-          {error}
-        </p>
-      )}
+      <FieldsetError error={error} />
     </fieldset>
   );
 }
