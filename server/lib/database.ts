@@ -1,10 +1,12 @@
 import type { DataSource } from 'typeorm';
 import { createDataSource } from '../data-source.js';
+import { installWriteRecovery } from './write-status.js';
 
 /** Opens the database file and brings its schema up to date. */
 export async function openDatabase(databasePath: string): Promise<DataSource> {
   const dataSource = createDataSource(databasePath);
   await dataSource.initialize();
+  installWriteRecovery(dataSource);
   await dataSource.runMigrations({ transaction: 'each' });
   return dataSource;
 }

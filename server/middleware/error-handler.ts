@@ -1,3 +1,4 @@
+import { STORAGE_CODES } from '../lib/write-status.js';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Problem } from '../../shared/problem/problem.schema.js';
 import { HttpError } from '../lib/errors.js';
@@ -84,6 +85,15 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return;
     }
     logger.error({ err: error, url: req.originalUrl }, 'unhandled error');
+    if (STORAGE_CODES.test(String(error?.code ?? ''))) {
+      send(res, {
+        type: '/problems/storage-failing',
+        title: 'The server cannot write to its storage',
+        status: 503,
+        detail: 'Nothing from this request was saved. Your device keeps it and tries again.',
+      });
+      return;
+    }
     // Never a stack trace or internal message to the client.
     send(res, {
       type: '/problems/internal',
