@@ -18,7 +18,7 @@ export type WriteStatus = { failing: false } | { failing: true; since: string; c
 type Runner = {
   isTransactionActive: boolean;
   transactionDepth: number;
-  query: (...args: unknown[]) => Promise<unknown>;
+  query: AsyncFn;
   rollbackTransaction: () => Promise<void>;
   commitTransaction: () => Promise<void>;
 };
@@ -29,35 +29,34 @@ export function writeStatus(dataSource: DataSource): WriteStatus {
   return statuses.get(dataSource) ?? { failing: false };
 }
 
-export function noteWriteFailure(dataSource: DataSource, error: unknown) {
+function noteWriteFailure(dataSource: DataSource, error: unknown) {
   const code = (error as { code?: unknown } | null)?.code;
   if (typeof code !== 'string' || !STORAGE_CODES.test(code)) return;
   if (!writeStatus(dataSource).failing)
     statuses.set(dataSource, { failing: true, since: new Date().toISOString(), code });
 }
 
+type AsyncFn = (...args: unknown[]) => Promise<unknown>;
+
+/** `fn` with a storage failure it throws remembered before it goes on up. */
+function notingFailures(dataSource: DataSource, fn: AsyncFn): AsyncFn {
+  return async function (this: unknown, ...args) {
+    try {
+      return await fn.apply(this, args);
+    } catch (error) {
+      noteWriteFailure(dataSource, error);
+      throw error;
+    }
+  };
+}
+
 export function installWriteRecovery(dataSource: DataSource): void {
   const runner = dataSource.createQueryRunner() as unknown as Runner;
   const connection = nativeConnection(dataSource);
   const { query, rollbackTransaction, commitTransaction } = runner;
-  const manager = dataSource.manager as unknown as { transaction: (...args: unknown[]) => unknown };
-  const transaction = manager.transaction;
-  manager.transaction = async function (...args) {
-    try {
-      return await transaction.apply(this, args);
-    } catch (error) {
-      noteWriteFailure(dataSource, error);
-      throw error;
-    }
-  };
-  runner.query = async function (...args) {
-    try {
-      return await query.apply(this, args);
-    } catch (error) {
-      noteWriteFailure(dataSource, error);
-      throw error;
-    }
-  };
+  const manager = dataSource.manager as unknown as { transaction: AsyncFn };
+  manager.transaction = notingFailures(dataSource, manager.transaction);
+  runner.query = notingFailures(dataSource, query);
   runner.commitTransaction = async function () {
     await commitTransaction.call(this);
     if (!this.isTransactionActive) statuses.delete(dataSource);
