@@ -55,6 +55,7 @@ import { systemClock, type Clock } from './lib/clock.js';
 import { loadConfig } from './lib/config.js';
 import type { Logger } from './lib/logger.js';
 import type { Mailer } from './lib/mailer.js';
+import { redactUrl } from './lib/redact-url.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
 import { originCheck } from './middleware/origin-check.js';
 
@@ -184,7 +185,7 @@ function requestLog(logger: Logger): RequestHandler {
     logger,
     autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
     serializers: {
-      req: (req) => ({ method: req.method, url: req.url }),
+      req: (req) => ({ method: req.method, url: redactUrl(req.url) }),
       res: (res) => ({ status: res.statusCode }),
     },
   });

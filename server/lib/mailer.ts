@@ -9,7 +9,14 @@ export interface MailMessage {
   html?: string;
   replyTo?: string;
   attachments?: Array<{ filename: string; content: Buffer; contentType: string }>;
+  headers?: Record<string, string>;
 }
+
+/**
+ * Names the workshop an e-mail was sent for, so the local catcher shows each workshop's staff
+ * only their own mail. It carries an id, nothing personal.
+ */
+export const WORKSHOP_HEADER = 'X-Ringseat-Workshop';
 
 export interface Mailer {
   /** Where mail goes, for logs: "smtp://host:port". */

@@ -3,6 +3,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { Problem } from '../../shared/problem/problem.schema.js';
 import { HttpError } from '../lib/errors.js';
 import type { Logger } from '../lib/logger.js';
+import { redactUrl } from '../lib/redact-url.js';
 
 function send(res: Parameters<RequestHandler>[1], problem: Problem) {
   res.status(problem.status).type('application/problem+json').json(problem);
@@ -84,7 +85,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       send(res, problemFrom(known, req.originalUrl));
       return;
     }
-    logger.error({ err: error, url: req.originalUrl }, 'unhandled error');
+    logger.error({ err: error, url: redactUrl(req.originalUrl) }, 'unhandled error');
     if (STORAGE_CODES.test(String(error?.code ?? ''))) {
       send(res, {
         type: '/problems/storage-failing',

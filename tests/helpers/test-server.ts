@@ -69,9 +69,10 @@ export const DEMO = {
   skipperB: 'tomas@skipper.example',
 } as const;
 
-/** A second, unrelated workshop with one technician, for tenancy checks. */
+/** A second, unrelated workshop with one technician (or manager), for tenancy checks. */
 export async function addOtherWorkshop(
   dataSource: DataSource,
+  role: 'technician' | 'manager' = 'technician',
 ): Promise<{ workshopId: string; technicianEmail: string }> {
   const { randomUUID } = await import('node:crypto');
   const { Workshop } = await import('../../server/features/workshops/workshop.entity.js');
@@ -89,7 +90,7 @@ export async function addOtherWorkshop(
     workshopId,
     email: technicianEmail,
     name: 'Other Technician',
-    role: 'technician',
+    role,
     passwordHash: await hashPassword(DEMO_PASSWORD),
     archivedAt: null,
   });

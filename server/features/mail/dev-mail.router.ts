@@ -78,8 +78,10 @@ export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Ro
   const router = Router();
   router.use(session, managersOnly);
 
+  // Each workshop's managers read only the mail sent for their workshop: invite links in
+  // another workshop's mail would let them in there.
   router.get('/', (_req, res) => {
-    const messages = catcher.list();
+    const messages = catcher.list(res.locals.user!.workshopId);
     const list =
       messages.length === 0
         ? '<p>No e-mail has been sent yet.</p>'
@@ -89,7 +91,7 @@ export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Ro
       page(
         'Local mailbox',
         `<h1>Local mailbox</h1>
-<p class="meta">Every e-mail Ringseat sent while no outside mail server is set up lands here instead of being delivered (${messages.length} kept, newest first). Set SMTP_HOST to send real mail.</p>
+<p class="meta">Every e-mail Ringseat sent for this workshop while no outside mail server is set up lands here instead of being delivered (${messages.length} kept, newest first). Set SMTP_HOST to send real mail.</p>
 <p><a href="/">Back to Ringseat</a></p>${list}`,
       ),
     );
@@ -97,13 +99,13 @@ export function devMailRouter(catcher: MailCatcher, session: RequestHandler): Ro
 
   router.get('/messages.json', (_req, res) => {
     res.setHeader('Cache-Control', 'no-store');
-    res.json({ messages: catcher.list() });
+    res.json({ messages: catcher.list(res.locals.user!.workshopId) });
   });
 
   router.get('/:id/attachments/:index', async (req, res) => {
     const params = ParamsSchema.safeParse(req.params);
     const found = params.success
-      ? await catcher.attachment(params.data.id, params.data.index)
+      ? await catcher.attachment(res.locals.user!.workshopId, params.data.id, params.data.index)
       : null;
     if (!found) return notFound(res);
     res.setHeader('Content-Type', found.contentType);

@@ -3,10 +3,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { simpleParser, type ParsedMail } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import { WORKSHOP_HEADER } from '../../lib/mailer.js';
 
 /** A message the catcher received, as the /dev/mail page lists it. */
 export interface CaughtMessage {
   id: string;
+  /** The workshop the e-mail was sent for (its WORKSHOP_HEADER); null when it named none. */
+  workshopId: string | null;
   receivedAt: string;
   from: string;
   to: string[];
@@ -73,8 +76,10 @@ export class MailCatcher {
 
   private async receive(raw: Buffer): Promise<void> {
     const parsed = await simpleParser(raw);
+    const workshop = parsed.headers.get(WORKSHOP_HEADER.toLowerCase());
     const message: Stored = {
       id: randomUUID(),
+      workshopId: typeof workshop === 'string' && workshop ? workshop : null,
       receivedAt: new Date().toISOString(),
       from: parsed.from?.text ?? '',
       to: addresses(parsed.to),
@@ -112,7 +117,11 @@ export class MailCatcher {
         const meta = JSON.parse(
           fs.readFileSync(path.join(this.dir, file), 'utf8'),
         ) as CaughtMessage;
-        stored.push({ ...meta, raw: fs.readFileSync(path.join(this.dir, `${meta.id}.eml`)) });
+        stored.push({
+          ...meta,
+          workshopId: meta.workshopId ?? null,
+          raw: fs.readFileSync(path.join(this.dir, `${meta.id}.eml`)),
+        });
       } catch {
         // A half-written or foreign file is skipped, never fatal.
       }
@@ -121,20 +130,24 @@ export class MailCatcher {
     for (const message of stored.slice(-MAX_KEPT)) this.keep(message);
   }
 
-  /** Newest first. */
-  list(): CaughtMessage[] {
-    return this.messages.map(({ raw: _raw, ...meta }) => meta);
+  /** Newest first: everything caught, or only what was sent for one workshop. */
+  list(workshopId?: string): CaughtMessage[] {
+    return this.messages
+      .filter((m) => workshopId === undefined || m.workshopId === workshopId)
+      .map(({ raw: _raw, ...meta }) => meta);
   }
 
   get(id: string): CaughtMessage | undefined {
     return this.list().find((m) => m.id === id);
   }
 
+  /** One attachment of a message sent for `workshopId`; null for any other workshop's mail. */
   async attachment(
+    workshopId: string,
     id: string,
     index: number,
   ): Promise<{ filename: string; contentType: string; content: Buffer } | null> {
-    const message = this.messages.find((m) => m.id === id);
+    const message = this.messages.find((m) => m.id === id && m.workshopId === workshopId);
     if (!message) return null;
     const parsed = await simpleParser(message.raw);
     const found = parsed.attachments[index];

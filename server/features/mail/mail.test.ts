@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createLogger } from '../../lib/logger.js';
-import { createSmtpMailer, loadMailSettings } from '../../lib/mailer.js';
+import { createSmtpMailer, loadMailSettings, WORKSHOP_HEADER } from '../../lib/mailer.js';
 import {
   browserAgent,
   DEMO,
@@ -63,7 +63,10 @@ describe('the local mailbox page', () => {
       from: 'Ringseat <no-reply@ringseat.invalid>',
     });
     const sheet = Buffer.from('%PDF-1.4 demo sheet');
+    const manager = await signedInAgent(server.app, DEMO.manager);
+    const { workshopId } = (await manager.get('/api/auth/me')).body.user;
     await mailer.send({
+      headers: { [WORKSHOP_HEADER]: workshopId },
       to: ['desk@tidewright.example'],
       subject: 'Sheet <with> markup',
       text: 'See attached.',
@@ -72,7 +75,6 @@ describe('the local mailbox page', () => {
     mailer.close();
     const caught = await server.catcher.waitFor((m) => m.subject === 'Sheet <with> markup');
 
-    const manager = await signedInAgent(server.app, DEMO.manager);
     const page = await manager.get('/dev/mail');
     expect(page.status).toBe(200);
     expect(page.headers['content-type']).toContain('text/html');
@@ -142,7 +144,7 @@ describe('the catcher and the mail settings', () => {
       createSmtpMailer({ host: '127.0.0.1', port, secure: false, from: 'x@y.example' }),
       createLogger('silent'),
     );
-    expect(await outbox.send({ to: ['a@b.example'], subject: 's', text: 't' })).toEqual({
+    expect(await outbox.send('w-1', { to: ['a@b.example'], subject: 's', text: 't' })).toEqual({
       sent: false,
       to: ['a@b.example'],
       problem: 'The mail server did not accept the e-mail; try again later.',

@@ -1,5 +1,5 @@
 import type { Logger } from '../../lib/logger.js';
-import type { Mailer, MailMessage } from '../../lib/mailer.js';
+import { WORKSHOP_HEADER, type Mailer, type MailMessage } from '../../lib/mailer.js';
 
 /** What became of an e-mail: callers report it to the person and keep it in the audit trail. */
 export type MailOutcome =
@@ -15,7 +15,8 @@ export class Outbox {
     private readonly logger: Logger,
   ) {}
 
-  async send(message: MailMessage): Promise<MailOutcome> {
+  /** Sends an e-mail on behalf of one workshop (its id travels in a header; see WORKSHOP_HEADER). */
+  async send(workshopId: string, message: MailMessage): Promise<MailOutcome> {
     const to = message.to.filter(Boolean);
     if (to.length === 0)
       return { sent: false, to, problem: 'There is no e-mail address to send to.' };
@@ -26,7 +27,11 @@ export class Outbox {
         problem: 'No mail server is set up (SMTP_HOST), so the e-mail was not sent.',
       };
     try {
-      await this.mailer.send({ ...message, to });
+      await this.mailer.send({
+        ...message,
+        to,
+        headers: { ...message.headers, [WORKSHOP_HEADER]: workshopId },
+      });
       return { sent: true, to };
     } catch (error) {
       this.logger.warn(

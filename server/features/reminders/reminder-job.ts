@@ -91,7 +91,7 @@ export class ReminderJob {
     const skippers = await skippersOf(this.deps.dataSource, due.engine.vesselId);
     const to = [...new Set([...skippers.map((s) => s.email), workshop.email].filter(Boolean))];
     const link = appLink(`/engines/${due.engine.id}`, this.deps.origin);
-    const outcome = await this.deps.outbox.send(reminderMail(workshop, due, to, link));
+    const outcome = await this.deps.outbox.send(workshop.id, reminderMail(workshop, due, to, link));
     if (!outcome.sent) {
       this.deps.logger.warn(
         { engineId: due.engine.id, problem: outcome.problem },

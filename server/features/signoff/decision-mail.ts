@@ -58,6 +58,7 @@ export async function mailDecision(
   const common = commonParts(ctx, reviewer, link);
   const outcome = certificate
     ? await outbox.send(
+        ctx.workshop.id,
         certificateMail({
           ...common,
           number: certificate.number,
@@ -69,6 +70,7 @@ export async function mailDecision(
         }),
       )
     : await outbox.send(
+        ctx.workshop.id,
         returnedMail({
           ...common,
           comments,

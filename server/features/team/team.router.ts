@@ -43,6 +43,7 @@ async function invite(
   const link = `${publicOrigin ?? `${req.protocol}://${req.get('host')}`}/invite/${token}`;
   // The invite stands even when the e-mail cannot go: the link is in the answer to pass on by hand.
   const mail = await outbox.send(
+    inviter.workshopId,
     inviteMail({
       to: invite.email,
       workshopName: inviter.workshopName,
