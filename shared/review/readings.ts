@@ -1,6 +1,7 @@
 import type { ResolvedPhase } from '../programs/resolve-band';
 import { bandState, type BandState } from '../runs/phase-rules';
 import type { Reading } from '../runs/run-event.schema';
+import { isoTime } from '../runs/event-time';
 import type { CsvCell } from './csv';
 import type { VoidedMark } from './views';
 
@@ -88,7 +89,8 @@ export const READING_CSV_HEADER: readonly string[] = [
   'voided (reason, by)',
 ];
 
-const iso = (ms: number) => new Date(ms).toISOString();
+/** A time no date can hold (kept from before times were bounded) is an empty cell. */
+const iso = (ms: number) => isoTime(ms) ?? '';
 
 export function readingCsvCells(row: ReadingRow): CsvCell[] {
   return [

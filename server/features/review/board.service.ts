@@ -18,6 +18,7 @@ import type { BoardFlagCode } from '../../../shared/review/run-words.js';
 import type { BoardRow, BoardView } from '../../../shared/review/views.js';
 import type { Verdict } from '../../../shared/runs/phase-tally.js';
 import { RUN_STATES, type RunState } from '../../../shared/runs/run.schema.js';
+import { isoTime } from '../../../shared/runs/event-time.js';
 import { CLOCK_SKEW_FLAG_MS } from '../../../shared/sync/sync.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { nativeStatement } from '../../lib/native-sql.js';
@@ -71,7 +72,6 @@ function boardRows(dataSource: DataSource, workshopId: string): BoardSqlRow[] {
 /** SQLite keeps TypeORM datetimes as UTC text, "2026-12-01 09:00:00.000". */
 const sqlDateMs = (text: string | null): number | null =>
   text === null ? null : Date.parse(`${text.replace(' ', 'T')}Z`);
-const iso = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
 
 export class BoardService {
   constructor(
@@ -164,7 +164,7 @@ function toBoardRow(row: BoardSqlRow, today: string): { run: BoardRow; key: Rank
     verdict: (row.verdict ?? 'incomplete') as Verdict,
     breachCount: row.breachCount ?? 0,
     currentPhaseName: row.openPhaseName,
-    lastActivityAt: iso(lastActivity),
+    lastActivityAt: isoTime(lastActivity),
     flags,
     firstService: firstService && {
       state: firstService.state,

@@ -1,11 +1,12 @@
 import type { PhaseChart } from '../../../shared/review/chart-series.js';
 import type { CertificateContent } from '../../../shared/review/certificate-content.js';
 import { calendarDateIn } from '../../../shared/review/first-service.js';
+import { isoTime } from '../../../shared/runs/event-time.js';
 import type { RunContext } from '../runs/run-context.js';
 import { commissionedEngineOf } from '../runs/run-engine.js';
 
 const minutes = (ms: number) => Math.round(ms / 600) / 100;
-const isoOrNull = (ms: number | null) => (ms === null ? null : new Date(ms).toISOString());
+const isoOrNull = isoTime;
 
 /** Everything the certificate prints, taken from the run as it stands at sign-off. */
 export function certificateContent(

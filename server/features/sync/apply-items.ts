@@ -13,6 +13,7 @@ import { eventStore } from './event-store.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { RunPatchRow } from './run-patch.entity.js';
 import { submitRefusal } from './submit-check.js';
+import { eventTimeRefusal } from '../../../shared/runs/event-time.js';
 import { voidRefusal, type BatchEntries } from './void-check.js';
 
 export type Applied = { results: PushResult[]; touched: Set<Run> };
@@ -30,8 +31,10 @@ const rejected = (id: string, reason: string, field?: string): PushResult => ({
 function eventRefusal(
   run: Run,
   event: RunEvent,
-  user: SessionUser,
+  { user, now }: Context,
 ): { reason: string; field?: string } | null {
+  const badTime = eventTimeRefusal(event.at, now);
+  if (badTime) return { reason: badTime, field: 'event.at' };
   if (run.state === 'signed-off') {
     return {
       reason: `This run was signed off by the workshop${run.signedOffAt ? ` on ${run.signedOffAt.toISOString().slice(0, 10)}` : ''}; nothing more can be added to it.`,
@@ -58,7 +61,13 @@ function eventRefusal(
   return null;
 }
 
-function refusePatch(run: Run, patch: RunPatchItem): { reason: string; field?: string } | null {
+function refusePatch(
+  run: Run,
+  patch: RunPatchItem,
+  now: number,
+): { reason: string; field?: string } | null {
+  const badTime = eventTimeRefusal(patch.at, now);
+  if (badTime) return { reason: badTime, field: 'at' };
   if (run.state === 'signed-off')
     return { reason: 'This run was signed off by the workshop; it can no longer be changed.' };
   if (
@@ -83,7 +92,8 @@ async function applyPatch(
   if (await manager.getRepository(RunPatchRow).existsBy({ id: patch.id }))
     return { id: patch.id, status: 'duplicate' };
   const refusal =
-    refusePatch(run, patch) ?? (patch.submit ? await submitRefusal(manager, run, patch) : null);
+    refusePatch(run, patch, ctx.now) ??
+    (patch.submit ? await submitRefusal(manager, run, patch) : null);
   if (refusal) return rejected(patch.id, refusal.reason, refusal.field);
   if (patch.currentPhaseId !== undefined) run.currentPhaseId = patch.currentPhaseId;
   if (patch.notes !== undefined) run.notes = patch.notes;
@@ -162,7 +172,7 @@ function refusalOf(
   batch: BatchEntries,
 ) {
   return (
-    eventRefusal(run, event, ctx.user) ??
+    eventRefusal(run, event, ctx) ??
     (event.kind === 'void' ? voidRefusal(manager, ctx.user, run, event, batch) : null)
   );
 }

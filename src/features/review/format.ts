@@ -1,12 +1,19 @@
 import { format } from 'date-fns';
 import { durationWords } from '../../../shared/runs/duration-words';
+import { isDateTime } from '../../../shared/runs/event-time';
 
-/** "26 Nov 2026, 14:52" in the viewer's zone. */
-export const formatMoment = (value: number | string) =>
-  format(new Date(value), 'd MMM yyyy, HH:mm');
+const UNKNOWN = 'unknown time';
+
+/** "26 Nov 2026, 14:52" in the viewer's zone; "unknown time" for a time no date can hold. */
+export function formatMoment(value: number | string): string {
+  const date = new Date(value);
+  return isDateTime(date.getTime()) ? format(date, 'd MMM yyyy, HH:mm') : UNKNOWN;
+}
 
 /** "14:52" when both ends fall on one day, else the full moment. */
 export function formatSpan(fromMs: number, toMs: number): string {
+  if (!isDateTime(fromMs) || !isDateTime(toMs))
+    return `${formatMoment(fromMs)} – ${formatMoment(toMs)}`;
   const from = formatMoment(fromMs);
   const sameDay = format(fromMs, 'yyyy-MM-dd') === format(toMs, 'yyyy-MM-dd');
   return `${from} – ${sameDay ? format(toMs, 'HH:mm') : formatMoment(toMs)}`;

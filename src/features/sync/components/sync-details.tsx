@@ -2,8 +2,9 @@ import { format } from 'date-fns';
 import { useEffect, useRef } from 'react';
 import { Button } from '../../../components/ui/button';
 import { requestSync, useOutboxLines, useSyncStatus, type OutboxLine } from '../api';
+import { isDateTime } from '../../../../shared/runs/event-time';
 
-const when = (ms: number) => format(ms, 'd MMM HH:mm:ss');
+const when = (ms: number) => (isDateTime(ms) ? format(ms, 'd MMM HH:mm:ss') : 'unknown time');
 
 function Line({ line }: { line: OutboxLine }) {
   return (
