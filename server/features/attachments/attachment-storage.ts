@@ -2,6 +2,16 @@ import { randomUUID } from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 
+/** Flushes a folder's entries (a rename in it) to disk. */
+async function syncFolder(folder: string): Promise<void> {
+  const handle = await fs.promises.open(folder, 'r');
+  try {
+    await handle.sync();
+  } finally {
+    await handle.close();
+  }
+}
+
 /**
  * Files on disk under `<dataDir>/uploads`, outside the web root: they are only ever served through
  * the attachments route, which checks who is asking. Names are made by the server, never taken
@@ -22,14 +32,26 @@ export class AttachmentStorage {
     return full;
   }
 
-  /** Writes to a temporary name first and renames, so a crash never leaves half a file under the real name. */
+  /**
+   * Writes to a temporary name first and renames, so a crash never leaves half a file under the
+   * real name; the file and its folder are flushed to disk before this returns, so a row that
+   * commits afterwards never points at a file the disk has not kept.
+   */
   async write(storedName: string, content: Buffer): Promise<void> {
     const target = this.pathOf(storedName);
-    await fs.promises.mkdir(path.dirname(target), { recursive: true });
+    const folder = path.dirname(target);
+    await fs.promises.mkdir(folder, { recursive: true });
     const temporary = `${target}.${randomUUID()}.part`;
     try {
-      await fs.promises.writeFile(temporary, content, { flag: 'wx', mode: 0o640 });
+      const handle = await fs.promises.open(temporary, 'wx', 0o640);
+      try {
+        await handle.writeFile(content);
+        await handle.sync();
+      } finally {
+        await handle.close();
+      }
       await fs.promises.rename(temporary, target);
+      await syncFolder(folder);
     } catch (error) {
       await fs.promises.rm(temporary, { force: true });
       throw error;

@@ -33,7 +33,7 @@ export class Attachment {
   @Column({ type: 'integer' })
   sizeBytes: number;
 
-  /** Path under the uploads folder: `<workshopId>/<id>.<ext>`. */
+  /** Path under the uploads folder: `<workshopId>/<a name made for each upload>.<ext>`. */
   @Column('text')
   storedName: string;
 

@@ -3,14 +3,21 @@ import { In, type DataSource } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import {
   ACCEPTED_FILE_TYPES,
+  type AcceptedMimeType,
   MAX_ATTACHMENTS_PER_RECORD,
   type AttachmentListQuery,
   type AttachmentUploadFields,
   type AttachmentView,
 } from '../../../shared/attachments/attachment.schema.js';
-import { ConflictError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { ConflictError, HttpError, NotFoundError, ValidationError } from '../../lib/errors.js';
 import { User } from '../users/user.entity.js';
 import { findAttachableRecord, findVisibleRecord } from './attachment-records.js';
+import {
+  fullRecordError,
+  insertWithinLimit,
+  isRepeatedId,
+  type NewAttachment,
+} from './attachment-insert.js';
 import type { AttachmentStorage } from './attachment-storage.js';
 import { Attachment } from './attachment.entity.js';
 import { sniffAcceptedType } from './receive-file.js';
@@ -37,62 +44,82 @@ export class AttachmentsService {
 
   /**
    * Stores one file on a record. A repeated client-made id returns what is stored (created:
-   * false) instead of a second copy, so the on-deck sync may retry freely.
+   * false) instead of a second copy, so the on-deck sync may retry freely, even while its first
+   * try is still arriving. The file is on disk before its row commits; a refused row takes its
+   * file away again, and every try writes under a name of its own, so no try removes another's.
    */
   async upload(
     user: SessionUser,
     fields: AttachmentUploadFields,
     file: UploadedFile | undefined,
   ): Promise<{ attachment: AttachmentView; created: boolean }> {
-    const manager = this.dataSource.manager;
-    const record = await findAttachableRecord(manager, user, fields.recordType, fields.recordId);
-    const repeat = fields.id
-      ? await this.repeated(fields as AttachmentUploadFields & { id: string }, user)
-      : null;
+    const record = await findAttachableRecord(
+      this.dataSource.manager,
+      user,
+      fields.recordType,
+      fields.recordId,
+    );
+    const repeat = await this.repeated(fields, user);
     if (repeat) return { attachment: await this.view(repeat), created: false };
     if (!file) throw new ValidationError([{ field: 'file', message: 'Choose a file to attach.' }]);
     await this.refuseWhenFull(fields);
-    const mimeType = await sniffAcceptedType(file);
-    const id = fields.id ?? randomUUID();
-    const row = Object.assign(new Attachment(), {
-      id,
-      workshopId: record.workshopId,
+    const row = this.newRow(user, record.workshopId, fields, file, await sniffAcceptedType(file));
+    await this.storage.write(row.storedName, file.buffer);
+    let stored: boolean;
+    try {
+      stored = insertWithinLimit(this.dataSource, row);
+    } catch (error) {
+      await this.storage.remove(row.storedName);
+      const first = isRepeatedId(error) ? await this.repeated(fields, user) : null;
+      if (first) return { attachment: await this.view(first), created: false };
+      throw error;
+    }
+    if (!stored) {
+      await this.storage.remove(row.storedName);
+      throw fullRecordError(fields.recordType);
+    }
+    const saved = await this.dataSource.getRepository(Attachment).findOneByOrFail({ id: row.id });
+    return { attachment: await this.view(saved), created: true };
+  }
+
+  private newRow(
+    user: SessionUser,
+    workshopId: string,
+    fields: AttachmentUploadFields,
+    file: UploadedFile,
+    mimeType: AcceptedMimeType,
+  ): NewAttachment {
+    return {
+      id: fields.id ?? randomUUID(),
+      workshopId,
       recordType: fields.recordType,
       recordId: fields.recordId,
       caption: fields.caption,
       originalName: cleanName(file.originalname),
       mimeType,
       sizeBytes: file.size,
-      storedName: `${record.workshopId}/${id}.${ACCEPTED_FILE_TYPES[mimeType]}`,
+      storedName: `${workshopId}/${randomUUID()}.${ACCEPTED_FILE_TYPES[mimeType]}`,
       uploadedById: user.id,
-    });
-    await this.storage.write(row.storedName, file.buffer);
-    try {
-      await manager.getRepository(Attachment).insert(row);
-    } catch (error) {
-      await this.storage.remove(row.storedName);
-      throw error;
-    }
-    return {
-      attachment: await this.view(await manager.getRepository(Attachment).findOneByOrFail({ id })),
-      created: true,
     };
   }
 
+  /** A quick refusal before the file is written; the insert itself holds the limit. */
   private async refuseWhenFull(fields: AttachmentUploadFields) {
     const count = await this.dataSource
       .getRepository(Attachment)
       .count({ where: { recordType: fields.recordType, recordId: fields.recordId } });
-    if (count >= MAX_ATTACHMENTS_PER_RECORD) {
-      const message = `This ${fields.recordType} already has ${MAX_ATTACHMENTS_PER_RECORD} files, the most it can hold. Remove one first.`;
-      throw new ConflictError(message, [{ field: 'file', message }]);
-    }
+    if (count >= MAX_ATTACHMENTS_PER_RECORD) throw fullRecordError(fields.recordType);
   }
 
+  /**
+   * What is stored under the upload's client-made id, or null. Only the person who added a file
+   * may change its caption this way: a skipper may not relabel a technician's photo.
+   */
   private async repeated(
-    fields: AttachmentUploadFields & { id: string },
+    fields: AttachmentUploadFields,
     user: SessionUser,
   ): Promise<Attachment | null> {
+    if (!fields.id) return null;
     const repository = this.dataSource.getRepository(Attachment);
     const existing = await repository.findOne({ where: { id: fields.id } });
     if (!existing) return null;
@@ -105,8 +132,14 @@ export class AttachmentsService {
         { field: 'id', message: 'This attachment id is already in use.' },
       ]);
     }
-    if (fields.caption && fields.caption !== existing.caption)
-      await repository.update({ id: existing.id }, { caption: fields.caption });
+    if (!fields.caption || fields.caption === existing.caption) return existing;
+    if (existing.uploadedById !== user.id) {
+      const message = 'Only the person who added this file can change its caption.';
+      throw new HttpError(403, 'forbidden', 'Not allowed', message, [
+        { field: 'caption', message },
+      ]);
+    }
+    await repository.update({ id: existing.id }, { caption: fields.caption });
     return repository.findOneByOrFail({ id: existing.id });
   }
 
