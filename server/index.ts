@@ -9,6 +9,7 @@ import { openDatabase } from './lib/database.js';
 import { startWalCheckpointer } from './lib/wal-checkpointer.js';
 import { createLogger, type Logger } from './lib/logger.js';
 import type { Mailer } from './lib/mailer.js';
+import { refuseEmptyDatabase, refuseMissingDatabase, StartRefused } from './first-run.js';
 import { prepareData } from './prepare-data.js';
 import { systemClock } from './lib/clock.js';
 import { startMail } from './features/mail/start-mail.js';
@@ -24,7 +25,12 @@ const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 async function main() {
   const config = loadConfig();
   const logger = createLogger(config.logLevel);
+  refuseMissingDatabase(config);
   const dataSource = await openDatabase(config.databasePath);
+  await refuseEmptyDatabase(dataSource, config).catch(async (error: unknown) => {
+    await dataSource.destroy();
+    throw error;
+  });
   const checkpointer = await startWalCheckpointer(config.databasePath, logger);
   if ((await prepareData(dataSource, { demo: config.demo })).demoAdded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
@@ -88,7 +94,7 @@ function closeOnSignal(server: Server, logger: Logger, closers: Array<() => Prom
   process.on('SIGTERM', () => shutdown('SIGTERM'));
 }
 
-main().catch((error) => {
-  console.error(error);
+main().catch((error: unknown) => {
+  console.error(error instanceof StartRefused ? `Ringseat cannot start. ${error.message}` : error);
   process.exit(1);
 });

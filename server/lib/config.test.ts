@@ -7,4 +7,10 @@ describe('settings from the environment', () => {
     expect(loadConfig({ RINGSEAT_DEMO: 'none' }).demo).toBe('none');
     expect(() => loadConfig({ RINGSEAT_DEMO: 'maybe' })).toThrow(/RINGSEAT_DEMO/);
   });
+
+  it('adds demo data in production only when RINGSEAT_DEMO asks for it', () => {
+    expect(loadConfig({ NODE_ENV: 'production' }).demo).toBe('none');
+    expect(loadConfig({ NODE_ENV: 'production', RINGSEAT_DEMO: 'demo' }).demo).toBe('demo');
+    expect(loadConfig({ NODE_ENV: 'test' }).demo).toBe('demo');
+  });
 });

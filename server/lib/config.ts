@@ -11,7 +11,8 @@ const EnvSchema = z.object({
   RINGSEAT_ORIGIN: z.string().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
-  RINGSEAT_DEMO: z.enum(['demo', 'none']).default('demo'),
+  /** Unset: the demo workshop goes into a new database in development, never in production. */
+  RINGSEAT_DEMO: z.enum(['demo', 'none']).optional(),
 });
 
 export type AppConfig = {
@@ -22,7 +23,7 @@ export type AppConfig = {
   publicOrigin?: string;
   production: boolean;
   logLevel: z.infer<typeof EnvSchema>['LOG_LEVEL'];
-  /** Whether a new database gets the demo workshop (from RINGSEAT_DEMO). */
+  /** Whether a new database gets the demo workshop: RINGSEAT_DEMO, else only outside production. */
   demo: 'demo' | 'none';
 };
 
@@ -41,6 +42,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     publicOrigin: e.RINGSEAT_ORIGIN,
     production: e.NODE_ENV === 'production',
     logLevel: e.LOG_LEVEL,
-    demo: e.RINGSEAT_DEMO,
+    demo: e.RINGSEAT_DEMO ?? (e.NODE_ENV === 'production' ? 'none' : 'demo'),
   };
 }

@@ -1,4 +1,4 @@
-import { spawn, type ChildProcess, type ChildProcessByStdio } from 'node:child_process';
+import { spawn, spawnSync, type ChildProcess, type ChildProcessByStdio } from 'node:child_process';
 import fs from 'node:fs';
 import net from 'node:net';
 import os from 'node:os';
@@ -27,12 +27,13 @@ export async function freePort(): Promise<number> {
  * Starts the server exactly as `npm start` does after its build step (tsx server/index.ts), on a
  * fresh data folder. This catches what vitest's transformer hides, such as untyped entity columns.
  * With `nodeArgs` (e.g. --cpu-prof) the server runs in one node process through tsx's loader.
+ * With `dir`, it serves the data folder given (its ringseat.sqlite), which `stop` removes too.
  */
 export async function startRealServer(
   env: Record<string, string> = {},
   nodeArgs: string[] = [],
+  dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-real-')),
 ): Promise<RealServer> {
-  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'ringseat-real-'));
   const port = await freePort();
   const baseURL = `http://127.0.0.1:${port}`;
   let output = '';
@@ -60,6 +61,28 @@ export async function startRealServer(
       fs.rmSync(dir, { recursive: true, force: true });
     },
   };
+}
+
+/** Runs one of the database commands (`npm run db:…`) on a data folder, as an operator would. */
+export function runDatabaseCommand(
+  script: string,
+  args: string[],
+  dir: string,
+  env: Record<string, string> = {},
+) {
+  return spawnSync(
+    process.execPath,
+    [path.join('node_modules', 'tsx', 'dist', 'cli.mjs'), script, ...args],
+    {
+      env: {
+        ...process.env,
+        RINGSEAT_DB: path.join(dir, 'ringseat.sqlite'),
+        RINGSEAT_DATA_DIR: dir,
+        ...env,
+      },
+      encoding: 'utf8',
+    },
+  );
 }
 
 /** `tsx server/index.ts` as npm start runs it, or node with tsx's loader when given node flags. */

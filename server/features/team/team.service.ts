@@ -8,14 +8,13 @@ import type {
 import type { Clock } from '../../lib/clock.js';
 import { ConflictError, GoneError, NotFoundError, ValidationError } from '../../lib/errors.js';
 import { hashPassword } from '../../lib/passwords.js';
-import { hashToken, newToken } from '../../lib/tokens.js';
+import { hashToken } from '../../lib/tokens.js';
 import type { AppLucia } from '../auth/lucia.js';
 import { User } from '../users/user.entity.js';
 import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import { Invite } from './invite.entity.js';
-
-const INVITE_VALID_DAYS = 7;
+import { newInvite } from './new-invite.js';
 
 /** The workshop's people: the team list, and invites from the e-mail to the first sign-in. */
 export class TeamService {
@@ -68,18 +67,16 @@ export class TeamService {
         ]);
       }
     }
-    const token = newToken();
-    const invite: Invite = Object.assign(new Invite(), {
-      id: randomUUID(),
-      workshopId: inviter.workshopId,
-      email: input.email,
-      role: input.role,
-      tokenHash: hashToken(token),
-      vesselIds: input.role === 'skipper' ? input.vesselIds : [],
-      invitedById: inviter.id,
-      expiresAt: new Date(this.clock.now().getTime() + INVITE_VALID_DAYS * 86_400_000),
-      acceptedAt: null,
-    });
+    const { invite, token } = newInvite(
+      {
+        workshopId: inviter.workshopId,
+        email: input.email,
+        role: input.role,
+        vesselIds: input.vesselIds,
+        invitedById: inviter.id,
+      },
+      this.clock.now(),
+    );
     await this.dataSource.getRepository(Invite).insert(invite);
     return { invite, token };
   }
