@@ -5,7 +5,7 @@ import {
 } from '../../../shared/sync/sync.schema.js';
 import { fieldErrors } from '../../middleware/validate.js';
 
-type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
+export type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
 
 /** Checks each item on its own: an invalid item is rejected with its reason, the others go on. */
 export function checkItems(items: unknown[]): Checked[] {
@@ -26,4 +26,32 @@ export function checkItems(items: unknown[]): Checked[] {
       rejected: { id, status: 'rejected', reason: first.message, field: first.field },
     };
   });
+}
+
+/** The runs the well-formed items name, each once. */
+export const namedRunIds = (checked: Checked[]): string[] => [
+  ...new Set(checked.flatMap((c) => ('item' in c ? [c.item.runId] : []))),
+];
+
+const UNSEEN_RUN =
+  'This run is not shared with you, or no longer exists: ask the workshop to link you to its boat again.';
+
+/** Refuses by name each item whose run the user may not see; the others go on. */
+export function refuseUnseenRuns(
+  checked: Checked[],
+  visible: ReadonlyMap<string, unknown>,
+): Checked[] {
+  return checked.map((c) =>
+    'item' in c && !visible.has(c.item.runId)
+      ? {
+          index: c.index,
+          rejected: {
+            id: c.item.type === 'event' ? c.item.event.id : c.item.id,
+            status: 'rejected',
+            reason: UNSEEN_RUN,
+            field: 'runId',
+          },
+        }
+      : c,
+  );
 }

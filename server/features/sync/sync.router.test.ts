@@ -199,22 +199,57 @@ describe('push', () => {
 });
 
 describe('tenancy', () => {
-  it("answers 404 to a skipper pushing to another skipper's run and stores nothing", async () => {
-    const before = await eventCount(port.id);
+  it("refuses by name an item for another skipper's run and stores the rest of the batch", async () => {
     const tomas = await signedInAgent(server.app, DEMO.skipperB);
+    const before = await eventCount(port.id);
     const res = await tomas.post('/api/sync/push').send({
       deviceId: deviceB,
       sentAt: clock.now().getTime(),
       items: [readingFor(port, T0 + 200_000, 3000)],
     });
-    expect(res.status).toBe(404);
+    expect(res.status).toBe(200);
+    expect(res.body.results).toEqual([
+      {
+        id: expect.any(String),
+        status: 'rejected',
+        field: 'runId',
+        reason: expect.stringContaining('This run is not shared with you, or no longer exists'),
+      },
+    ]);
     expect(await eventCount(port.id)).toBe(before);
+
+    // Sunniva's phone still holds an entry for Halcyon Drift's run (say, from before she was
+    // unlinked) in the same batch as her own Blue Tern readings.
+    const [halcyonRunId] = (await tomas.get('/api/sync/pull?cursor=0')).body.runIds as string[];
+    const sunniva = await skipper();
+    const cormorant = (
+      (await sunniva.get('/api/sync/pull?cursor=0')).body.runs as RunDetail[]
+    ).find((r) => r.state === 'under-way')!;
+    const now = clock.now().getTime();
+    const own = [
+      readingFor(cormorant, now - 60_000, 3100),
+      readingFor(cormorant, now - 30_000, 3150),
+    ];
+    const foreign = { ...readingFor(cormorant, now - 20_000, 3000), runId: halcyonRunId };
+    const [mine, theirs] = [await eventCount(cormorant.id), await eventCount(halcyonRunId)];
+    const mixed = await sunniva.post('/api/sync/push').send({
+      deviceId: deviceA,
+      sentAt: clock.now().getTime(),
+      items: [...own, foreign],
+    });
+    expect(
+      mixed.body.results.map((r: { status: string; field?: string }) => r.field ?? r.status),
+    ).toEqual(['stored', 'stored', 'runId']);
+    expect([await eventCount(cormorant.id), await eventCount(halcyonRunId)]).toEqual([
+      mine + 2,
+      theirs,
+    ]);
     const pulled = (await tomas.get('/api/sync/pull?cursor=0')).body;
     expect(pulled.runIds).not.toContain(port.id);
     expect(pulled.events.filter((e: { runId: string }) => e.runId === port.id)).toEqual([]);
   });
 
-  it('answers 404 to another workshop and shows it nothing', async () => {
+  it('refuses another workshop in the same words as a run that does not exist, and shows it nothing', async () => {
     const other = await addOtherWorkshop(server.dataSource);
     const stranger = await signedInAgent(server.app, other.technicianEmail);
     const before = await eventCount(port.id);
@@ -223,7 +258,9 @@ describe('tenancy', () => {
       sentAt: clock.now().getTime(),
       items: [readingFor(port, T0 + 300_000, 3000)],
     });
-    expect(res.status).toBe(404);
+    expect(res.status).toBe(200);
+    expect(res.body.results[0]).toMatchObject({ status: 'rejected', field: 'runId' });
+    expect(res.body.results[0].reason).toContain('not shared with you, or no longer exists');
     expect(await eventCount(port.id)).toBe(before);
     const pulled = (await stranger.get('/api/sync/pull?cursor=0')).body;
     expect(pulled).toMatchObject({ runs: [], events: [], runIds: [] });

@@ -19,7 +19,7 @@ import { toRunDetail } from '../runs/runs.service.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import type { VesselsService } from '../vessels/vessels.service.js';
 import { applyItems, type Applied } from './apply-items.js';
-import { checkItems } from './check-items.js';
+import { checkItems, namedRunIds, refuseUnseenRuns } from './check-items.js';
 import { latestChangeSeq, reserveChangeSeq } from '../../lib/change-seq.js';
 
 /**
@@ -110,16 +110,19 @@ export class SyncService {
   }
 
   /**
-   * Applies a batch in one transaction. Runs the user may not see make the whole batch a 404
-   * (nothing stored, nothing confirmed about other people's runs).
+   * Applies a batch in one transaction. An item naming a run the user may not see (another
+   * skipper's, another workshop's, unlinked since, or none at all) is refused by name, with
+   * the same words in each case so nothing is told about other people's runs; the rest of the
+   * batch goes on, so a skipper unlinked from one boat keeps the readings of the others.
    */
   async push(
     user: SessionUser,
     batch: PushBatch,
   ): Promise<{ results: PushResult[]; serverTime: number }> {
-    const checked = checkItems(batch.items);
+    const parsed = checkItems(batch.items);
+    const runs = await this.visibleAmong(user, namedRunIds(parsed));
+    const checked = refuseUnseenRuns(parsed, runs);
     const valid = checked.filter((c): c is { index: number; item: PushItem } => 'item' in c);
-    const runs = await this.loadVisibleRuns(user, [...new Set(valid.map((c) => c.item.runId))]);
     const now = this.clock.now().getTime();
     const skewMs = batch.sentAt - now;
     const applied = await this.dataSource.transaction(async (manager) => {
@@ -171,6 +174,13 @@ export class SyncService {
   }
 
   private async loadVisibleRuns(user: SessionUser, runIds: string[]): Promise<Map<string, Run>> {
+    const allowed = await this.visibleAmong(user, runIds);
+    const missing = runIds.find((id) => !allowed.has(id));
+    if (missing) throw new NotFoundError('run', missing);
+    return allowed;
+  }
+
+  private async visibleAmong(user: SessionUser, runIds: string[]): Promise<Map<string, Run>> {
     const runs =
       runIds.length === 0
         ? []
@@ -178,12 +188,9 @@ export class SyncService {
             .getRepository(Run)
             .find({ where: { id: In(runIds), workshopId: user.workshopId } });
     const visible = await visibleVesselIds(this.dataSource.manager, user);
-    const allowed = new Map(
+    return new Map(
       runs.filter((r) => visible === 'all' || visible.includes(r.vesselId)).map((r) => [r.id, r]),
     );
-    const missing = runIds.find((id) => !allowed.has(id));
-    if (missing) throw new NotFoundError('run', missing);
-    return allowed;
   }
 
   /** Touched runs get a new change number so other devices and the workshop pull the change. */

@@ -1,8 +1,22 @@
 import { MAX_PUSH_ITEMS, type PushItem, type PushResult } from '../../../shared/sync/sync.schema';
 import { db, type EventRecord, type RunPatchRecord } from '../../lib/db';
 
-/** What waits to be sent, oldest device time first; run changes after the events they follow. */
-export async function nextPushBatch(max = MAX_PUSH_ITEMS): Promise<PushItem[]> {
+/**
+ * Most a batch carries as JSON: a quarter of the server's 4 MB body limit, so long notes or a
+ * slow link never make one batch too large or too slow to get through.
+ */
+export const PUSH_BATCH_BYTES = 1_000_000;
+
+const encoder = new TextEncoder();
+
+/**
+ * What waits to be sent, oldest device time first, run changes after the events they follow:
+ * at most `maxItems`, and no more than `maxBytes` of JSON (always at least one item).
+ */
+export async function nextPushBatch(
+  maxItems = MAX_PUSH_ITEMS,
+  maxBytes = PUSH_BATCH_BYTES,
+): Promise<PushItem[]> {
   const events = await db.events.where('sync').equals('pending').sortBy('at');
   const patches = await db.runPatches.where('sync').equals('pending').sortBy('createdAt');
   const items: PushItem[] = [
@@ -13,7 +27,14 @@ export async function nextPushBatch(max = MAX_PUSH_ITEMS): Promise<PushItem[]> {
     })),
     ...patches.map((p: RunPatchRecord): PushItem => p.item),
   ];
-  return items.slice(0, max);
+  const batch: PushItem[] = [];
+  let bytes = 0;
+  for (const item of items.slice(0, maxItems)) {
+    bytes += encoder.encode(JSON.stringify(item)).length + 1;
+    if (batch.length > 0 && bytes > maxBytes) break;
+    batch.push(item);
+  }
+  return batch;
 }
 
 const itemId = (item: PushItem) => (item.type === 'event' ? item.event.id : item.id);
@@ -38,12 +59,12 @@ export async function recordResults(items: PushItem[], results: PushResult[]): P
   });
 }
 
-/** The whole batch was refused (e.g. the run is no longer shared with this user). */
-export async function rejectAll(items: PushItem[], reason: string): Promise<void> {
-  await recordResults(
-    items,
-    items.map((item) => ({ id: itemId(item), status: 'rejected', reason })),
-  );
+/**
+ * A batch of this one item was refused whole: that refusal names it, so it is kept with the
+ * reason and not sent again. A larger batch refused whole is split instead (sync-engine.ts).
+ */
+export async function rejectOnly(item: PushItem, reason: string): Promise<void> {
+  await recordResults([item], [{ id: itemId(item), status: 'rejected', reason }]);
 }
 
 export type OutboxCounts = { waiting: number; rejected: number };

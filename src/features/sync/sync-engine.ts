@@ -1,8 +1,8 @@
 import { liveQuery } from 'dexie';
-import type { PushResponse } from '../../../shared/sync/sync.schema';
+import { MAX_PUSH_ITEMS, type PushItem, type PushResponse } from '../../../shared/sync/sync.schema';
 import { api, isApiError } from '../../lib/api-client';
 import { db } from '../../lib/db';
-import { nextPushBatch, outboxCounts, recordResults, rejectAll } from './outbox';
+import { nextPushBatch, outboxCounts, recordResults, rejectOnly } from './outbox';
 import { uploadPendingPhotos, isFinalRefusal } from './photos';
 import { pullAll } from './pull';
 import { setSyncStatus } from './sync-status';
@@ -21,23 +21,38 @@ async function deviceId(): Promise<string> {
   return id;
 }
 
-/** Sends every pending event and run change, one batch at a time, until the outbox is empty. */
+/**
+ * Sends every pending event and run change, one batch at a time, until the outbox is empty.
+ * Batches are bounded by bytes (outbox.ts). A batch the server refuses whole (too large, or
+ * one bad item the server could not answer item by item) is halved until the refusal names a
+ * single item; nothing is marked refused that the server did not refuse by name.
+ */
 async function pushAll(): Promise<void> {
   const device = await deviceId();
+  let limit = MAX_PUSH_ITEMS;
   for (let round = 0; round < 1000; round++) {
-    const items = await nextPushBatch();
+    const items = await nextPushBatch(limit);
     if (items.length === 0) return;
-    try {
-      const answer = await api.post<PushResponse>('/api/sync/push', {
-        deviceId: device,
-        sentAt: Date.now(),
-        items,
-      });
-      await recordResults(items, answer.results);
-    } catch (error) {
-      if (isApiError(error) && isFinalRefusal(error.status)) await rejectAll(items, error.message);
-      else throw error;
-    }
+    const split = await pushBatch(device, items);
+    limit = split ? Math.max(1, Math.ceil(items.length / 2)) : Math.min(MAX_PUSH_ITEMS, limit * 2);
+  }
+}
+
+/** One batch; true when it was refused whole and should go again in halves. */
+async function pushBatch(device: string, items: PushItem[]): Promise<boolean> {
+  try {
+    const answer = await api.post<PushResponse>('/api/sync/push', {
+      deviceId: device,
+      sentAt: Date.now(),
+      items,
+    });
+    await recordResults(items, answer.results);
+    return false;
+  } catch (error) {
+    if (!isApiError(error) || !isFinalRefusal(error.status)) throw error;
+    if (items.length > 1) return true;
+    await rejectOnly(items[0], error.message);
+    return false;
   }
 }
 

@@ -1,39 +1,12 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { PullResponse } from '../../../shared/sync/sync.schema';
-import { db, type EventRecord, type RunRecord } from '../../lib/db';
+import { db, type RunRecord } from '../../lib/db';
 import { stubFetch } from '../../test/fetch-stub';
 import { nextPushBatch, outboxCounts, recordResults } from './outbox';
 import { applyPull } from './pull';
 import { backoffDelay, startSync, syncNow } from './sync-engine';
 import { getSyncStatus } from './sync-status';
-
-const RUN = '11111111-1111-4111-8111-111111111111';
-const ENGINE = '22222222-2222-4222-8222-222222222222';
-
-function reading(id: string, at: number, sync: EventRecord['sync'] = 'pending'): EventRecord {
-  const event = {
-    kind: 'reading' as const,
-    id,
-    at,
-    engineId: ENGINE,
-    phaseId: 'p1',
-    rpm: 2500,
-    throttle: 'half' as const,
-  };
-  return {
-    id,
-    runId: RUN,
-    engineId: ENGINE,
-    at,
-    kind: 'reading',
-    event,
-    origin: 'device',
-    sync,
-    createdAt: at,
-  };
-}
-
-const uuid = (n: number) => `00000000-0000-4000-8000-${String(n).padStart(12, '0')}`;
+import { reading, RUN, uuid } from './test-records';
 
 beforeEach(async () => {
   await db.delete();
