@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import { createDataSource } from '../data-source.js';
+import { installTransactionLock } from './transaction-lock.js';
 import { installWriteRecovery } from './write-status.js';
 
 /** Opens the database file and brings its schema up to date. */
@@ -7,6 +8,7 @@ export async function openDatabase(databasePath: string): Promise<DataSource> {
   const dataSource = createDataSource(databasePath);
   await dataSource.initialize();
   installWriteRecovery(dataSource);
+  installTransactionLock(dataSource);
   await dataSource.runMigrations({ transaction: 'each' });
   return dataSource;
 }

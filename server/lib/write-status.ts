@@ -29,7 +29,7 @@ export function writeStatus(dataSource: DataSource): WriteStatus {
   return statuses.get(dataSource) ?? { failing: false };
 }
 
-export function noteWriteFailure(dataSource: DataSource, error: unknown) {
+function noteWriteFailure(dataSource: DataSource, error: unknown) {
   const code = (error as { code?: unknown } | null)?.code;
   if (typeof code !== 'string' || !STORAGE_CODES.test(code)) return;
   if (!writeStatus(dataSource).failing)

@@ -1,8 +1,7 @@
-import type { DataSource } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import { MAX_ATTACHMENTS_PER_RECORD } from '../../../shared/attachments/attachment.schema.js';
 import { ConflictError } from '../../lib/errors.js';
 import { nativeStatement } from '../../lib/native-sql.js';
-import { noteWriteFailure } from '../../lib/write-status.js';
 import type { Attachment } from './attachment.entity.js';
 
 /*
@@ -18,29 +17,27 @@ const INSERT_WITHIN_LIMIT = `INSERT INTO "attachment" ("id", "workshopId", "reco
 
 export type NewAttachment = Omit<Attachment, 'createdAt'>;
 
-/** Inserts the row unless the record is full; false when it is. Throws on a repeated id. */
-export function insertWithinLimit(dataSource: DataSource, row: NewAttachment): boolean {
-  try {
-    const { changes } = nativeStatement(dataSource, INSERT_WITHIN_LIMIT).run(
-      row.id,
-      row.workshopId,
-      row.recordType,
-      row.recordId,
-      row.caption,
-      row.originalName,
-      row.mimeType,
-      row.sizeBytes,
-      row.storedName,
-      row.uploadedById,
-      row.recordType,
-      row.recordId,
-      MAX_ATTACHMENTS_PER_RECORD,
-    );
-    return changes === 1;
-  } catch (error) {
-    noteWriteFailure(dataSource, error);
-    throw error;
-  }
+/**
+ * Inserts the row unless the record is full; false when it is. Throws on a repeated id. Run it
+ * inside a transaction, so it waits for any other one instead of joining it.
+ */
+export function insertWithinLimit(manager: EntityManager, row: NewAttachment): boolean {
+  const { changes } = nativeStatement(manager, INSERT_WITHIN_LIMIT).run(
+    row.id,
+    row.workshopId,
+    row.recordType,
+    row.recordId,
+    row.caption,
+    row.originalName,
+    row.mimeType,
+    row.sizeBytes,
+    row.storedName,
+    row.uploadedById,
+    row.recordType,
+    row.recordId,
+    MAX_ATTACHMENTS_PER_RECORD,
+  );
+  return changes === 1;
 }
 
 /** Whether an insert failed because another upload took the same id first. */

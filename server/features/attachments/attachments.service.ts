@@ -67,7 +67,9 @@ export class AttachmentsService {
     await this.storage.write(row.storedName, file.buffer);
     let stored: boolean;
     try {
-      stored = insertWithinLimit(this.dataSource, row);
+      stored = await this.dataSource.transaction(async (manager) =>
+        insertWithinLimit(manager, row),
+      );
     } catch (error) {
       await this.storage.remove(row.storedName);
       const first = isRepeatedId(error) ? await this.repeated(fields, user) : null;
