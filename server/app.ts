@@ -13,7 +13,11 @@ import { authRouter } from './features/auth/auth.router.js';
 import { AuthService } from './features/auth/auth.service.js';
 import { loadSession } from './features/auth/load-session.js';
 import { createLucia, type AppLucia } from './features/auth/lucia.js';
-import { signInLimiter, type SignInLimit } from './features/auth/sign-in-http.js';
+import {
+  DEFAULT_SIGN_IN_LIMIT,
+  SignInThrottle,
+  type SignInLimit,
+} from './features/auth/sign-in-throttle.js';
 import { checklistsRouter } from './features/checklists/checklists.router.js';
 import { ChecklistsService, checklistsOf } from './features/checklists/checklists.service.js';
 import { healthRouter } from './features/health/health.router.js';
@@ -68,6 +72,8 @@ export type AppDeps = {
   /** Public origin (https://…) when behind a proxy; also decides Secure cookies. */
   publicOrigin?: string;
   signInLimit?: SignInLimit;
+  /** Express's `trust proxy`: which proxies' X-Forwarded-For to believe; none by default. */
+  trustProxy?: string | number | false;
   /** Largest JSON body accepted by ordinary routes. */
   jsonLimit?: string;
   /** Folder for uploads (`<dataDir>/uploads`); defaults to RINGSEAT_DATA_DIR. */
@@ -84,7 +90,8 @@ export function createApp(deps: AppDeps): Express {
   const lucia = createLucia(deps.dataSource, { secureCookies: secure });
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  // X-Forwarded-For is believed only from the proxies the operator names (RINGSEAT_TRUST_PROXY).
+  app.set('trust proxy', deps.trustProxy ?? false);
   app.use(securityHeaders(secure));
   app.use(requestLog(deps.logger));
   app.use('/api', apiRouter(deps, lucia));
@@ -101,14 +108,14 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   const clock = deps.clock ?? systemClock;
   const dataDir = deps.dataDir ?? loadConfig().dataDir;
   const outbox = new Outbox(deps.mailer ?? null, deps.logger);
-  const limiter = signInLimiter(deps.signInLimit ?? { windowMs: 15 * 60_000, limit: 10 });
+  const throttle = new SignInThrottle(db, deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT, clock);
   const api = express.Router();
   api.use(jsonBodies(deps.jsonLimit ?? '100kb'), originCheck(publicOrigin), loadSession(lucia));
   api.use(healthRouter(db));
-  api.use('/auth', authRouter(new AuthService(db, lucia), lucia, limiter));
+  api.use('/auth', authRouter(new AuthService(db, lucia), lucia, throttle));
   const team = new TeamService(db, lucia, clock);
   api.use(teamRouter({ service: team, publicOrigin, outbox }));
-  api.use(inviteAcceptanceRouter({ service: team, lucia, limiter }));
+  api.use(inviteAcceptanceRouter({ service: team, lucia, throttle }));
   const recordChecks: VesselRecordChecks = { hasOpenRun, checklistsOf, latestRunsOf };
   const vessels = new VesselsService(db, recordChecks, clock);
   api.use(vesselsRouter(vessels));

@@ -12,6 +12,7 @@ import { RunReview } from './features/signoff/run-review.entity.js';
 import { ChangeCounter } from './lib/change-counter.entity.js';
 import { RunPatchRow } from './features/sync/run-patch.entity.js';
 import { Session } from './features/auth/session.entity.js';
+import { SignInFailure } from './features/auth/sign-in-failure.entity.js';
 import { Invite } from './features/team/invite.entity.js';
 import { User } from './features/users/user.entity.js';
 import { Engine } from './features/vessels/engine.entity.js';
@@ -24,6 +25,7 @@ export const ENTITIES = [
   Workshop,
   User,
   Session,
+  SignInFailure,
   Invite,
   Vessel,
   VesselSkipper,

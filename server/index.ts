@@ -48,6 +48,7 @@ async function main() {
     logger,
     clientDir: path.join(root, 'dist', 'client'),
     publicOrigin: config.publicOrigin,
+    trustProxy: config.trustProxy,
     dataDir: config.dataDir,
     mailer: mail.mailer,
     mailbox: mail.mailbox,

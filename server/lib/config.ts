@@ -9,6 +9,8 @@ const EnvSchema = z.object({
   RINGSEAT_DATA_DIR: z.string().default('data'),
   /** Public origin when served behind a proxy, e.g. https://ringseat.example.org. */
   RINGSEAT_ORIGIN: z.string().optional(),
+  /** Proxies whose X-Forwarded-For is believed: a hop count, or addresses and subnets (`loopback`, `10.0.0.0/8`). */
+  RINGSEAT_TRUST_PROXY: z.string().optional(),
   NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   /** Unset: the demo workshop goes into a new database in development, never in production. */
@@ -21,6 +23,8 @@ export type AppConfig = {
   databasePath: string;
   dataDir: string;
   publicOrigin?: string;
+  /** Express's `trust proxy` from RINGSEAT_TRUST_PROXY; false when unset. */
+  trustProxy: string | number | false;
   production: boolean;
   logLevel: z.infer<typeof EnvSchema>['LOG_LEVEL'];
   /** Whether a new database gets the demo workshop: RINGSEAT_DEMO, else only outside production. */
@@ -40,8 +44,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): AppConfig {
     databasePath: e.RINGSEAT_DB,
     dataDir: e.RINGSEAT_DATA_DIR,
     publicOrigin: e.RINGSEAT_ORIGIN,
+    trustProxy: trustProxyOf(e.RINGSEAT_TRUST_PROXY),
     production: e.NODE_ENV === 'production',
     logLevel: e.LOG_LEVEL,
     demo: e.RINGSEAT_DEMO ?? (e.NODE_ENV === 'production' ? 'none' : 'demo'),
   };
+}
+
+/** `2` trusts two hops; `loopback, 10.0.0.0/8` those addresses; unset or empty trusts none. */
+function trustProxyOf(value: string | undefined): string | number | false {
+  const text = value?.trim();
+  if (!text) return false;
+  return /^\d+$/.test(text) ? Number(text) : text;
 }

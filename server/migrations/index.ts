@@ -7,6 +7,7 @@ import { ReviewSignOff1796163848909 } from './1796163848909-ReviewSignOff.js';
 import { RunEventLeanIndexes1796250000000 } from './1796250000000-RunEventLeanIndexes.js';
 import { ReturnsAndVoids1796300000000 } from './1796300000000-ReturnsAndVoids.js';
 import { ServiceRecords1796300100000 } from './1796300100000-ServiceRecords.js';
+import { SignInFailures1796400000000 } from './1796400000000-SignInFailures.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
 export const MIGRATIONS: Function[] = [
@@ -19,4 +20,5 @@ export const MIGRATIONS: Function[] = [
   RunEventLeanIndexes1796250000000,
   ReturnsAndVoids1796300000000,
   ServiceRecords1796300100000,
+  SignInFailures1796400000000,
 ];

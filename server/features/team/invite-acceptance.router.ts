@@ -1,9 +1,10 @@
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import { z } from 'zod';
 import { AcceptInviteInputSchema } from '../../../shared/auth/auth.schema.js';
 import { validate } from '../../middleware/validate.js';
 import type { AppLucia } from '../auth/lucia.js';
 import { startSession } from '../auth/sign-in-http.js';
+import type { SignInThrottle } from '../auth/sign-in-throttle.js';
 import type { TeamService } from './team.service.js';
 
 const TokenParamsSchema = z.object({
@@ -14,10 +15,10 @@ const TokenParamsSchema = z.object({
 export function inviteAcceptanceRouter(deps: {
   service: TeamService;
   lucia: AppLucia;
-  /** The sign-in limiter: accepting an invite checks a secret too. */
-  limiter: RequestHandler;
+  /** The sign-in limit: accepting an invite checks a secret too. */
+  throttle: SignInThrottle;
 }): Router {
-  const { service, lucia, limiter } = deps;
+  const { service, lucia, throttle } = deps;
   const router = Router();
 
   // Public: the invite page shows whom the link is for before the password is set.
@@ -33,10 +34,10 @@ export function inviteAcceptanceRouter(deps: {
 
   router.post(
     '/auth/accept-invite',
-    limiter,
     validate({ body: AcceptInviteInputSchema }),
     async (req, res) => {
-      const session = await service.acceptInvite(req.body);
+      const address = req.ip ?? 'unknown';
+      const session = await throttle.attempt({ address }, () => service.acceptInvite(req.body));
       await startSession(lucia, res, session.id, 201);
     },
   );
