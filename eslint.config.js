@@ -32,8 +32,8 @@ const CLIENT_FEATURES = [
 const SERVER_LAYERS = [
   'workshops',
   'health',
-  'mail',
   'audit',
+  'mail',
   'users',
   'auth',
   'vessels',

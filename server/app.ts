@@ -24,6 +24,7 @@ import { healthRouter } from './features/health/health.router.js';
 import { devMailRouter } from './features/mail/dev-mail.router.js';
 import type { MailCatcher } from './features/mail/mail-catcher.js';
 import { Outbox } from './features/mail/outbox.js';
+import { outgoingMailRouter } from './features/mail/outgoing-mail.router.js';
 import { programsRouter } from './features/programs/programs.router.js';
 import { ProgramsService } from './features/programs/programs.service.js';
 import { engineRecordRouter } from './features/reminders/engine-record.router.js';
@@ -72,6 +73,8 @@ export type AppDeps = {
   /** Public origin (https://…) when behind a proxy; also decides Secure cookies. */
   publicOrigin?: string;
   signInLimit?: SignInLimit;
+  /** The mail outbox shared with the server's mail worker; made from `mailer` when absent. */
+  outbox?: Outbox;
   /** Express's `trust proxy`: which proxies' X-Forwarded-For to believe; none by default. */
   trustProxy?: string | number | false;
   /** Largest JSON body accepted by ordinary routes. */
@@ -107,7 +110,7 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   const { dataSource: db, publicOrigin } = deps;
   const clock = deps.clock ?? systemClock;
   const dataDir = deps.dataDir ?? loadConfig().dataDir;
-  const outbox = new Outbox(deps.mailer ?? null, deps.logger);
+  const outbox = deps.outbox ?? new Outbox(db, deps.mailer ?? null, deps.logger, clock);
   const throttle = new SignInThrottle(db, deps.signInLimit ?? DEFAULT_SIGN_IN_LIMIT, clock);
   const api = express.Router();
   api.use(jsonBodies(deps.jsonLimit ?? '100kb'), originCheck(publicOrigin), loadSession(lucia));
@@ -115,6 +118,7 @@ function apiRouter(deps: AppDeps, lucia: AppLucia): Router {
   api.use('/auth', authRouter(new AuthService(db, lucia), lucia, throttle));
   const team = new TeamService(db, lucia, clock);
   api.use(teamRouter({ service: team, publicOrigin, outbox }));
+  api.use(outgoingMailRouter(db, outbox, clock));
   api.use(inviteAcceptanceRouter({ service: team, lucia, throttle }));
   const recordChecks: VesselRecordChecks = { hasOpenRun, checklistsOf, latestRunsOf };
   const vessels = new VesselsService(db, recordChecks, clock);

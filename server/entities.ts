@@ -2,6 +2,7 @@ import { Attachment } from './features/attachments/attachment.entity.js';
 import { AuditEntry } from './features/audit/audit-entry.entity.js';
 import { CommissioningChecklist } from './features/checklists/checklist.entity.js';
 import { Program } from './features/programs/program.entity.js';
+import { OutgoingMail } from './features/mail/outgoing-mail.entity.js';
 import { ServiceRecord } from './features/reminders/service-record.entity.js';
 import { ServiceReminder } from './features/reminders/service-reminder.entity.js';
 import { RunSummary, RunSummaryMark } from './features/review/run-summary.entity.js';
@@ -38,6 +39,7 @@ export const ENTITIES = [
   CommissioningChecklist,
   Attachment,
   AuditEntry,
+  OutgoingMail,
   RunReview,
   Certificate,
   RunSummary,

@@ -8,11 +8,11 @@ import { loadConfig } from './lib/config.js';
 import { openDatabase } from './lib/database.js';
 import { startWalCheckpointer } from './lib/wal-checkpointer.js';
 import { createLogger, type Logger } from './lib/logger.js';
-import type { Mailer } from './lib/mailer.js';
 import { refuseEmptyDatabase, refuseMissingDatabase, StartRefused } from './first-run.js';
 import { prepareData } from './prepare-data.js';
 import { systemClock } from './lib/clock.js';
 import { startMail } from './features/mail/start-mail.js';
+import { MailWorker } from './features/mail/mail-worker.js';
 import { Outbox } from './features/mail/outbox.js';
 import { DEFAULT_REMINDER_INTERVAL_MS, ReminderJob } from './features/reminders/reminder-job.js';
 import { ServiceDueService } from './features/reminders/service-due.service.js';
@@ -43,6 +43,9 @@ async function main() {
     systemClock.now(),
   );
   const mail = await startMail({ production: config.production, dataDir: config.dataDir, logger });
+  const outbox = new Outbox(dataSource, mail.mailer, logger, systemClock);
+  const mailWorker = new MailWorker(outbox, logger);
+  mailWorker.start();
   const app = createApp({
     dataSource,
     logger,
@@ -51,9 +54,10 @@ async function main() {
     trustProxy: config.trustProxy,
     dataDir: config.dataDir,
     mailer: mail.mailer,
+    outbox,
     mailbox: mail.mailbox,
   });
-  const reminders = reminderJob(dataSource, logger, mail.mailer);
+  const reminders = reminderJob(dataSource, logger, outbox);
   reminders.start();
   const server = app.listen(config.port, config.host, () => {
     logger.info(
@@ -62,6 +66,7 @@ async function main() {
   });
   closeOnSignal(server, logger, [
     () => reminders.stop(),
+    () => mailWorker.stop(),
     () => mail.close(),
     () => checkpointer.stop(),
     () => dataSource.destroy(),
@@ -69,13 +74,13 @@ async function main() {
 }
 
 /** The first-service reminders, every RINGSEAT_REMINDER_MINUTES when set, else once an hour. */
-function reminderJob(dataSource: DataSource, logger: Logger, mailer: Mailer | null): ReminderJob {
+function reminderJob(dataSource: DataSource, logger: Logger, outbox: Outbox): ReminderJob {
   const reminderMinutes = Number(process.env.RINGSEAT_REMINDER_MINUTES);
   return new ReminderJob({
     dataSource,
     logger,
     clock: systemClock,
-    outbox: new Outbox(mailer, logger),
+    outbox,
     serviceDue: new ServiceDueService(dataSource, new RunSummaries(dataSource), systemClock),
     intervalMs: reminderMinutes > 0 ? reminderMinutes * 60_000 : DEFAULT_REMINDER_INTERVAL_MS,
   });

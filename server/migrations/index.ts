@@ -8,6 +8,7 @@ import { RunEventLeanIndexes1796250000000 } from './1796250000000-RunEventLeanIn
 import { ReturnsAndVoids1796300000000 } from './1796300000000-ReturnsAndVoids.js';
 import { ServiceRecords1796300100000 } from './1796300100000-ServiceRecords.js';
 import { SignInFailures1796400000000 } from './1796400000000-SignInFailures.js';
+import { OutgoingMail1796400100000 } from './1796400100000-OutgoingMail.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
 export const MIGRATIONS: Function[] = [
@@ -21,4 +22,5 @@ export const MIGRATIONS: Function[] = [
   ReturnsAndVoids1796300000000,
   ServiceRecords1796300100000,
   SignInFailures1796400000000,
+  OutgoingMail1796400100000,
 ];

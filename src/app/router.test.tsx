@@ -89,6 +89,7 @@ describe('app routes', () => {
         status: 200,
         body: { users: [{ ...manager, createdAt: '2026-01-05T10:00:00Z' }], invites: [] },
       },
+      'GET /api/mail/outgoing': { status: 200, body: { mail: [] } },
     });
     const user = userEvent.setup();
 
@@ -100,6 +101,7 @@ describe('app routes', () => {
 
     expect(await screen.findByRole('heading', { level: 1, name: 'Team' })).toBeInTheDocument();
     expect(await screen.findByText('No invites are waiting.')).toBeInTheDocument();
+    expect(await screen.findByText('No e-mail has gone out yet.')).toBeInTheDocument();
   });
 
   it('shows a skipper their vessels, engines and the running caution', async () => {

@@ -23,6 +23,12 @@ export async function inviteSkipper(page: Page, email: string, vesselName: strin
   expect(await vessel.isChecked()).toBe(true);
   await card.getByRole('button', { name: 'Send invite' }).click();
   await visible(page.getByRole('status').filter({ hasText: `Invite created for ${email}` }));
+  const outgoing = page
+    .getByRole('region', { name: 'Outgoing e-mail' })
+    .getByRole('listitem')
+    .filter({ hasText: `To ${email}` });
+  await visible(outgoing);
+  expect(await outgoing.textContent()).toContain('Sent');
 
   await page.goto('/dev/mail');
   await waitForHome(page, 'Local mailbox');

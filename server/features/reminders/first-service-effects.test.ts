@@ -41,7 +41,7 @@ function job() {
       new RunSummaries(server.dataSource),
       clock,
     ),
-    outbox: new Outbox(mailer, createLogger('silent')),
+    outbox: new Outbox(server.dataSource, mailer, createLogger('silent'), clock),
     clock,
     logger: createLogger('silent'),
   });

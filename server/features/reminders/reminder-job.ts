@@ -5,7 +5,7 @@ import type { Clock } from '../../lib/clock.js';
 import type { Logger } from '../../lib/logger.js';
 import { recordAudit } from '../audit/audit.service.js';
 import { appLink, serviceReminderMail } from '../mail/mail-templates.js';
-import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
+import type { Outbox } from '../mail/outbox.js';
 import { skippersOf } from '../runs/run-context.js';
 import { Workshop } from '../workshops/workshop.entity.js';
 import { ServiceReminder } from './service-reminder.entity.js';
@@ -87,27 +87,22 @@ export class ReminderJob {
     return sent;
   }
 
+  /**
+   * Puts the reminder into the outbox and keeps it as reminded, in one transaction, so it is
+   * never lost and never sent twice; the outbox sends it now or, failing that, later.
+   */
   private async remind(workshop: Workshop, due: EngineServiceDue): Promise<boolean> {
     const skippers = await skippersOf(this.deps.dataSource, due.engine.vesselId);
     const to = [...new Set([...skippers.map((s) => s.email), workshop.email].filter(Boolean))];
     const link = appLink(`/engines/${due.engine.id}`, this.deps.origin);
-    const outcome = await this.deps.outbox.send(workshop.id, reminderMail(workshop, due, to, link));
-    if (!outcome.sent) {
-      this.deps.logger.warn(
-        { engineId: due.engine.id, problem: outcome.problem },
-        'service reminder not sent; will try again',
-      );
-      return false;
-    }
-    await this.record(workshop, due, outcome);
-    return true;
-  }
-
-  /** Keeps the reminder as sent, with the trail entry, so it is never sent again. */
-  private async record(workshop: Workshop, due: EngineServiceDue, outcome: MailOutcome) {
     const status = due.firstService!;
     const now = this.deps.clock.now();
-    await this.deps.dataSource.transaction(async (manager) => {
+    const mailId = await this.deps.dataSource.transaction(async (manager) => {
+      const id = await this.deps.outbox.enqueue(
+        manager,
+        workshop.id,
+        reminderMail(workshop, due, to, link),
+      );
       await manager.getRepository(ServiceReminder).insert({
         id: randomUUID(),
         workshopId: workshop.id,
@@ -117,7 +112,7 @@ export class ReminderJob {
         dueAtHours: status.dueAtHours,
         dueOn: status.dueOn,
         sentAt: now,
-        recipients: outcome.to,
+        recipients: to,
       });
       await recordAudit(manager, {
         workshopId: workshop.id,
@@ -126,9 +121,17 @@ export class ReminderJob {
         action: 'service-reminder-sent',
         actor: null,
         at: now,
-        detail: outcomeWords('First-service reminder', outcome),
+        detail: `First-service reminder to ${to.join(', ')}`,
       });
+      return id;
     });
+    const [outcome] = await this.deps.outbox.deliver([mailId]);
+    if (!outcome.sent)
+      this.deps.logger.warn(
+        { engineId: due.engine.id, problem: outcome.problem },
+        'service reminder waits in the outbox',
+      );
+    return true;
   }
 }
 

@@ -1,6 +1,7 @@
 import { firstServiceWords } from '../../../shared/review/certificate-words.js';
 import { appLink, certificateMail, engineTitle, returnedMail } from '../mail/mail-templates.js';
-import { outcomeWords, type MailOutcome, type Outbox } from '../mail/outbox.js';
+import type { MailMessage } from '../../lib/mailer.js';
+import type { MailAbout } from '../mail/outbox.js';
 import { firstServiceCalendar } from '../mail/service-calendar.js';
 import type { RunContext } from '../runs/run-context.js';
 
@@ -43,44 +44,35 @@ const commonParts = (ctx: RunContext, reviewer: { name: string }, link: string) 
 });
 
 /**
- * Tells the vessel's skippers what the workshop decided: the certificate (and the first service as
- * a calendar file) attached, or the reasons to carry on; either way with a link to the run.
+ * The e-mail that tells the vessel's skippers what the workshop decided: the certificate (and
+ * the first service as a calendar file) attached, or the reasons to carry on; either way with a
+ * link to the run. It goes into the outbox with the decision, in the same transaction.
  */
-export async function mailDecision(
-  outbox: Outbox,
+export function decisionMail(
   ctx: RunContext,
   reviewer: { name: string },
   comments: string,
   certificate: { number: string; pdf: Buffer } | null,
   options: DecisionMailOptions = {},
-): Promise<{ outcome: MailOutcome; sent: boolean; words: string }> {
+): { message: MailMessage; about: MailAbout } {
   const link = appLink(`/runs/${ctx.run.id}`, options.origin);
   const common = commonParts(ctx, reviewer, link);
-  const outcome = certificate
-    ? await outbox.send(
-        ctx.workshop.id,
-        certificateMail({
-          ...common,
-          number: certificate.number,
-          pdf: certificate.pdf,
-          firstServiceWords: ctx.firstService
-            ? firstServiceWords(ctx.firstService)
-            : 'ask the workshop',
-          calendar: calendarOf(ctx, link, options.now),
-        }),
-      )
-    : await outbox.send(
-        ctx.workshop.id,
-        returnedMail({
-          ...common,
-          comments,
-          reasons: ctx.account.phases.flatMap((p) => p.reasons.map((r) => r.message)),
-          rerunPhaseNames: options.rerunPhaseNames,
-        }),
-      );
-  const words = outcomeWords(
-    certificate ? `Certificate ${certificate.number} e-mailed` : 'Return e-mailed',
-    outcome,
-  );
-  return { outcome, sent: outcome.sent, words };
+  const message = certificate
+    ? certificateMail({
+        ...common,
+        number: certificate.number,
+        pdf: certificate.pdf,
+        firstServiceWords: ctx.firstService
+          ? firstServiceWords(ctx.firstService)
+          : 'ask the workshop',
+        calendar: calendarOf(ctx, link, options.now),
+      })
+    : returnedMail({
+        ...common,
+        comments,
+        reasons: ctx.account.phases.flatMap((p) => p.reasons.map((r) => r.message)),
+        rerunPhaseNames: options.rerunPhaseNames,
+      });
+  const what = certificate ? `Certificate ${certificate.number} e-mailed` : 'Return e-mailed';
+  return { message, about: { recordType: 'run', recordId: ctx.run.id, what } };
 }

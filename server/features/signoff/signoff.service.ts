@@ -11,7 +11,7 @@ import { User } from '../users/user.entity.js';
 import { writeCertificateFile } from './certificate-files.js';
 import type { CertificateStore } from './certificate-store.js';
 import { Certificate } from './certificate.entity.js';
-import { mailDecision } from './decision-mail.js';
+import { decisionMail } from './decision-mail.js';
 import { checkDecision, forEngine, type CheckedDecision } from './signoff-checks.js';
 import type { Reviewer } from './signoff-records.js';
 import { confirmRun, phaseNames, returnRun, type Written } from './signoff-writes.js';
@@ -58,25 +58,38 @@ export class SignOffService {
     return results.map((result, i) => ({ runId: checked[i].ctx.run.id, ...result }));
   }
 
+  /**
+   * Writes every decision and its e-mail to the skippers in one transaction, then tries the
+   * e-mails at once; what the mail server did not take waits in the outbox for the worker.
+   */
   private async decideAll(user: SessionUser, decisions: CheckedDecision[]) {
     const person = await this.dataSource.getRepository(User).findOneByOrFail({ id: user.id });
     const reviewer: Reviewer = { id: person.id, name: person.name, role: person.role };
     const now = this.clock.now();
     const written: string[] = [];
-    let saved: Written[];
+    let saved: Array<Written & { mailId: string }>;
     try {
       saved = await this.dataSource.transaction(async (manager) => {
-        const out: Written[] = [];
-        for (const d of decisions) out.push(await this.write(manager, written, d, reviewer, now));
+        const out: Array<Written & { mailId: string }> = [];
+        for (const d of decisions) {
+          const decided = await this.write(manager, written, d, reviewer, now);
+          out.push({ ...decided, mailId: await this.enqueueMail(manager, d, reviewer, decided) });
+        }
         return out;
       });
     } catch (error) {
       for (const relative of written) this.store.remove(relative);
       throw error;
     }
-    const results: DecisionResult[] = [];
-    for (const [i, d] of decisions.entries()) results.push(await this.tell(d, reviewer, saved[i]));
-    return results;
+    const mail = await this.outbox.deliver(saved.map((s) => s.mailId));
+    return saved.map((decided, i): DecisionResult => ({
+      state: decided.state,
+      certificate: decided.certificate && {
+        number: decided.certificate.number,
+        downloadUrl: `/api/runs/${decisions[i].ctx.run.id}/certificate`,
+      },
+      mail: mail[i],
+    }));
   }
 
   private write(
@@ -92,41 +105,17 @@ export class SignOffService {
       : returnRun(manager, this.recount, { ...decision, rerunPhaseIds });
   }
 
-  /** After the decision is on disk: the e-mail to the skipper, and whether it went, in the trail. */
-  private async tell(
+  /** The e-mail to the skippers, into the outbox in the decision's own transaction. */
+  private enqueueMail(
+    manager: EntityManager,
     { ctx, input, rerunPhaseIds }: CheckedDecision,
     reviewer: Reviewer,
     decided: Written,
-  ): Promise<DecisionResult> {
-    const mail = await mailDecision(
-      this.outbox,
-      ctx,
-      reviewer,
-      input.comments,
-      decided.certificate,
-      {
-        rerunPhaseNames: phaseNames(ctx, rerunPhaseIds),
-      },
-    );
-    await this.dataSource.transaction((manager) =>
-      recordAudit(manager, {
-        workshopId: ctx.run.workshopId,
-        recordType: 'run',
-        recordId: ctx.run.id,
-        action: mail.sent ? 'mail-sent' : 'mail-failed',
-        actor: null,
-        at: this.clock.now(),
-        detail: mail.words,
-      }),
-    );
-    return {
-      state: decided.state,
-      certificate: decided.certificate && {
-        number: decided.certificate.number,
-        downloadUrl: `/api/runs/${ctx.run.id}/certificate`,
-      },
-      mail: mail.outcome,
-    };
+  ): Promise<string> {
+    const { message, about } = decisionMail(ctx, reviewer, input.comments, decided.certificate, {
+      rerunPhaseNames: phaseNames(ctx, rerunPhaseIds),
+    });
+    return this.outbox.enqueue(manager, ctx.workshop.id, message, about);
   }
 
   /** The certificate PDF for anyone who may see the run; each download goes into the trail. */

@@ -1,5 +1,6 @@
 import { useUsers } from '../../features/team/api';
 import { InviteForm } from '../../features/team/components/invite-form';
+import { OutgoingMailList } from '../../features/team/components/outgoing-mail';
 import { PendingInvites, PeopleTable } from '../../features/team/components/team-lists';
 import { useVessels } from '../../features/vessels/api';
 import { ButtonLink } from '../../components/ui/button-link';
@@ -49,6 +50,16 @@ function ManagerTeam() {
               Pending invites
             </h2>
             {team.data && <PendingInvites invites={team.data.invites} />}
+          </section>
+          <section className="flex flex-col gap-3" aria-labelledby="mail-heading">
+            <h2 id="mail-heading" className="text-xl font-bold">
+              Outgoing e-mail
+            </h2>
+            <p className="text-muted">
+              Invites, certificates, returns and service reminders. What the mail server did not
+              take waits here and is tried again automatically.
+            </p>
+            <OutgoingMailList />
           </section>
         </div>
         <Card title="Invite someone" className="self-start">

@@ -1,5 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { InviteInput, Role } from '../../../shared/auth/auth.schema';
+import type { OutgoingMailView } from '../../../shared/mail/outgoing-mail';
 import { api } from '../../lib/api-client';
 
 export interface TeamMember {
@@ -47,7 +48,8 @@ export function useInvite() {
   return useMutation({
     mutationKey: teamKeys.sendInvite(),
     mutationFn: (input: InviteInput) => api.post<SentInvite>('/api/invites', input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.users() }),
+    // The team list and the outgoing e-mail both show the new invite.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
   });
 }
 
@@ -56,3 +58,24 @@ export const roleLabel: Record<Role, string> = {
   technician: 'Technician',
   manager: 'Manager',
 };
+
+export const mailKeys = {
+  outgoing: () => [...teamKeys.all, 'outgoing-mail'] as const,
+};
+
+/** The workshop's outbox: what went, what waits and why (managers only). Refreshed each minute. */
+export const useOutgoingMail = () =>
+  useQuery({
+    queryKey: mailKeys.outgoing(),
+    queryFn: ({ signal }) => api.get<{ mail: OutgoingMailView[] }>('/api/mail/outgoing', signal),
+    refetchInterval: 60_000,
+  });
+
+export function useRetryMail() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) =>
+      api.post<{ mail: OutgoingMailView }>(`/api/mail/outgoing/${id}/retry`, {}),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: mailKeys.outgoing() }),
+  });
+}
