@@ -12,10 +12,17 @@ import type { DataSource, EntityManager } from 'typeorm';
 
 export type NativeStatement = Statement<unknown[], unknown>;
 
+/** Where a native statement runs: TypeORM's connection, or a better-sqlite3 one of its own (a worker thread's). */
+export type NativeDb = DataSource | EntityManager | Database;
+
+const isDatabase = (db: NativeDb): db is Database =>
+  typeof (db as Database).prepare === 'function' && !('driver' in db) && !('connection' in db);
+
 const statements = new WeakMap<Database, Map<string, NativeStatement>>();
 
 /** better-sqlite3's connection under TypeORM (for bulk loads in benchmarks; the app uses nativeStatement). */
-export function nativeConnection(db: DataSource | EntityManager): Database {
+export function nativeConnection(db: NativeDb): Database {
+  if (isDatabase(db)) return db;
   const dataSource = 'connection' in db && db.connection !== undefined ? db.connection : db;
   return ((dataSource as DataSource).driver as unknown as { databaseConnection: Database })
     .databaseConnection;
@@ -26,7 +33,7 @@ export function nativeConnection(db: DataSource | EntityManager): Database {
  * as arrays in column order instead of objects (less to allocate for long runs).
  */
 export function nativeStatement(
-  db: DataSource | EntityManager,
+  db: NativeDb,
   sql: string,
   options: { raw?: boolean } = {},
 ): NativeStatement {

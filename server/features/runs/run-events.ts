@@ -1,9 +1,8 @@
-import type { DataSource, EntityManager } from 'typeorm';
 import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
-import { nativeStatement, placeholders } from '../../lib/native-sql.js';
+import { nativeStatement, type NativeDb, placeholders } from '../../lib/native-sql.js';
 import { EVENT_COLUMNS, eventFromRow, type EventColumnsRow } from './run-event-row.js';
 
-type Db = DataSource | EntityManager;
+type Db = NativeDb;
 
 /*
  * Events are read with prepared statements on TypeORM's own connection (lib/native-sql.ts), in

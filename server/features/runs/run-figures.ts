@@ -1,4 +1,6 @@
+import path from 'node:path';
 import type { DataSource } from 'typeorm';
+import type { NativeDb } from '../../lib/native-sql.js';
 import type { ResolvedPhase } from '../../../shared/programs/resolve-band.js';
 import { phaseCharts, type PhaseChart } from '../../../shared/review/chart-series.js';
 import type { LoggedEvent, VoidedMark } from '../../../shared/review/views.js';
@@ -6,6 +8,7 @@ import { orderEvents } from '../../../shared/runs/event-order.js';
 import { accountOrdered, type RunAccount } from '../../../shared/runs/run-accounting.js';
 import type { RunEvent } from '../../../shared/runs/run-event.schema.js';
 import type { Run } from './run.entity.js';
+import { figuresWorker } from './figures-worker.js';
 import { countRunEvents, latestHourMeters, loadRunEvents } from './run-events.js';
 import { voidMarks } from './run-voids.js';
 
@@ -60,8 +63,8 @@ function loggedEvents(
 }
 
 export async function computeRunFigures(
-  dataSource: DataSource,
-  run: Run,
+  dataSource: NativeDb,
+  run: Pick<Run, 'id' | 'engineId'>,
   phases: ResolvedPhase[],
 ): Promise<RunFigures> {
   const { events } = (await loadRunEvents(dataSource, [run.id])).get(run.id)!;
@@ -86,31 +89,57 @@ export async function computeRunFigures(
 /**
  * The figures of the runs looked at lately, kept while their events do not change. Events are
  * only ever added, so an unchanged count means unchanged figures (counting uses the run's index
- * and costs a millisecond; working the figures out again for 36,000 readings costs a hundred or
- * more). Kept per process, for a handful of runs.
+ * and costs a millisecond). New figures are worked out in the figures thread, off the event
+ * loop, and requests for the same run and count share one working-out; with no database file
+ * (an in-memory database) or no thread, they are worked out here.
  */
 export class RunFiguresCache {
   private readonly kept = new Map<string, RunFigures>();
+  private readonly working = new Map<string, { key: string; figures: Promise<RunFigures> }>();
+  private readonly databasePath: string | null;
 
   constructor(
     private readonly dataSource: DataSource,
     private readonly capacity = 16,
-  ) {}
+  ) {
+    const file = String(dataSource.options.database ?? ':memory:');
+    this.databasePath = file === ':memory:' ? null : path.resolve(file);
+  }
 
   async get(run: Run, phases: ResolvedPhase[]): Promise<RunFigures> {
     const count = countRunEvents(this.dataSource, run.id);
     const hit = this.kept.get(run.id);
     // A return changes how the run counts without a new event: the phases say so.
-    if (hit && hit.eventCount === count && samePhases(hit.phases, phases)) {
+    if (hit && hit.eventCount >= count && samePhases(hit.phases, phases)) {
       this.kept.delete(run.id);
       this.kept.set(run.id, hit);
       return hit;
     }
-    const figures = await computeRunFigures(this.dataSource, run, phases);
-    this.kept.delete(run.id);
-    this.kept.set(run.id, figures);
+    const key = `${count}|${phases.map((p) => p.countsFromMs).join(',')}`;
+    const underway = this.working.get(run.id);
+    if (underway?.key === key) return underway.figures;
+    const figures = this.workOut(run, phases);
+    this.working.set(run.id, { key, figures });
+    try {
+      const done = await figures;
+      this.keep(run.id, done);
+      return done;
+    } finally {
+      if (this.working.get(run.id)?.figures === figures) this.working.delete(run.id);
+    }
+  }
+
+  private workOut(run: Run, phases: ResolvedPhase[]): Promise<RunFigures> {
+    const here = () => computeRunFigures(this.dataSource, run, phases);
+    if (!this.databasePath) return here();
+    const { id, engineId } = run;
+    return figuresWorker.compute(this.databasePath, { id, engineId }, phases).catch(here);
+  }
+
+  private keep(runId: string, figures: RunFigures) {
+    this.kept.delete(runId);
+    this.kept.set(runId, figures);
     if (this.kept.size > this.capacity) this.kept.delete(this.kept.keys().next().value!);
-    return figures;
   }
 }
 

@@ -1,10 +1,9 @@
-import type { DataSource, EntityManager } from 'typeorm';
 import type { VoidedMark } from '../../../shared/review/views.js';
 import type { RunEvent, VoidEvent } from '../../../shared/runs/run-event.schema.js';
 import { voidsByTarget } from '../../../shared/runs/voids.js';
-import { nativeStatement } from '../../lib/native-sql.js';
+import { nativeStatement, type NativeDb } from '../../lib/native-sql.js';
 
-type Db = DataSource | EntityManager;
+type Db = NativeDb;
 
 const VOIDS_SQL = `SELECT e."body", e."authorId", u."name" FROM "run_event" e
   LEFT JOIN "user" u ON u."id" = e."authorId" WHERE e."runId" = ? AND e."kind" = 'void'`;

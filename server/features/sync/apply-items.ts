@@ -1,3 +1,4 @@
+import { nextTurn } from '../../lib/next-turn.js';
 import type { EntityManager } from 'typeorm';
 import type { SessionUser } from '../../../shared/auth/auth.schema.js';
 import type { RunEvent, VoidEvent } from '../../../shared/runs/run-event.schema.js';
@@ -178,12 +179,20 @@ function refusalOf(
 }
 
 /** Decides every item in batch order, writing new events in bulk (before a submit, and at the end). */
+/** Items handled between two chances for other requests to run. */
+const TURN = 100;
+
 export async function applyItems(manager: EntityManager, ctx: Context): Promise<Applied> {
   const out: Applied = { results: new Array(ctx.items.length), touched: new Set<Run>() };
   const pending: Candidate[] = [];
   const batch: BatchEntries = { entries: new Map(), voided: new Set() };
   const store = eventStore(manager);
   for (const [index, item] of ctx.items.entries()) {
+    if (index > 0 && index % TURN === 0) {
+      // A long batch lets other requests (health, pages) in between; reads go on meanwhile.
+      await flush(manager, ctx, pending, out);
+      await nextTurn();
+    }
     const run = ctx.runs.get(item.runId)!;
     if (item.type === 'run-patch') {
       if (item.submit) await flush(manager, ctx, pending, out);

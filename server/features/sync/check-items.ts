@@ -1,3 +1,4 @@
+import { nextTurn } from '../../lib/next-turn.js';
 import {
   PushItemSchema,
   type PushItem,
@@ -7,25 +8,35 @@ import { fieldErrors } from '../../middleware/validate.js';
 
 export type Checked = { index: number; item: PushItem } | { index: number; rejected: PushResult };
 
-/** Checks each item on its own: an invalid item is rejected with its reason, the others go on. */
-export function checkItems(items: unknown[]): Checked[] {
-  return items.map((raw, index) => {
-    const parsed = PushItemSchema.safeParse(raw);
-    if (parsed.success) return { index, item: parsed.data };
-    const [first] = fieldErrors(parsed.error);
-    const id =
-      typeof raw === 'object' && raw !== null
-        ? String(
-            (raw as { id?: unknown; event?: { id?: unknown } }).event?.id ??
-              (raw as { id?: unknown }).id ??
-              `#${index}`,
-          )
-        : `#${index}`;
-    return {
-      index,
-      rejected: { id, status: 'rejected', reason: first.message, field: first.field },
-    };
-  });
+/**
+ * Checks each item on its own: an invalid item is rejected with its reason, the others go on.
+ * A few hundred at a time, letting other requests in between.
+ */
+export async function checkItems(items: unknown[]): Promise<Checked[]> {
+  const checked: Checked[] = [];
+  for (let from = 0; from < items.length; from += 100) {
+    if (from > 0) await nextTurn();
+    items.slice(from, from + 100).forEach((raw, i) => checked.push(checkItem(raw, from + i)));
+  }
+  return checked;
+}
+
+function checkItem(raw: unknown, index: number): Checked {
+  const parsed = PushItemSchema.safeParse(raw);
+  if (parsed.success) return { index, item: parsed.data };
+  const [first] = fieldErrors(parsed.error);
+  const id =
+    typeof raw === 'object' && raw !== null
+      ? String(
+          (raw as { id?: unknown; event?: { id?: unknown } }).event?.id ??
+            (raw as { id?: unknown }).id ??
+            `#${index}`,
+        )
+      : `#${index}`;
+  return {
+    index,
+    rejected: { id, status: 'rejected', reason: first.message, field: first.field },
+  };
 }
 
 /** The runs the well-formed items name, each once. */

@@ -119,7 +119,7 @@ export class SyncService {
     user: SessionUser,
     batch: PushBatch,
   ): Promise<{ results: PushResult[]; serverTime: number }> {
-    const parsed = checkItems(batch.items);
+    const parsed = await checkItems(batch.items);
     const runs = await this.visibleAmong(user, namedRunIds(parsed));
     const checked = refuseUnseenRuns(parsed, runs);
     const valid = checked.filter((c): c is { index: number; item: PushItem } => 'item' in c);
