@@ -30,7 +30,7 @@ interface SiteHeaderProps {
 export function SiteHeader({ user, home, nav, signOut }: SiteHeaderProps) {
   return (
     <header className="border-b-2 border-line bg-surface">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2 sm:flex-nowrap sm:px-5">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2 sm:px-5">
         {home(
           'flex min-h-touch items-center gap-2 text-xl font-bold no-underline',
           <>
