@@ -40,7 +40,7 @@ export function refuseMissingDatabase(
   const found = state === 'missing' ? 'there is no file there' : 'the file there is empty';
   throw new StartRefused(
     `No database at ${config.databasePath}: ${found}. In production Ringseat does not make a new ` +
-      'one by itself. Put the right file back there, point RINGSEAT_DB at it, ' +
+      'one by itself. Put the right file back there (npm run db:restore), point RINGSEAT_DB at it, ' +
       `or create the first workshop with: ${CREATE_COMMAND}`,
   );
 }
