@@ -15,6 +15,16 @@ import {
 
 type Place = { databasePath: string; dataDir: string };
 
+/** Puts a file's content on disk before the command says it is done. */
+function flush(file: string) {
+  const handle = fs.openSync(file, 'r');
+  try {
+    fs.fsyncSync(handle);
+  } finally {
+    fs.closeSync(handle);
+  }
+}
+
 const stamp = () => new Date().toISOString().replace(/[:.]/g, '-');
 
 /** Writes one archive into `outDir` and returns its path and manifest. */
@@ -32,9 +42,7 @@ export async function createBackup(place: Place, outDir: string) {
     const archive = path.join(outDir, `ringseat-backup-${stamp()}.tar.gz`);
     const partial = `${archive}.part`;
     await tar.c({ gzip: true, file: partial, cwd: staged, portable: true }, filesUnder(staged));
-    const handle = fs.openSync(partial, 'r');
-    fs.fsyncSync(handle);
-    fs.closeSync(handle);
+    flush(partial);
     fs.renameSync(partial, archive);
     return { archive, manifest };
   } finally {
@@ -70,6 +78,7 @@ export async function restoreBackup(archive: string, place: Place, replace: bool
         fs.renameSync(place.databasePath + suffix, place.databasePath + suffix + aside);
     fs.mkdirSync(path.dirname(path.resolve(place.databasePath)), { recursive: true });
     fs.copyFileSync(path.join(unpacked, DATABASE_NAME), place.databasePath);
+    flush(place.databasePath);
     for (const folder of FILE_FOLDERS) {
       const target = path.join(place.dataDir, folder);
       if (fs.existsSync(target)) fs.renameSync(target, target + aside);

@@ -8,6 +8,11 @@ import { reading, uuid } from './test-records';
 /* How the deck cuts its outbox into batches, and what it does when a batch is refused whole. */
 
 type Sent = { items: Array<{ event: { id: string } }> };
+/** The server's answer when it stored every item of the batch. */
+const allStored = (items: Sent['items']) => ({
+  status: 200,
+  body: { results: items.map((i) => ({ id: i.event.id, status: 'stored' })), serverTime: 0 },
+});
 const empty = { cursor: 0, more: false, runIds: [], runs: [], events: [], vessels: [] };
 
 beforeEach(async () => {
@@ -37,13 +42,7 @@ describe('batches', () => {
         const { items } = request.body as Sent;
         sizes.push(items.length);
         if (items.length > 10) return problem(413, 'Too large', 'The batch is too large.');
-        return {
-          status: 200,
-          body: {
-            results: items.map((i) => ({ id: i.event.id, status: 'stored' })),
-            serverTime: 0,
-          },
-        };
+        return allStored(items);
       },
       'GET /api/sync/pull': { status: 200, body: empty },
     });
@@ -60,13 +59,7 @@ describe('batches', () => {
         const { items } = request.body as Sent;
         if (items.some((i) => i.event.id === bad))
           return problem(404, 'Not found', 'No run with id 11111111.');
-        return {
-          status: 200,
-          body: {
-            results: items.map((i) => ({ id: i.event.id, status: 'stored' })),
-            serverTime: 0,
-          },
-        };
+        return allStored(items);
       },
       'GET /api/sync/pull': { status: 200, body: empty },
     });
