@@ -38,6 +38,7 @@ const SERVER_LAYERS = [
   'auth',
   'vessels',
   'team',
+  'account',
   'checklists',
   'programs',
   'runs',

@@ -1,3 +1,4 @@
+import { PasswordReset } from './features/account/password-reset.entity.js';
 import { Attachment } from './features/attachments/attachment.entity.js';
 import { AuditEntry } from './features/audit/audit-entry.entity.js';
 import { CommissioningChecklist } from './features/checklists/checklist.entity.js';
@@ -28,6 +29,7 @@ export const ENTITIES = [
   Session,
   SignInFailure,
   Invite,
+  PasswordReset,
   Vessel,
   VesselSkipper,
   Engine,

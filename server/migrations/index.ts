@@ -9,6 +9,7 @@ import { ReturnsAndVoids1796300000000 } from './1796300000000-ReturnsAndVoids.js
 import { ServiceRecords1796300100000 } from './1796300100000-ServiceRecords.js';
 import { SignInFailures1796400000000 } from './1796400000000-SignInFailures.js';
 import { OutgoingMail1796400100000 } from './1796400100000-OutgoingMail.js';
+import { Accounts1796400200000 } from './1796400200000-Accounts.js';
 
 /** Migrations in the order they run. Add each new file here (the generator does not). */
 export const MIGRATIONS: Function[] = [
@@ -23,4 +24,5 @@ export const MIGRATIONS: Function[] = [
   ServiceRecords1796300100000,
   SignInFailures1796400000000,
   OutgoingMail1796400100000,
+  Accounts1796400200000,
 ];

@@ -11,6 +11,8 @@ import { createLogger } from '../../server/lib/logger.js';
 import { prepareData } from '../../server/prepare-data.js';
 import { DEMO_PASSWORD } from '../../server/demo/demo-people.js';
 
+export { DEMO_PASSWORD };
+
 export const HOST = 'ringseat.test';
 export const ORIGIN = `http://${HOST}`;
 

@@ -15,7 +15,7 @@ export class AuditEntry {
   @Column('text')
   workshopId: string;
 
-  /** 'run' or 'engine'. */
+  /** 'run', 'engine', 'user' (an account) or 'invite'. */
   @Column('text')
   recordType: string;
 

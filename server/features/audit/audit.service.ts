@@ -16,11 +16,28 @@ export type AuditAction =
   | 'entry-voided'
   | 'run-cancelled'
   | 'checklist-completed'
-  | 'checklist-reopened';
+  | 'checklist-reopened'
+  | AccountAction;
+
+/** What can happen to a person's account or to an invite; the team's account history lists them. */
+export const ACCOUNT_ACTIONS = [
+  'invite-sent',
+  'invite-resent',
+  'invite-revoked',
+  'invite-accepted',
+  'password-changed',
+  'password-reset-requested',
+  'password-reset',
+  'signed-out-everywhere',
+  'role-changed',
+  'account-deactivated',
+  'account-reactivated',
+] as const;
+export type AccountAction = (typeof ACCOUNT_ACTIONS)[number];
 
 export interface AuditInput {
   workshopId: string;
-  recordType: 'run' | 'engine';
+  recordType: 'run' | 'engine' | 'user' | 'invite';
   recordId: string;
   action: AuditAction;
   /** Null when the system acted on its own (a scheduled reminder). */

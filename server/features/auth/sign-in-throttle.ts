@@ -27,9 +27,13 @@ const COUNT_FAILURE = `INSERT INTO "sign_in_failure" ("key", "failures", "window
     "failures" = CASE WHEN "windowStartedAt" <= ? THEN 1 ELSE "failures" + 1 END,
     "windowStartedAt" = CASE WHEN "windowStartedAt" <= ? THEN excluded."windowStartedAt" ELSE "windowStartedAt" END`;
 
-/** Failures that mean a wrong guess: a wrong password (401) or a token that matches nothing (404). */
+/**
+ * Failures that mean a wrong guess: a wrong password at sign-in (401) or on the account page
+ * (slug wrong-password), or a token that matches nothing (404).
+ */
 const isWrongGuess = (error: unknown) =>
-  error instanceof HttpError && (error.status === 401 || error.status === 404);
+  error instanceof HttpError &&
+  (error.status === 401 || error.status === 404 || error.slug === 'wrong-password');
 
 export class SignInThrottle {
   constructor(

@@ -10,10 +10,11 @@ import type { CalendarFile } from './service-calendar.js';
  * links to the page that acts on it.
  */
 
-const SIGNATURE = (workshop: string) => `\n\n${workshop}\nSent by Ringseat, the break-in logbook.`;
+export const SIGNATURE = (workshop: string) =>
+  `\n\n${workshop}\nSent by Ringseat, the break-in logbook.`;
 
 /** Blocks of text, the missing ones left out, a blank line between. */
-const paragraphs = (...blocks: Array<string | null | undefined | false>) =>
+export const paragraphs = (...blocks: Array<string | null | undefined | false>) =>
   blocks.filter(Boolean).join('\n\n');
 
 const bullets = (heading: string, lines: readonly string[]) =>

@@ -12,7 +12,11 @@ export type MailOutcome =
   { sent: true; to: string[] } | { sent: false; to: string[]; problem: string };
 
 /** The record an e-mail is about, whose trail says whether it went. */
-export type MailAbout = { recordType: 'run' | 'engine'; recordId: string; what: string };
+export type MailAbout = {
+  recordType: 'run' | 'engine' | 'user' | 'invite';
+  recordId: string;
+  what: string;
+};
 
 /** Tries before the outbox gives up on an e-mail: about a day with the pauses below. */
 export const MAX_ATTEMPTS = 10;

@@ -19,7 +19,7 @@ export class OutgoingMail {
 
   /** The record whose trail gets "sent" or "not sent" (a run), when there is one. */
   @Column('text', { nullable: true })
-  recordType: 'run' | 'engine' | null;
+  recordType: 'run' | 'engine' | 'user' | 'invite' | null;
 
   @Column('text', { nullable: true })
   recordId: string | null;

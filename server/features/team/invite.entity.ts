@@ -45,6 +45,10 @@ export class Invite {
   @Column({ type: 'datetime', nullable: true })
   acceptedAt: Date | null;
 
+  /** When a manager withdrew the invite; its link then works no more. */
+  @Column({ type: 'datetime', nullable: true })
+  revokedAt: Date | null;
+
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
 }

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { In, type DataSource } from 'typeorm';
+import { In, IsNull, type DataSource } from 'typeorm';
 import type {
   AcceptInviteInput,
   InviteInput,
@@ -7,14 +7,17 @@ import type {
 } from '../../../shared/auth/auth.schema.js';
 import type { Clock } from '../../lib/clock.js';
 import { ConflictError, GoneError, NotFoundError, ValidationError } from '../../lib/errors.js';
+import { assertStrongPassword } from '../../lib/password-strength.js';
 import { hashPassword } from '../../lib/passwords.js';
 import { hashToken } from '../../lib/tokens.js';
+import { recordAudit } from '../audit/audit.service.js';
 import type { AppLucia } from '../auth/lucia.js';
 import { User } from '../users/user.entity.js';
 import { VesselSkipper } from '../vessels/vessel-skipper.entity.js';
 import { Vessel } from '../vessels/vessel.entity.js';
 import { Invite } from './invite.entity.js';
 import { newInvite } from './new-invite.js';
+import { personView } from './person-view.js';
 
 /** The workshop's people: the team list, and invites from the e-mail to the first sign-in. */
 export class TeamService {
@@ -32,30 +35,26 @@ export class TeamService {
       .getRepository(Invite)
       .find({ where: { workshopId }, order: { createdAt: 'DESC' } });
     return {
-      users: users.map((u) => ({
-        id: u.id,
-        email: u.email,
-        name: u.name,
-        role: u.role,
-        createdAt: u.createdAt.toISOString(),
-        archivedAt: u.archivedAt?.toISOString() ?? null,
-      })),
+      users: users.map(personView),
       invites: invites.map((i) => ({
         id: i.id,
         email: i.email,
         role: i.role,
         expiresAt: i.expiresAt.toISOString(),
         acceptedAt: i.acceptedAt?.toISOString() ?? null,
+        revokedAt: i.revokedAt?.toISOString() ?? null,
       })),
     };
   }
 
   /** Creates an invite and returns the one-time token; only its hash is stored. */
   async createInvite(inviter: SessionUser, input: InviteInput) {
-    if (await this.dataSource.getRepository(User).exists({ where: { email: input.email } })) {
-      throw new ConflictError('This e-mail address already has an account.', [
-        { field: 'email', message: 'This e-mail address already has an account.' },
-      ]);
+    const existing = await this.dataSource.getRepository(User).findOneBy({ email: input.email });
+    if (existing) {
+      const message = existing.archivedAt
+        ? 'This address belongs to a deactivated account; reactivate it in the People list instead.'
+        : 'This e-mail address already has an account.';
+      throw new ConflictError(message, [{ field: 'email', message }]);
     }
     if (input.vesselIds.length > 0) {
       const found = await this.dataSource
@@ -77,7 +76,18 @@ export class TeamService {
       },
       this.clock.now(),
     );
-    await this.dataSource.getRepository(Invite).insert(invite);
+    await this.dataSource.transaction(async (manager) => {
+      await manager.getRepository(Invite).insert(invite);
+      await recordAudit(manager, {
+        workshopId: inviter.workshopId,
+        recordType: 'invite',
+        recordId: invite.id,
+        action: 'invite-sent',
+        actor: { id: inviter.id, name: inviter.name },
+        at: this.clock.now(),
+        detail: `${invite.email} was invited as ${invite.role}.`,
+      });
+    });
     return { invite, token };
   }
 
@@ -101,6 +111,8 @@ export class TeamService {
       .getRepository(Invite)
       .findOne({ where: { tokenHash: hashToken(token) }, relations: { workshop: true } });
     if (!invite) throw new NotFoundError('invite');
+    if (invite.revokedAt)
+      throw new GoneError('This invite was withdrawn by the workshop. Ask them for a new one.');
     if (invite.acceptedAt)
       throw new GoneError('This invite has already been used. Sign in with the password you set.');
     if (invite.expiresAt.getTime() < this.clock.now().getTime()) {
@@ -112,6 +124,11 @@ export class TeamService {
   /** Creates the account, links the invited skipper's vessels and uses up the invite, all or nothing. */
   async acceptInvite(input: AcceptInviteInput) {
     const invite = await this.findOpenInvite(input.token);
+    await assertStrongPassword(input.password, 'password', [
+      invite.email,
+      input.name,
+      invite.workshop?.name ?? '',
+    ]);
     const passwordHash = await hashPassword(input.password);
     const userId = randomUUID();
     await this.dataSource.transaction(async (manager) => {
@@ -135,9 +152,23 @@ export class TeamService {
           .getRepository(VesselSkipper)
           .insert(invite.vesselIds.map((vesselId) => ({ vesselId, userId })));
       }
-      await manager
+      // Taken only while still open: two tabs sending the same link make one account.
+      const { affected } = await manager
         .getRepository(Invite)
-        .update({ id: invite.id }, { acceptedAt: this.clock.now() });
+        .update(
+          { id: invite.id, acceptedAt: IsNull(), revokedAt: IsNull() },
+          { acceptedAt: this.clock.now() },
+        );
+      if (affected !== 1) throw new GoneError('This invite has already been used.');
+      await recordAudit(manager, {
+        workshopId: invite.workshopId,
+        recordType: 'invite',
+        recordId: invite.id,
+        action: 'invite-accepted',
+        actor: { id: userId, name: input.name },
+        at: this.clock.now(),
+        detail: `${input.name} (${invite.email}) joined as ${invite.role}.`,
+      });
     });
     return this.lucia.createSession(userId, {});
   }

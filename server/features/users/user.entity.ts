@@ -39,6 +39,10 @@ export class User {
   @CreateDateColumn({ type: 'datetime' })
   createdAt: Date;
 
+  /** Null until the person first changes or resets the password they chose at the invite. */
+  @Column({ type: 'datetime', nullable: true })
+  passwordChangedAt: Date | null;
+
   @Column({ type: 'datetime', nullable: true })
   archivedAt: Date | null;
 }
