@@ -86,6 +86,7 @@ function signedInRoutes(queryClient: QueryClient): RouteObject[] {
     { path: 'runs', lazy: () => import('./routes/runs'), errorElement },
     { path: 'runs/:id', lazy: () => import('./routes/run'), errorElement },
     { path: 'runs/:id/review', lazy: () => import('./routes/run-review'), errorElement },
+    { path: 'account', lazy: () => import('./routes/account'), errorElement },
     { path: 'programs', lazy: () => import('./routes/programs'), errorElement },
     { path: 'programs/:id', lazy: () => import('./routes/program'), errorElement },
     { path: '*', lazy: () => import('./routes/not-found'), errorElement },
@@ -107,6 +108,12 @@ export function createRoutes(queryClient: QueryClient): RouteObject[] {
           errorElement,
         },
         { path: 'invite/:token', lazy: () => import('./routes/accept-invite'), errorElement },
+        { path: 'forgot-password', lazy: () => import('./routes/forgot-password'), errorElement },
+        {
+          path: 'reset-password/:token',
+          lazy: () => import('./routes/reset-password'),
+          errorElement,
+        },
         {
           id: 'session',
           loader: requireSession(queryClient),

@@ -64,6 +64,11 @@ export function DeckHeader({ user }: { user: SessionUser }) {
           {content}
         </a>
       )}
+      account={(className, content) => (
+        <a href="/account" className={className}>
+          {content}
+        </a>
+      )}
       nav={<DeckNav role={user.role} />}
       signOut={signOut}
     />

@@ -19,6 +19,8 @@ interface SiteHeaderProps {
   user: SessionUser;
   /** The link home around the mark, made by the app that renders the header. */
   home: (className: string, content: ReactNode) => ReactNode;
+  /** The link to the person's own account page (/account), made the same way. */
+  account: (className: string, content: ReactNode) => ReactNode;
   nav: ReactNode;
   signOut: SignOutControl;
 }
@@ -27,7 +29,7 @@ interface SiteHeaderProps {
  * The header both apps share, the workshop app and the deck app (src/deck): it knows no router
  * and no server-state library, so the deck can carry it without them.
  */
-export function SiteHeader({ user, home, nav, signOut }: SiteHeaderProps) {
+export function SiteHeader({ user, home, account, nav, signOut }: SiteHeaderProps) {
   return (
     <header className="border-b-2 border-line bg-surface">
       <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-4 gap-y-1 px-3 py-2 sm:px-5">
@@ -39,10 +41,16 @@ export function SiteHeader({ user, home, nav, signOut }: SiteHeaderProps) {
           </>,
         )}
         <div className="order-last w-full min-w-0 leading-tight sm:order-none sm:w-auto sm:border-l-2 sm:border-line sm:pl-4">
-          <p className="truncate font-semibold">{user.workshopName}</p>
-          <p className="truncate text-sm text-muted">
-            {user.name} · {roleWord[user.role]}
-          </p>
+          {account(
+            'flex min-h-touch flex-col justify-center no-underline',
+            <>
+              <span className="truncate font-semibold">{user.workshopName}</span>
+              <span className="truncate text-sm text-muted underline underline-offset-4">
+                {user.name} · {roleWord[user.role]}
+                <span className="sr-only"> (your account)</span>
+              </span>
+            </>,
+          )}
         </div>
         {nav}
         <div className="ml-auto flex items-center gap-2">

@@ -59,14 +59,14 @@ describe('accept invite page', () => {
     });
   });
 
-  it('explains an expired or used link', async () => {
+  it('explains an expired, used or withdrawn link in the server’s words', async () => {
     stubFetch({
       [`GET /api/invites/${token}`]: problem(410, 'Gone', 'This invite was already used.'),
     });
     renderInvite();
-    expect(await screen.findByRole('alert')).toHaveTextContent(
-      'This invite link has expired or was already used',
-    );
+    const alert = await screen.findByRole('alert');
+    expect(alert).toHaveTextContent('This invite link no longer works');
+    expect(alert).toHaveTextContent('This invite was already used.');
     expect(screen.queryByLabelText('Your name')).not.toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Go to sign in' })).toHaveAttribute('href', '/sign-in');
   });

@@ -11,12 +11,9 @@ import { AuthFrame } from '../shell/auth-frame';
 const roleLabel = { skipper: 'skipper', technician: 'technician', manager: 'manager' } as const;
 
 function deadLinkMessage(error: unknown): { title: string; detail: string } {
-  if (isApiError(error) && error.status === 410) {
-    return {
-      title: 'This invite link has expired or was already used',
-      detail: 'Ask your workshop to send a new invite.',
-    };
-  }
+  // The server says which: expired, already used, or withdrawn by the workshop.
+  if (isApiError(error) && error.status === 410)
+    return { title: 'This invite link no longer works', detail: error.message };
   if (isApiError(error) && error.status === 404) {
     return {
       title: 'This invite link is not valid',

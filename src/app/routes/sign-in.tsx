@@ -1,4 +1,4 @@
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { AuthFrame } from '../shell/auth-frame';
 import { safeNextPath } from '../../shell/sign-in-path';
@@ -12,7 +12,15 @@ export function SignInRoute() {
     <AuthFrame title="Sign in to Ringseat">
       <title>Sign in · Ringseat</title>
       <SignInForm onSignedIn={() => navigate(next, { replace: true })} />
-      <p className="mt-5 text-sm text-muted">
+      <p className="mt-5">
+        <Link
+          to="/forgot-password"
+          className="inline-flex min-h-touch items-center font-semibold underline underline-offset-4"
+        >
+          Forgot your password?
+        </Link>
+      </p>
+      <p className="mt-3 text-sm text-muted">
         New here? Your workshop sends you an invite link to set your password.
       </p>
     </AuthFrame>

@@ -1,7 +1,8 @@
 import { useUsers } from '../../features/team/api';
 import { InviteForm } from '../../features/team/components/invite-form';
 import { OutgoingMailList } from '../../features/team/components/outgoing-mail';
-import { PendingInvites, PeopleTable } from '../../features/team/components/team-lists';
+import { AccountHistory } from '../../features/team/components/account-history';
+import { PendingInvites, PeopleList } from '../../features/team/components/team-lists';
 import { useVessels } from '../../features/vessels/api';
 import { ButtonLink } from '../../components/ui/button-link';
 import { Card } from '../../components/ui/card';
@@ -25,6 +26,7 @@ export function TeamRoute() {
 }
 
 function ManagerTeam() {
+  const user = useSessionUser();
   const team = useUsers();
   const vessels = useVessels();
   const vesselOptions = (vessels.data ?? []).map(({ id, name }) => ({ id, name }));
@@ -43,7 +45,7 @@ function ManagerTeam() {
             {team.isError && (
               <LoadError error={team.error} what="the team" onRetry={() => team.refetch()} />
             )}
-            {team.data && <PeopleTable users={team.data.users} />}
+            {team.data && <PeopleList users={team.data.users} selfId={user.id} />}
           </section>
           <section className="flex flex-col gap-3" aria-labelledby="invites-heading">
             <h2 id="invites-heading" className="text-xl font-bold">
@@ -60,6 +62,12 @@ function ManagerTeam() {
               take waits here and is tried again automatically.
             </p>
             <OutgoingMailList />
+          </section>
+          <section className="flex flex-col gap-3" aria-labelledby="history-heading">
+            <h2 id="history-heading" className="text-xl font-bold">
+              Account changes
+            </h2>
+            <AccountHistory />
           </section>
         </div>
         <Card title="Invite someone" className="self-start">

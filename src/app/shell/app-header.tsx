@@ -17,6 +17,11 @@ export function AppHeader({ user }: { user: SessionUser }) {
           {content}
         </Link>
       )}
+      account={(className, content) => (
+        <Link to="/account" className={className}>
+          {content}
+        </Link>
+      )}
       nav={<MainNav role={user.role} />}
       signOut={{
         pending: signOut.isPending,

@@ -1,4 +1,5 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { AccountChange } from '../../../shared/auth/account.schema';
 import type { InviteInput, Role } from '../../../shared/auth/auth.schema';
 import type { OutgoingMailView } from '../../../shared/mail/outgoing-mail';
 import { api } from '../../lib/api-client';
@@ -9,6 +10,8 @@ export interface TeamMember {
   name: string;
   role: Role;
   createdAt: string;
+  /** When the person was deactivated; null while they may sign in. */
+  archivedAt: string | null;
 }
 
 export interface TeamInvite {
@@ -17,10 +20,11 @@ export interface TeamInvite {
   role: Role;
   expiresAt: string;
   acceptedAt: string | null;
+  revokedAt: string | null;
 }
 
 export interface SentInvite {
-  invite: Omit<TeamInvite, 'acceptedAt'>;
+  invite: Omit<TeamInvite, 'acceptedAt' | 'revokedAt'>;
   /** The link the invited person opens to set a password. */
   link: string;
 }
@@ -29,6 +33,7 @@ export const teamKeys = {
   all: ['team'] as const,
   users: () => [...teamKeys.all, 'users'] as const,
   sendInvite: () => [...teamKeys.all, 'send-invite'] as const,
+  history: () => [...teamKeys.all, 'history'] as const,
 };
 
 export const teamQueries = {
@@ -52,6 +57,38 @@ export function useInvite() {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
   });
 }
+
+/** Every change to people and invites: after one, the lists, the history and the outbox refresh. */
+function useTeamChange<T, V>(mutationFn: (variables: V) => Promise<T>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: teamKeys.all }),
+  });
+}
+
+export const useChangeRole = () =>
+  useTeamChange(({ id, role }: { id: string; role: Role }) =>
+    api.patch<TeamMember>(`/api/users/${id}`, { role }),
+  );
+
+export const useSetActive = () =>
+  useTeamChange(({ id, active }: { id: string; active: boolean }) =>
+    api.post<TeamMember>(`/api/users/${id}/${active ? 'reactivate' : 'deactivate'}`),
+  );
+
+export const useResendInvite = () =>
+  useTeamChange((id: string) => api.post<SentInvite>(`/api/invites/${id}/resend`));
+
+export const useRevokeInvite = () =>
+  useTeamChange((id: string) => api.post<unknown>(`/api/invites/${id}/revoke`));
+
+/** The team's account history, newest first (managers only). */
+export const useTeamHistory = () =>
+  useQuery({
+    queryKey: teamKeys.history(),
+    queryFn: ({ signal }) => api.get<{ changes: AccountChange[] }>('/api/team/history', signal),
+  });
 
 export const roleLabel: Record<Role, string> = {
   skipper: 'Skipper',
