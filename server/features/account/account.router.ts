@@ -31,7 +31,7 @@ const RESET_ANSWER = {
 
 /** The person's own account (signed in), and the forgotten-password links (open to anyone). */
 export function accountRouter(deps: AccountRouterDeps): Router {
-  const { account, resets, lucia, throttle } = deps;
+  const { account, lucia, throttle } = deps;
   const router = Router();
   const address = (req: Request) => req.ip ?? 'unknown';
 
@@ -57,6 +57,16 @@ export function accountRouter(deps: AccountRouterDeps): Router {
     res.append('Set-Cookie', lucia.createBlankSessionCookie().serialize());
     res.status(204).end();
   });
+
+  router.use(resetRoutes(deps));
+  return router;
+}
+
+/** "Forgot your password?": the link by e-mail, whom it is for, and the new password. */
+function resetRoutes(deps: AccountRouterDeps): Router {
+  const { resets, lucia, throttle } = deps;
+  const router = Router();
+  const address = (req: Request) => req.ip ?? 'unknown';
 
   router.post(
     '/auth/password-reset',
