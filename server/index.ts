@@ -17,7 +17,10 @@ import { Outbox } from './features/mail/outbox.js';
 import { DEFAULT_REMINDER_INTERVAL_MS, ReminderJob } from './features/reminders/reminder-job.js';
 import { ServiceDueService } from './features/reminders/service-due.service.js';
 import { RunSummaries } from './features/review/run-summaries.js';
-import { storeMissingCertificates } from './features/signoff/certificate-files.js';
+import {
+  removeUnissuedCertificateFiles,
+  storeMissingCertificates,
+} from './features/signoff/certificate-files.js';
 import { CertificateStore } from './features/signoff/certificate-store.js';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -35,13 +38,7 @@ async function main() {
   if ((await prepareData(dataSource, { demo: config.demo })).demoAdded) {
     logger.info('new database: demo workshop added (accounts are listed in README.md)');
   }
-  // The demo workshop's certificates are added as records; their PDFs are written once the data
-  // folder is known.
-  await storeMissingCertificates(
-    dataSource,
-    new CertificateStore(config.dataDir),
-    systemClock.now(),
-  );
+  await settleCertificateFiles(dataSource, config.dataDir, logger);
   const mail = await startMail({ production: config.production, dataDir: config.dataDir, logger });
   const outbox = new Outbox(dataSource, mail.mailer, logger, systemClock);
   const mailWorker = new MailWorker(outbox, logger);
@@ -71,6 +68,19 @@ async function main() {
     () => checkpointer.stop(),
     () => dataSource.destroy(),
   ]);
+}
+
+/**
+ * Certificate files in step with the records before any request: the demo workshop's PDFs
+ * (its certificates are added as records before the data folder is known) are written, and the
+ * PDFs of sign-offs cut short by a crash, which no record names, are removed.
+ */
+async function settleCertificateFiles(dataSource: DataSource, dataDir: string, logger: Logger) {
+  const store = new CertificateStore(dataDir);
+  await storeMissingCertificates(dataSource, store, systemClock.now());
+  const unissued = await removeUnissuedCertificateFiles(dataSource, store);
+  if (unissued.length > 0)
+    logger.warn({ files: unissued }, 'removed the certificate files of sign-offs cut short');
 }
 
 /** The first-service reminders, every RINGSEAT_REMINDER_MINUTES when set, else once an hour. */

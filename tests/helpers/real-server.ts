@@ -10,6 +10,8 @@ export type RealServer = {
   dir: string;
   output: () => string;
   stop: () => Promise<void>;
+  /** SIGKILL: the process gets no chance to close anything; the data folder stays as it was left. */
+  kill: () => Promise<void>;
 };
 
 export async function freePort(): Promise<number> {
@@ -60,7 +62,75 @@ export async function startRealServer(
       await exited;
       fs.rmSync(dir, { recursive: true, force: true });
     },
+    kill: async () => {
+      const tree = processTree(child.pid!);
+      for (const pid of tree) signal(pid, 'SIGKILL');
+      await exited;
+      await Promise.all(tree.map(untilGone));
+      const answered = await fetch(`${baseURL}/api/health`).then(
+        () => true,
+        () => false,
+      );
+      if (answered) throw new Error(`the server at ${baseURL} still answers after SIGKILL`);
+    },
   };
+}
+
+/** Kills the server with SIGKILL and starts a new one (on a new port) on the same data folder. */
+export async function killAndRestart(
+  server: RealServer,
+  env: Record<string, string> = {},
+): Promise<RealServer> {
+  await server.kill();
+  return startRealServer(env, [], server.dir);
+}
+
+/**
+ * The process and every process under it, deepest first: tsx's CLI runs the server in a child
+ * process of its own, which a SIGKILL to the CLI alone would leave running. Linux's /proc only;
+ * elsewhere just the process itself.
+ */
+function processTree(pid: number): number[] {
+  const children = readOr(() => fs.readdirSync(`/proc/${pid}/task`), [])
+    .flatMap((task) =>
+      readOr(() => fs.readFileSync(`/proc/${pid}/task/${task}/children`, 'utf8'), '').split(' '),
+    )
+    .filter((text) => text.trim() !== '')
+    .map(Number);
+  return [...children.flatMap(processTree), pid];
+}
+
+/** `read()`, or `otherwise` when what it reads has gone (a thread that ended, no /proc at all). */
+function readOr<T>(read: () => T, otherwise: T): T {
+  try {
+    return read();
+  } catch {
+    return otherwise;
+  }
+}
+
+function signal(pid: number, name: NodeJS.Signals) {
+  try {
+    process.kill(pid, name);
+  } catch {
+    // gone already
+  }
+}
+
+/** Waits until the process has gone (or is a zombie, which holds no files or ports), 5 s at most. */
+async function untilGone(pid: number) {
+  const deadline = Date.now() + 5000;
+  while (Date.now() < deadline) {
+    let state: string;
+    try {
+      state = fs.readFileSync(`/proc/${pid}/stat`, 'utf8').split(') ')[1]?.[0] ?? 'X';
+    } catch {
+      return;
+    }
+    if (state === 'Z' || state === 'X') return;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error(`process ${pid} still running 5 s after SIGKILL`);
 }
 
 /** Runs one of the database commands (`npm run db:…`) on a data folder, as an operator would. */

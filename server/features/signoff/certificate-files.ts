@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { renderCertificate } from './certificate-pdf.js';
 import type { CertificateStore } from './certificate-store.js';
+import { Workshop } from '../workshops/workshop.entity.js';
 import { Certificate } from './certificate.entity.js';
 
 /**
@@ -34,4 +35,24 @@ export async function storeMissingCertificates(
     stored++;
   }
   return stored;
+}
+
+/**
+ * Removes the files in each workshop's certificate folder that no certificate names. A sign-off
+ * writes its PDF just before its transaction commits (signoff-writes.ts), so a process killed in
+ * between leaves the PDF (or its .partial) of a certificate that was never issued, bearing a
+ * number the next sign-off issues again. Runs at start, before any sign-off can be under way.
+ */
+export async function removeUnissuedCertificateFiles(
+  dataSource: DataSource,
+  store: CertificateStore,
+): Promise<string[]> {
+  const certificates = await dataSource
+    .getRepository(Certificate)
+    .find({ select: { filePath: true } });
+  const issued = new Set(certificates.map((c) => c.filePath));
+  const workshops = await dataSource.getRepository(Workshop).find({ select: { id: true } });
+  const unissued = workshops.flatMap((w) => store.filesOf(w.id)).filter((f) => !issued.has(f));
+  for (const relative of unissued) store.remove(relative);
+  return unissued;
 }

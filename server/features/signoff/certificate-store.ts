@@ -39,6 +39,20 @@ export class CertificateStore {
     }
   }
 
+  /** The files in a workshop's certificate folder, relative to the data folder. */
+  filesOf(workshopId: string): string[] {
+    const folder = path.posix.join('certificates', workshopId);
+    try {
+      return fs
+        .readdirSync(this.absolute(folder), { withFileTypes: true })
+        .filter((entry) => entry.isFile())
+        .map((entry) => path.posix.join(folder, entry.name));
+    } catch (error) {
+      if ((error as NodeJS.ErrnoException).code === 'ENOENT') return [];
+      throw error;
+    }
+  }
+
   remove(relative: string): void {
     fs.rmSync(this.absolute(relative), { force: true });
   }
