@@ -25,14 +25,13 @@ function checkItem(raw: unknown, index: number): Checked {
   const parsed = PushItemSchema.safeParse(raw);
   if (parsed.success) return { index, item: parsed.data };
   const [first] = fieldErrors(parsed.error);
-  const id =
+  const named =
     typeof raw === 'object' && raw !== null
-      ? String(
-          (raw as { id?: unknown; event?: { id?: unknown } }).event?.id ??
-            (raw as { id?: unknown }).id ??
-            `#${index}`,
-        )
-      : `#${index}`;
+      ? ((raw as { event?: { id?: unknown } }).event?.id ?? (raw as { id?: unknown }).id)
+      : undefined;
+  // Only a text or number id can name the item back to the device; an object may not even turn
+  // into text (`{"toString":1}` throws), so the item is named by its place in the batch instead.
+  const id = typeof named === 'string' || typeof named === 'number' ? String(named) : `#${index}`;
   return {
     index,
     rejected: { id, status: 'rejected', reason: first.message, field: first.field },
