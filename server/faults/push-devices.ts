@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { readingFor } from '../../tests/helpers/runs.js';
 import type { FaultSession } from './fault-session.js';
 
 /*
@@ -8,26 +9,9 @@ import type { FaultSession } from './fault-session.js';
  */
 
 export type PushRun = { id: string; engine: { id: string }; program: { phases: { id: string }[] } };
-type ReadingItem = ReturnType<typeof readingOn>;
+type ReadingItem = ReturnType<typeof readingFor>;
 type Batch = { items: ReadingItem[]; answered: boolean };
 export type Device = { id: string; batches: Batch[] };
-
-/** A reading in the run's second phase (the first is the workshop's dock run), as a phone logs it. */
-export function readingOn(run: PushRun, at: number, rpm: number) {
-  return {
-    type: 'event' as const,
-    runId: run.id,
-    event: {
-      kind: 'reading' as const,
-      id: randomUUID(),
-      at,
-      engineId: run.engine.id,
-      phaseId: run.program.phases[1].id,
-      rpm,
-      throttle: 'half',
-    },
-  };
-}
 
 /** One device per run, each with `batches` batches of `size` readings, a second apart. */
 export function devicesFor(runs: PushRun[], batches: number, size: number, from: number): Device[] {
@@ -36,7 +20,7 @@ export function devicesFor(runs: PushRun[], batches: number, size: number, from:
     batches: Array.from({ length: batches }, (_, b) => ({
       answered: false,
       items: Array.from({ length: size }, (_, i) =>
-        readingOn(run, from + (b * size + i) * 1000, 2400 + ((b * size + i) % 800)),
+        readingFor(run, from + (b * size + i) * 1000, 2400 + ((b * size + i) % 800)),
       ),
     })),
   }));

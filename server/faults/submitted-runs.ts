@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { openRunFor } from '../../tests/helpers/api.js';
 import type { FaultSession } from './fault-session.js';
-import { readingOn, type PushRun } from './push-devices.js';
+import { readingFor } from '../../tests/helpers/runs.js';
+import type { PushRun } from './push-devices.js';
 
 /*
  * Runs waiting for the workshop, made as people make them: the technician assigns a program,
@@ -24,7 +25,7 @@ const session = (run: PushRun, kind: 'session-start' | 'session-stop', at: numbe
 
 async function submitOuting(skipper: FaultSession, run: PushRun, from: number) {
   const readings = Array.from({ length: 20 }, (_, i) =>
-    readingOn(run, from + (i + 1) * 60_000, 2600 + i * 10),
+    readingFor(run, from + (i + 1) * 60_000, 2600 + i * 10),
   );
   const submit = {
     type: 'run-patch' as const,

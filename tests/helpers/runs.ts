@@ -30,7 +30,7 @@ export async function assignRun(
 
 /** A reading event for a run as a device would make it. */
 export function readingFor(
-  run: RunDetail,
+  run: Pick<RunDetail, 'id'> & { engine: { id: string }; program: { phases: { id: string }[] } },
   at: number,
   rpm: number,
   throttle = 'half',

@@ -9,6 +9,7 @@ import { errorMessage } from '../../../lib/api-client';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
+import { signInEmailProps } from './sign-in-email';
 import { useRequestReset } from '../account-api';
 
 /** Asks for a reset link; the answer is the same whether or not the address has an account. */
@@ -36,12 +37,7 @@ export function ForgotPasswordForm({ email = '' }: { email?: string }) {
         <Alert title="Could not send the link">{errorMessage(request.error)}</Alert>
       )}
       <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="username"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
+        {...signInEmailProps}
         error={formState.errors.email?.message}
         {...register('email')}
       />

@@ -12,6 +12,7 @@ import { serverErrorMessages } from '../../../lib/form-errors';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
+import { signInEmailProps } from './sign-in-email';
 import { useSignIn } from '../api';
 
 interface Refusal {
@@ -54,12 +55,7 @@ export function SignInForm({ onSignedIn }: { onSignedIn: (user: SessionUser) => 
     <form noValidate onSubmit={onSubmit} className="flex flex-col gap-4">
       {refusal && <Alert title={refusal.title}>{refusal.detail}</Alert>}
       <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="username"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
+        {...signInEmailProps}
         error={formState.errors.email?.message}
         {...register('email')}
       />
